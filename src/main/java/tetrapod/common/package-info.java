@@ -1,0 +1,2 @@
+/** Units, typed errors and the progress listener: what every other package may use. */
+package tetrapod.common;

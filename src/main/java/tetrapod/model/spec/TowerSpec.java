@@ -1,0 +1,47 @@
+package tetrapod.model.spec;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+import tetrapod.model.Idealisation;
+
+/**
+ * The user's description of a tower, as read from a model file, with defaults filled in.
+ * Units as in the file: m, kN, kN·m, MPa (user section dimensions in mm, as their keys say).
+ * Either {@code base} and {@code segments} are given (a generated tower) or {@code frame}
+ * (an explicit frame), never both.
+ *
+ * @param connectionAllowance fraction added to the steel mass for bolts, gussets and
+ *                            galvanising (0.10 = 10 %)
+ * @param planBracingLevels   heights (m) of horizontal diaphragms; each must be a panel level
+ * @param userSections        sections defined in the file, by name
+ */
+public record TowerSpec(String name, String description, Idealisation idealisation,
+                        BaseSpec base, List<SegmentSpec> segments, MaterialSpec material,
+                        SupportType supports, double connectionAllowance,
+                        List<Double> planBracingLevels, Map<String, UserSectionSpec> userSections,
+                        ExplicitFrameSpec frame, LoadsSpec loads) {
+
+    public TowerSpec {
+        Objects.requireNonNull(name, "name");
+        description = description == null ? "" : description;
+        segments = segments == null ? List.of() : List.copyOf(segments);
+        planBracingLevels = planBracingLevels == null ? List.of() : List.copyOf(planBracingLevels);
+        userSections = userSections == null ? Map.of() : Map.copyOf(userSections);
+        loads = loads == null ? LoadsSpec.NONE : loads;
+    }
+
+    public boolean isExplicit() {
+        return frame != null;
+    }
+
+    public Optional<ExplicitFrameSpec> explicitFrame() {
+        return Optional.ofNullable(frame);
+    }
+
+    /** Height of the whole generated tower, m (0 for an explicit frame). */
+    public double height() {
+        return segments.stream().mapToDouble(SegmentSpec::height).sum();
+    }
+}
