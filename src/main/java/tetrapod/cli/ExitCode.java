@@ -1,0 +1,13 @@
+package tetrapod.cli;
+
+/** The process exit codes of DESIGN.md. */
+public final class ExitCode {
+    public static final int DONE = 0;
+    /** Something is overstressed and --strict was given. */
+    public static final int OVERSTRESS = 1;
+    public static final int BAD_INPUT = 2;
+    public static final int UNSTABLE = 3;
+    public static final int INTERNAL = 4;
+
+    private ExitCode() { }
+}
