@@ -86,8 +86,10 @@ public final class SectionCatalogue implements SectionLookup {
             throw BadInputException.at(path, "tube '" + name + "' needs outside diameter D > 2t > 0 "
                     + "(CHS<D>x<t>, both in mm)");
         }
-        throw BadInputException.at(path, "unknown section '" + name + "'; did you mean "
-                + String.join(", ", nearest(name, 3)) + "? (or CHS<D>x<t> in mm, or a user section)");
+        List<String> near = nearest(name, 3);
+        throw BadInputException.at(path, "unknown section '" + name + "'"
+                + (near.isEmpty() ? "" : "; did you mean " + String.join(", ", near) + "?")
+                + " (angles as L90x8 or L100x65x7, tubes as CHS<D>x<t> in mm, or a user section)");
     }
 
     @Override

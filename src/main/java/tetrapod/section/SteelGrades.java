@@ -89,9 +89,14 @@ public final class SteelGrades {
 
     /** The grade called {@code name}, or a bad-input error at {@code path} with the nearest names. */
     public static Material grade(String name, String path) throws BadInputException {
-        return find(name).orElseThrow(() -> BadInputException.at(path, "unknown steel grade '" + name
-                + "'; did you mean " + String.join(", ", Suggestions.nearest(name, names(), 3))
-                + "? (or give E, G, fy, fu in MPa)"));
+        Optional<Material> found = find(name);
+        if (found.isPresent()) {
+            return found.get();
+        }
+        List<String> near = Suggestions.nearest(name, names(), 3);
+        throw BadInputException.at(path, "unknown steel grade '" + name + "'"
+                + (near.isEmpty() ? "" : "; did you mean " + String.join(", ", near) + "?")
+                + " (or give E, G, fy, fu in MPa)");
     }
 
     /** The material a model file asks for, located at {@code material}. */

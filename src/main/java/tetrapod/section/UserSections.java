@@ -1,10 +1,10 @@
 package tetrapod.section;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.TreeMap;
 import tetrapod.common.BadInputException;
 import tetrapod.common.Problem;
 import tetrapod.common.Units;
@@ -29,8 +29,11 @@ final class UserSections {
         List<Problem> problems = new ArrayList<>();
         List<Section> sections = new ArrayList<>();
         Map<String, String> firstNameByKey = new HashMap<>();
-        for (Map.Entry<String, ? extends UserSectionSpec> e : new TreeMap<>(specs).entrySet()) {
-            String name = e.getKey().trim();
+        List<String> keys = new ArrayList<>(specs.keySet());
+        keys.sort(Comparator.nullsFirst(Comparator.naturalOrder()));
+        for (String key : keys) {
+            UserSectionSpec spec = specs.get(key);
+            String name = key == null ? "" : key.trim();
             String path = ROOT + "." + name;
             if (name.isEmpty()) {
                 problems.add(Problem.at(ROOT, "a user section needs a non-blank name"));
@@ -42,12 +45,12 @@ final class UserSections {
                         + "' (names ignore case and spaces, and L90x90x8 is L90x8)"));
                 continue;
             }
-            if (e.getValue() == null) {
+            if (spec == null) {
                 problems.add(Problem.at(path, "has no definition"));
                 continue;
             }
             List<Problem> own = new ArrayList<>();
-            Section section = section(name, path, e.getValue(), own);
+            Section section = section(name, path, spec, own);
             problems.addAll(own);
             if (own.isEmpty()) {
                 sections.add(section);
