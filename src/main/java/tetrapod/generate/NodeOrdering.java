@@ -9,7 +9,8 @@ import tetrapod.model.Vec3;
 /**
  * Numbers the nodes of a generated tower bottom-up so that the stiffness matrix is banded: by
  * height, then by angle about the z axis measured counter-clockwise from the direction of leg 0
- * at that height (−135° for a square tower), then by distance from the axis. Heights closer than
+ * at that height (−135° for a square tower; a node on the axis last), then by distance from the
+ * axis. Heights closer than
  * {@link NodeRegistry#TOLERANCE} are one level and are made exactly equal.
  */
 final class NodeOrdering {
@@ -69,7 +70,7 @@ final class NodeOrdering {
     private static long angleKey(Vec3 p, LevelPlan plan) {
         double radius = Math.hypot(p.x(), p.y());
         if (radius < NodeRegistry.TOLERANCE) {
-            return 0;
+            return Math.round(TWO_PI / ANGLE_QUANTUM) + 1;
         }
         double leg0 = Math.atan2(-plan.widthYAt(p.z()), -plan.widthXAt(p.z()));
         double angle = Math.atan2(p.y(), p.x()) - leg0 + ANGLE_QUANTUM;

@@ -54,7 +54,7 @@
  *     Nodes are numbered 1..n bottom-up so the stiffness matrix is banded: by z (heights within
  *     1e-6 m are one level, made exactly equal), then by angle about the z axis counter-clockwise
  *     from the direction of leg 0 at that height (−135° in a square tower; a node on the axis
- *     first), then by distance from the axis. Members are numbered 1..m by (lower node id, upper
+ *     last), then by distance from the axis. Members are numbered 1..m by (lower node id, upper
  *     node id), with i the lower and j the upper id. Every node is connected.</li>
  * <li><b>Supports.</b> The four leg nodes at z = 0, pinned (translations held) or fixed (all six
  *     degrees of freedom held) as the spec says. A plan bracing centre node at z = 0 is not
