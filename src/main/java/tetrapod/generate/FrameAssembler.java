@@ -27,10 +27,9 @@ final class FrameAssembler {
      * @param frame   the numbered frame
      * @param nodeIds for each registry index, its node id in {@code frame}
      */
-    record Assembled(Frame frame, int[] nodeIds) {
-        @Override
-        public int[] nodeIds() {
-            return nodeIds.clone();
+    record Assembled(Frame frame, List<Integer> nodeIds) {
+        Assembled {
+            nodeIds = List.copyOf(nodeIds);
         }
     }
 
@@ -41,10 +40,7 @@ final class FrameAssembler {
     static Assembled assemble(String name, Idealisation idealisation, Material material, Restraint baseRestraint,
                               LatticeBuilder.Lattice lattice, List<MemberSplitter.Piece> pieces, LevelPlan plan) {
         NodeOrdering.Ordering ordering = NodeOrdering.order(lattice.registry().points(), plan);
-        int[] nodeIds = ordering.newIndexOf();
-        for (int k = 0; k < nodeIds.length; k++) {
-            nodeIds[k]++;
-        }
+        List<Integer> nodeIds = ordering.newIndexOf().stream().map(index -> index + 1).toList();
         List<Node> nodes = new ArrayList<>(ordering.positions().size());
         for (Vec3 p : ordering.positions()) {
             nodes.add(new Node(nodes.size() + 1, p.x(), p.y(), p.z()));
@@ -52,8 +48,8 @@ final class FrameAssembler {
         List<Kept> kept = new ArrayList<>();
         Set<Long> seen = new HashSet<>();
         for (MemberSplitter.Piece piece : pieces) {
-            int a = nodeIds[piece.a()];
-            int b = nodeIds[piece.b()];
+            int a = nodeIds.get(piece.a());
+            int b = nodeIds.get(piece.b());
             if (a != b && seen.add(pairKey(Math.min(a, b), Math.max(a, b)))) {
                 kept.add(new Kept(Math.min(a, b), Math.max(a, b), piece.source()));
             }
@@ -64,7 +60,7 @@ final class FrameAssembler {
             members.add(member(members.size() + 1, k, nodes, idealisation));
         }
         List<Support> supports = new ArrayList<>();
-        lattice.levelLegNodes().get(0).stream().map(index -> nodeIds[index]).sorted()
+        lattice.levelLegNodes().get(0).stream().map(nodeIds::get).sorted()
                 .forEach(id -> supports.add(new Support(id, baseRestraint)));
         if (!Connectivity.isConnected(nodes, members)) {
             throw new IllegalStateException("generated lattice is not connected");

@@ -22,15 +22,10 @@ final class NodeOrdering {
      * @param positions   the nodes in their new order (z made exact per level)
      * @param newIndexOf  for each original index, its 0-based position in {@code positions}
      */
-    record Ordering(List<Vec3> positions, int[] newIndexOf) {
+    record Ordering(List<Vec3> positions, List<Integer> newIndexOf) {
         Ordering {
             positions = List.copyOf(positions);
-            newIndexOf = newIndexOf.clone();
-        }
-
-        @Override
-        public int[] newIndexOf() {
-            return newIndexOf.clone();
+            newIndexOf = List.copyOf(newIndexOf);
         }
     }
 
@@ -58,13 +53,13 @@ final class NodeOrdering {
         }
         keys.sort(Comparator.comparingInt(Key::level).thenComparingLong(Key::angle)
                 .thenComparingDouble(Key::radius).thenComparingInt(Key::original));
-        int[] newIndexOf = new int[points.size()];
+        Integer[] newIndexOf = new Integer[points.size()];
         List<Vec3> positions = new ArrayList<>(points.size());
         for (Key key : keys) {
             newIndexOf[key.original()] = positions.size();
             positions.add(key.position());
         }
-        return new Ordering(positions, newIndexOf);
+        return new Ordering(positions, Arrays.asList(newIndexOf));
     }
 
     private static long angleKey(Vec3 p, LevelPlan plan) {

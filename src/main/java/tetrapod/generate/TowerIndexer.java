@@ -19,11 +19,11 @@ final class TowerIndexer {
 
     record Index(List<PanelLevel> levels, List<Panel> panels) { }
 
-    static Index index(Frame frame, LevelPlan plan, LatticeBuilder.Lattice lattice, int[] nodeIds) {
+    static Index index(Frame frame, LevelPlan plan, LatticeBuilder.Lattice lattice, List<Integer> nodeIds) {
         Set<Integer> planLevels = new HashSet<>(plan.planLevels());
         List<PanelLevel> levels = new ArrayList<>();
         for (LevelPlan.Level level : plan.levels()) {
-            List<Integer> legNodes = lattice.levelLegNodes().get(level.index()).stream().map(k -> nodeIds[k]).toList();
+            List<Integer> legNodes = lattice.levelLegNodes().get(level.index()).stream().map(nodeIds::get).toList();
             levels.add(new PanelLevel(level.index(), frame.nodes().get(legNodes.get(0) - 1).z(), level.widthX(),
                     level.widthY(), legNodes, plan.horizontalOwner(level).isPresent(), planLevels.contains(level.index())));
         }

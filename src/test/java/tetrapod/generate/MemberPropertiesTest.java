@@ -31,6 +31,12 @@ class MemberPropertiesTest {
     }
 
     @Test
+    void generationIsDeterministic() throws Exception {
+        TowerSpec spec = ThreeSegments.spec();
+        assertEquals(Specs.generate(spec), Specs.generate(spec));
+    }
+
+    @Test
     void trussMembersAreAllAxial() throws Exception {
         assertTrue(prismatic(Idealisation.TRUSS).members().stream().allMatch(Member::axialOnly));
     }
