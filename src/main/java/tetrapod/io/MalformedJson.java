@@ -36,7 +36,9 @@ final class MalformedJson {
             Matcher c = Pattern.compile("Unexpected close marker '(.)'").matcher(text);
             return c.find() ? "unexpected '" + c.group(1) + "': it closes nothing that is open" : "unbalanced brackets";
         }
-        text = CHARACTER.matcher(text).replaceAll(m -> "'" + Matcher.quoteReplacement(m.group(1)) + "'");
+        text = CHARACTER.matcher(text).replaceAll(m -> Matcher.quoteReplacement(m.group(1).equals("'")
+                ? "\"'\" (a single quote; JSON needs double quotes)"
+                : "'" + m.group(1) + "'"));
         text = CONTROL.matcher(text).replaceAll("(control character $1)");
         text = VALUE_LIST.matcher(text).replaceAll("(a string, number, array, object, true, false or null)");
         text = CODE.matcher(text).replaceAll("");
