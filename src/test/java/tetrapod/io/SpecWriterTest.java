@@ -43,6 +43,15 @@ class SpecWriterTest {
                 Path.of("src/test/resources/good-specs/explicit-frame.json")));
     }
 
+    /** {@link #everyModel()} for callers that cannot declare IOException. */
+    static Stream<Path> everyModelUnchecked() {
+        try {
+            return everyModel();
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
     @ParameterizedTest(name = "{0}")
     @MethodSource("everyModel")
     void readWriteReadGivesAnEqualSpec(Path file) throws BadInputException {
