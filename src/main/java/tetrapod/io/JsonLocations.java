@@ -30,7 +30,7 @@ final class JsonLocations {
     private static final JsonFactory FACTORY = JsonFactory.builder()
             .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
             .build();
-    private static final JsonNodeFactory NODES = JsonNodeFactory.withExactBigDecimals(false);
+    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
     private final JsonNode root;
     private final Map<String, Integer> lines;
