@@ -1,0 +1,37 @@
+package tetrapod.io;
+
+import java.util.Arrays;
+import java.util.List;
+import java.util.function.Function;
+import tetrapod.model.Idealisation;
+import tetrapod.model.Role;
+import tetrapod.model.spec.Bracing;
+import tetrapod.model.spec.Horizontals;
+import tetrapod.model.spec.SupportType;
+
+/** The closed lists of names the model file accepts, in the order the messages list them. */
+record Choices<E>(String what, List<String> names, List<E> values) {
+
+    static final Choices<Idealisation> IDEALISATION = of("idealisation", Idealisation.values(), Idealisation::jsonName);
+    static final Choices<Bracing> BRACING = of("bracing", Bracing.values(), Bracing::jsonName);
+    static final Choices<Horizontals> HORIZONTALS = of("horizontals", Horizontals.values(), Horizontals::jsonName);
+    static final Choices<SupportType> SUPPORT_TYPE = of("support type", SupportType.values(), SupportType::jsonName);
+    static final Choices<Role> ROLE = of("role", Role.values(), Role::jsonName);
+
+    Choices {
+        names = List.copyOf(names);
+        values = List.copyOf(values);
+    }
+
+    private static <E> Choices<E> of(String what, E[] values, Function<E, String> name) {
+        return new Choices<>(what, Arrays.stream(values).map(name).toList(), List.of(values));
+    }
+
+    E required(Fields fields, String key) {
+        return fields.requiredChoice(key, what, names, values);
+    }
+
+    E optional(Fields fields, String key, E byDefault) {
+        return fields.optionalChoice(key, what, names, values, byDefault);
+    }
+}

@@ -1,0 +1,257 @@
+package tetrapod.io;
+
+import com.fasterxml.jackson.core.io.JsonStringEncoder;
+import java.io.IOException;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.lang.reflect.Array;
+import java.math.BigDecimal;
+import java.math.BigInteger;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.Comparator;
+import java.util.EnumMap;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.SortedMap;
+import java.util.SortedSet;
+
+/**
+ * Writes plain Java values as pretty, deterministic JSON: the same value always gives the same
+ * bytes. Other packages build their output from these values, so that none of them needs a JSON
+ * library.
+ *
+ * <p>Accepted values: {@code null}, {@link String}, {@link Boolean}, {@link Number} (finite only:
+ * a NaN or infinity is refused, never written), {@link Map} (keys written with
+ * {@code toString()}), {@link List}, arrays (primitive or object). Maps that have an order of
+ * their own ({@link LinkedHashMap}, {@link SortedMap}, {@link EnumMap}) keep it; any other map is
+ * written with its keys sorted, so that hash order never reaches a file. Likewise sets other than
+ * {@link SortedSet} and {@link LinkedHashSet} are refused.
+ *
+ * <p>Layout: two-space indentation, "\n" line ends, a final newline. An object or array whose
+ * members are all scalars or arrays of scalars stays on one line when that line is short.
+ */
+public final class JsonOutput {
+
+    /** Longest container written on one line, in characters. */
+    private static final int INLINE_WIDTH = 100;
+    private static final String INDENT = "  ";
+
+    private JsonOutput() { }
+
+    /** The value as JSON text, ending with a newline. */
+    public static String toJson(Object value) {
+        StringWriter out = new StringWriter();
+        try {
+            write(out, value);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return out.toString();
+    }
+
+    /** Writes the value as JSON text, ending with a newline. */
+    public static void write(Writer out, Object value) throws IOException {
+        new Printer(out).value(value, "$", 0);
+        out.write('\n');
+        out.flush();
+    }
+
+    /** Replaces {@code file} atomically with the value as JSON (UTF-8). */
+    public static void write(Path file, Object value) throws IOException {
+        AtomicFiles.writeText(file, out -> write(out, value));
+    }
+
+    /** Walks the value once, writing as it goes. */
+    private record Printer(Writer out) {
+
+        void value(Object value, String path, int depth) throws IOException {
+            Object v = normalise(value, path);
+            if (v instanceof List<?> list) {
+                list(list, path, depth);
+            } else if (v instanceof Map<?, ?> map) {
+                object(map, path, depth);
+            } else {
+                out.write(scalar(v, path));
+            }
+        }
+
+        private void list(List<?> list, String path, int depth) throws IOException {
+            String inline = inline(list, path);
+            if (inline != null) {
+                out.write(inline);
+                return;
+            }
+            out.write("[\n");
+            for (int k = 0; k < list.size(); k++) {
+                indent(depth + 1);
+                value(list.get(k), path + "[" + k + "]", depth + 1);
+                out.write(k + 1 < list.size() ? ",\n" : "\n");
+            }
+            indent(depth);
+            out.write("]");
+        }
+
+        private void object(Map<?, ?> map, String path, int depth) throws IOException {
+            String inline = depth == 0 ? null : inline(map, path);
+            if (inline != null) {
+                out.write(inline);
+                return;
+            }
+            if (map.isEmpty()) {
+                out.write("{}");
+                return;
+            }
+            out.write("{\n");
+            int k = 0;
+            for (Map.Entry<?, ?> e : map.entrySet()) {
+                indent(depth + 1);
+                out.write(quote(String.valueOf(e.getKey())));
+                out.write(": ");
+                value(e.getValue(), path + "." + e.getKey(), depth + 1);
+                out.write(++k < map.size() ? ",\n" : "\n");
+            }
+            indent(depth);
+            out.write("}");
+        }
+
+        private void indent(int depth) throws IOException {
+            for (int k = 0; k < depth; k++) {
+                out.write(INDENT);
+            }
+        }
+    }
+
+    /** The one-line form when every member is a scalar or an array of scalars and it is short; else null. */
+    private static String inline(Object container, String path) {
+        StringBuilder line = new StringBuilder();
+        if (!appendInline(line, container, path, true) || line.length() > INLINE_WIDTH) {
+            return null;
+        }
+        return line.toString();
+    }
+
+    private static boolean appendInline(StringBuilder line, Object value, String path, boolean outer) {
+        Object v = normalise(value, path);
+        if (v instanceof List<?> list) {
+            line.append('[');
+            for (int k = 0; k < list.size(); k++) {
+                Object item = normalise(list.get(k), path);
+                if (item instanceof Map<?, ?> || (item instanceof List<?> && !outer)) {
+                    return false;
+                }
+                if (k > 0) {
+                    line.append(", ");
+                }
+                if (!appendInline(line, item, path + "[" + k + "]", false) || line.length() > INLINE_WIDTH) {
+                    return false;
+                }
+            }
+            line.append(']');
+            return true;
+        }
+        if (v instanceof Map<?, ?> map) {
+            if (!outer) {
+                return false;
+            }
+            if (map.isEmpty()) {
+                line.append("{}");
+                return true;
+            }
+            line.append("{ ");
+            int k = 0;
+            for (Map.Entry<?, ?> e : map.entrySet()) {
+                if (k++ > 0) {
+                    line.append(", ");
+                }
+                line.append(quote(String.valueOf(e.getKey()))).append(": ");
+                Object item = normalise(e.getValue(), path);
+                if (item instanceof Map<?, ?>) {
+                    return false;
+                }
+                if (!appendInline(line, item, path + "." + e.getKey(), item instanceof List<?>)
+                        || line.length() > INLINE_WIDTH) {
+                    return false;
+                }
+            }
+            line.append(" }");
+            return true;
+        }
+        line.append(scalar(v, path));
+        return true;
+    }
+
+    /** Arrays and collections become lists, unordered maps sorted maps; anything else unchanged. */
+    private static Object normalise(Object value, String path) {
+        if (value == null) {
+            return null;
+        }
+        if (value.getClass().isArray()) {
+            int n = Array.getLength(value);
+            List<Object> list = new ArrayList<>(n);
+            for (int k = 0; k < n; k++) {
+                list.add(Array.get(value, k));
+            }
+            return list;
+        }
+        if (value instanceof List<?>) {
+            return value;
+        }
+        if (value instanceof Collection<?> c) {
+            if (c instanceof SortedSet<?> || c instanceof LinkedHashSet<?>) {
+                return List.copyOf(c);
+            }
+            throw new IllegalArgumentException(path + ": a collection without a defined order ("
+                    + value.getClass().getSimpleName() + ") would make the output depend on hash order");
+        }
+        if (value instanceof Map<?, ?> map) {
+            if (map instanceof LinkedHashMap<?, ?> || map instanceof SortedMap<?, ?> || map instanceof EnumMap<?, ?>) {
+                return map;
+            }
+            List<Map.Entry<?, ?>> entries = new ArrayList<>(map.entrySet());
+            entries.sort(Comparator.comparing(e -> String.valueOf(e.getKey())));
+            Map<Object, Object> sorted = new LinkedHashMap<>();
+            for (Map.Entry<?, ?> e : entries) {
+                sorted.put(e.getKey(), e.getValue());
+            }
+            return sorted;
+        }
+        return value;
+    }
+
+    private static String scalar(Object v, String path) {
+        if (v == null) {
+            return "null";
+        }
+        if (v instanceof String s) {
+            return quote(s);
+        }
+        if (v instanceof Boolean b) {
+            return b.toString();
+        }
+        if (v instanceof Double || v instanceof Float) {
+            double d = ((Number) v).doubleValue();
+            if (!Double.isFinite(d)) {
+                throw new IllegalArgumentException(path + ": " + d + " cannot be written to JSON");
+            }
+            return v instanceof Float f ? Float.toString(f) : Double.toString(d);
+        }
+        if (v instanceof BigDecimal b) {
+            return b.toString();
+        }
+        if (v instanceof Integer || v instanceof Long || v instanceof Short || v instanceof Byte
+                || v instanceof BigInteger) {
+            return v.toString();
+        }
+        throw new IllegalArgumentException(path + ": cannot write a " + v.getClass().getSimpleName()
+                + " as JSON; convert it to a map, list, text, number or boolean");
+    }
+
+    private static String quote(String s) {
+        return "\"" + new String(JsonStringEncoder.getInstance().quoteAsString(s)) + "\"";
+    }
+}

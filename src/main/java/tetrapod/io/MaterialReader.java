@@ -1,0 +1,40 @@
+package tetrapod.io;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.util.List;
+import tetrapod.model.spec.MaterialSpec;
+
+/** Reads {@code material}: a grade name, or a material given in full (MPa, kg/m³). */
+final class MaterialReader {
+
+    static final String DEFAULT_GRADE = "S355";
+    static final List<String> KEYS = List.of("name", "E", "G", "fy", "fu", "density");
+
+    private MaterialReader() { }
+
+    /** The material, or null (reported). */
+    static MaterialSpec read(JsonNode node, String path, Problems problems) {
+        if (node.isTextual()) {
+            String grade = Values.text(node, path, problems);
+            return grade == null ? null : MaterialSpec.grade(grade);
+        }
+        if (!node.isObject()) {
+            problems.add(path, "must be a grade name such as \"" + DEFAULT_GRADE
+                    + "\" or an object { name, E, G, fy, fu, density }, was " + Numbers.shown(node));
+            return null;
+        }
+        Fields f = Fields.of(node, path, problems);
+        int before = problems.count();
+        f.allowOnly(KEYS);
+        String name = f.requiredText("name");
+        double e = f.requiredNumber("E", Bound.POSITIVE, "MPa");
+        double g = f.requiredNumber("G", Bound.POSITIVE, "MPa");
+        double fy = f.requiredNumber("fy", Bound.POSITIVE, "MPa");
+        double fu = f.requiredNumber("fu", Bound.POSITIVE, "MPa");
+        double density = f.requiredNumber("density", Bound.POSITIVE, "kg/m³");
+        if (fu < fy) {
+            problems.add(f.path("fu"), "must not be less than fy (" + Numbers.format(fy) + " MPa), was " + Numbers.format(fu));
+        }
+        return problems.count() == before ? new MaterialSpec(name, e, g, fy, fu, density) : null;
+    }
+}

@@ -1,0 +1,138 @@
+package tetrapod.io;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.function.IntPredicate;
+import tetrapod.common.BadInputException;
+import tetrapod.common.Problem;
+import tetrapod.model.Idealisation;
+import tetrapod.model.SectionLookup;
+import tetrapod.model.spec.BaseSpec;
+import tetrapod.model.spec.ExplicitFrameSpec;
+import tetrapod.model.spec.LoadsSpec;
+import tetrapod.model.spec.MaterialSpec;
+import tetrapod.model.spec.SegmentSpec;
+import tetrapod.model.spec.SupportType;
+import tetrapod.model.spec.TowerSpec;
+import tetrapod.model.spec.UserSectionSpec;
+
+/**
+ * Reads a model file into a {@link TowerSpec}, defaults filled in, or fails with a
+ * {@link BadInputException} listing every problem found, each with its JSON path and line.
+ *
+ * <p>Section names: a name is accepted when the file defines it under {@code userSections} or
+ * {@code catalogue} finds it. Pass the plain catalogue, not one that already includes this
+ * file's user sections: a user section may not reuse a catalogue name (one name, one section).
+ */
+public final class SpecReader {
+
+    static final List<String> TOP_KEYS = List.of("name", "description", "idealisation", "base", "segments",
+            "material", "supports", "connectionAllowance", "planBracingLevels", "userSections", "frame", "loads");
+    static final double DEFAULT_CONNECTION_ALLOWANCE = 0.10;
+
+    private SpecReader() { }
+
+    /** Reads the model file at {@code file} (UTF-8). A file that cannot be read is bad input too. */
+    public static TowerSpec read(Path file, SectionLookup catalogue) throws BadInputException {
+        String text;
+        try {
+            text = Files.readString(file, StandardCharsets.UTF_8);
+        } catch (NoSuchFileException e) {
+            throw new BadInputException(Problem.at("$", "cannot read " + file + ": no such file"));
+        } catch (CharacterCodingException e) {
+            throw new BadInputException(Problem.at("$", "cannot read " + file + ": it is not UTF-8 text"));
+        } catch (IOException e) {
+            throw new BadInputException(Problem.at("$", "cannot read " + file + ": " + e.getMessage()));
+        }
+        return read(text, catalogue);
+    }
+
+    /** Reads a model from its JSON text. */
+    public static TowerSpec read(String json, SectionLookup catalogue) throws BadInputException {
+        JsonLocations parsed = JsonLocations.parse(json);
+        Problems problems = new Problems(parsed);
+        parsed.duplicateKeys().forEach(problems::add);
+        Fields root = Fields.of(parsed.root(), JsonPaths.ROOT, problems);
+        if (root == null) {
+            problems.throwIfAny();
+        }
+        TowerSpec spec = new SpecReader.Pass(root, problems, catalogue).read();
+        problems.throwIfAny();
+        return spec;
+    }
+
+    /** One reading of one file. */
+    private record Pass(Fields root, Problems problems, SectionLookup catalogue) {
+
+        TowerSpec read() {
+            root.allowOnly(TOP_KEYS);
+            String name = root.requiredText("name");
+            String description = root.optionalText("description", "");
+            Idealisation idealisation = Choices.IDEALISATION.optional(root, "idealisation", Idealisation.TRUSS);
+            MaterialSpec material = root.has("material")
+                    ? MaterialReader.read(root.get("material"), root.path("material"), problems)
+                    : MaterialSpec.grade(MaterialReader.DEFAULT_GRADE);
+            double allowance = root.optionalNumber("connectionAllowance", Bound.FRACTION, "", DEFAULT_CONNECTION_ALLOWANCE);
+
+            Fields userFields = root.object("userSections", false);
+            Map<String, UserSectionSpec> userSections = userFields == null
+                    ? Map.of()
+                    : new UserSectionReader(problems, catalogue).read(userFields);
+            List<String> userNames = userFields == null ? List.of() : userFields.keys();
+            SectionNames sectionNames = new SectionNames(userNames, catalogue);
+
+            boolean generated = root.has("base") || root.has("segments");
+            boolean explicit = root.has("frame");
+            BaseSpec base = null;
+            List<SegmentSpec> segments = List.of();
+            ExplicitFrameSpec frame = null;
+            SupportType supports = SupportType.PINNED;
+            List<Double> planLevels = List.of();
+            IntPredicate nodeExists = null;
+            if (generated && explicit) {
+                problems.add(root.path("frame"), "give either base and segments (a generated tower) or frame"
+                        + " (an explicit frame), not both");
+            } else if (!generated && !explicit) {
+                problems.add(JsonPaths.ROOT, "the model needs either base and segments (a generated tower)"
+                        + " or frame (an explicit frame)");
+            } else if (generated) {
+                SegmentReader segmentReader = new SegmentReader(problems, sectionNames);
+                Fields baseFields = root.object("base", true);
+                base = baseFields == null ? null : segmentReader.base(baseFields);
+                JsonNode segmentArray = root.array("segments", true);
+                segments = segmentArray == null ? null : segmentReader.segments(segmentArray, root.path("segments"), base);
+                supports = Choices.SUPPORT_TYPE.optional(root, "supports", SupportType.PINNED);
+                planLevels = root.has("planBracingLevels")
+                        ? Values.numbers(root.get("planBracingLevels"), root.path("planBracingLevels"),
+                                Bound.NON_NEGATIVE, "m", problems)
+                        : List.of();
+            } else {
+                for (String key : List.of("supports", "planBracingLevels")) {
+                    if (root.has(key)) {
+                        problems.add(root.path(key), "applies only to a generated tower (base and segments);"
+                                + " an explicit frame gives its supports and members in frame");
+                    }
+                }
+                FrameReader frameReader = new FrameReader(problems, sectionNames);
+                Fields frameFields = root.object("frame", true);
+                frame = frameFields == null ? null : frameReader.read(frameFields);
+                nodeExists = frameFields == null ? null : frameReader::nodeExists;
+            }
+            Fields loadFields = root.object("loads", false);
+            LoadsSpec loads = loadFields == null ? LoadsSpec.NONE : new LoadsReader(problems).read(loadFields, nodeExists);
+
+            if (problems.count() > 0) {
+                return null;
+            }
+            return new TowerSpec(name, description, idealisation, base, segments, material, supports, allowance,
+                    planLevels, userSections, frame, loads);
+        }
+    }
+}

@@ -1,0 +1,201 @@
+package tetrapod.io;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import tetrapod.model.Restraint;
+import tetrapod.model.Role;
+import tetrapod.model.spec.ExplicitFrameSpec;
+import tetrapod.model.spec.ExplicitFrameSpec.MemberSpec;
+import tetrapod.model.spec.ExplicitFrameSpec.NodeSpec;
+import tetrapod.model.spec.ExplicitFrameSpec.SupportSpec;
+import tetrapod.model.spec.LoadsSpec.NodalLoadSpec;
+import tetrapod.model.spec.MaterialSpec;
+import tetrapod.model.spec.SegmentSpec;
+import tetrapod.model.spec.TowerSpec;
+import tetrapod.model.spec.UserSectionSpec;
+
+/**
+ * Writes a {@link TowerSpec} in the model-file format, so that reading the text back gives an
+ * equal spec. Keys come in the format's order; defaults are written out (description,
+ * idealisation, material, supports, connection allowance, plan levels, top widths, horizontals,
+ * crossingConnected, redundants, member role and continuity). What is absent rather than
+ * defaulted is left out: equal panels (no panelHeights), no orientation, no mass_kg_per_m, no
+ * user sections, no loads. An explicit frame has no base, segments, supports or plan levels.
+ */
+public final class SpecWriter {
+
+    private SpecWriter() { }
+
+    /** The spec as pretty JSON text, ending with a newline. */
+    public static String write(TowerSpec spec) {
+        return JsonOutput.toJson(toMap(spec));
+    }
+
+    /** Replaces {@code file} atomically with the spec as pretty JSON. */
+    public static void write(Path file, TowerSpec spec) throws IOException {
+        JsonOutput.write(file, toMap(spec));
+    }
+
+    /**
+     * The spec as ordered plain values (maps, lists, text, numbers, booleans) for
+     * {@link JsonOutput}, e.g. to embed it in a results file.
+     */
+    public static Map<String, Object> toMap(TowerSpec spec) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("name", spec.name());
+        m.put("description", spec.description());
+        m.put("idealisation", spec.idealisation().jsonName());
+        if (!spec.isExplicit()) {
+            m.put("base", ordered("widthX", spec.base().widthX(), "widthY", spec.base().widthY()));
+            m.put("segments", spec.segments().stream().map(SpecWriter::segment).toList());
+        }
+        m.put("material", material(spec.material()));
+        if (!spec.isExplicit()) {
+            m.put("supports", spec.supports().jsonName());
+        }
+        m.put("connectionAllowance", spec.connectionAllowance());
+        if (!spec.isExplicit()) {
+            m.put("planBracingLevels", spec.planBracingLevels());
+        }
+        if (!spec.userSections().isEmpty()) {
+            Map<String, Object> sections = new TreeMap<>();
+            spec.userSections().forEach((name, section) -> sections.put(name, userSection(section)));
+            m.put("userSections", sections);
+        }
+        spec.explicitFrame().ifPresent(frame -> m.put("frame", frame(frame)));
+        if (!spec.loads().nodal().isEmpty()) {
+            m.put("loads", Map.of("nodal", spec.loads().nodal().stream().map(SpecWriter::nodalLoad).toList()));
+        }
+        return m;
+    }
+
+    private static Map<String, Object> segment(SegmentSpec s) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("height", s.height());
+        m.put("topWidthX", s.topWidthX());
+        m.put("topWidthY", s.topWidthY());
+        m.put("panels", s.panels());
+        if (!s.panelHeights().isEmpty()) {
+            m.put("panelHeights", s.panelHeights());
+        }
+        m.put("bracing", s.bracing().jsonName());
+        m.put("horizontals", s.horizontals().jsonName());
+        m.put("crossingConnected", s.crossingConnected());
+        m.put("redundants", s.redundants());
+        Map<String, Object> sections = new LinkedHashMap<>();
+        for (Role role : Role.values()) {
+            if (s.sections().containsKey(role)) {
+                sections.put(role.jsonName(), s.sections().get(role));
+            }
+        }
+        m.put("sections", sections);
+        return m;
+    }
+
+    private static Object material(MaterialSpec material) {
+        if (material.isGrade()) {
+            return material.name();
+        }
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("name", material.name());
+        m.put("E", material.e());
+        m.put("G", material.g());
+        m.put("fy", material.fy());
+        m.put("fu", material.fu());
+        m.put("density", material.density());
+        return m;
+    }
+
+    private static Map<String, Object> userSection(UserSectionSpec section) {
+        Map<String, Object> body = new LinkedHashMap<>();
+        String kind;
+        if (section instanceof UserSectionSpec.Angle a) {
+            kind = "angle";
+            body.put("legA_mm", a.legA());
+            body.put("legB_mm", a.legB());
+            body.put("t_mm", a.t());
+            body.put("r1_mm", a.r1());
+            body.put("r2_mm", a.r2());
+        } else if (section instanceof UserSectionSpec.Tube t) {
+            kind = "tube";
+            body.put("d_mm", t.d());
+            body.put("t_mm", t.t());
+        } else {
+            UserSectionSpec.Properties p = (UserSectionSpec.Properties) section;
+            kind = "properties";
+            body.put("A_cm2", p.area());
+            body.put("Iy_cm4", p.iy());
+            body.put("Iz_cm4", p.iz());
+            body.put("Iv_cm4", p.iv());
+            body.put("J_cm4", p.torsion());
+            body.put("width_mm", p.width());
+            body.put("flatSided", p.flatSided());
+            if (!Double.isNaN(p.massPerMetre())) {
+                body.put("mass_kg_per_m", p.massPerMetre());
+            }
+        }
+        return ordered(kind, body);
+    }
+
+    private static Map<String, Object> frame(ExplicitFrameSpec frame) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("nodes", frame.nodes().stream().map(SpecWriter::node).toList());
+        m.put("members", frame.members().stream().map(SpecWriter::member).toList());
+        m.put("supports", frame.supports().stream().map(SpecWriter::support).toList());
+        return m;
+    }
+
+    private static Map<String, Object> node(NodeSpec n) {
+        return ordered("id", n.id(), "x", n.x(), "y", n.y(), "z", n.z());
+    }
+
+    private static Map<String, Object> member(MemberSpec mem) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("id", mem.id());
+        m.put("i", mem.i());
+        m.put("j", mem.j());
+        m.put("section", mem.section());
+        m.put("role", mem.role().jsonName());
+        m.put("continuous", mem.continuous());
+        if (mem.orientation() != null) {
+            m.put("orientation", mem.orientation());
+        }
+        return m;
+    }
+
+    private static Map<String, Object> support(SupportSpec s) {
+        if (s.restraint().equals(Restraint.PINNED)) {
+            return ordered("node", s.node(), "type", "pinned");
+        }
+        if (s.restraint().equals(Restraint.FIXED)) {
+            return ordered("node", s.node(), "type", "fixed");
+        }
+        List<Integer> flags = new ArrayList<>();
+        for (int dof = 0; dof < Restraint.DOF_NAMES.size(); dof++) {
+            flags.add(s.restraint().holds(dof) ? 1 : 0);
+        }
+        return ordered("node", s.node(), "restraint", flags);
+    }
+
+    private static Map<String, Object> nodalLoad(NodalLoadSpec load) {
+        boolean moments = load.mx() != 0 || load.my() != 0 || load.mz() != 0;
+        List<Double> f = moments
+                ? List.of(load.fx(), load.fy(), load.fz(), load.mx(), load.my(), load.mz())
+                : List.of(load.fx(), load.fy(), load.fz());
+        return ordered("node", load.node(), "F", f);
+    }
+
+    /** A map keeping the order of its alternating key, value arguments. */
+    private static Map<String, Object> ordered(Object... keysAndValues) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        for (int k = 0; k < keysAndValues.length; k += 2) {
+            m.put((String) keysAndValues[k], keysAndValues[k + 1]);
+        }
+        return m;
+    }
+}

@@ -1,0 +1,108 @@
+package tetrapod.io;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import org.junit.jupiter.api.Test;
+
+class JsonOutputTest {
+
+    @Test
+    void layoutIsPrettyAndExact() {
+        Map<String, Object> root = new LinkedHashMap<>();
+        root.put("format", "test/1");
+        root.put("count", 3);
+        root.put("values", new double[] {1.5, -2.0, 0.25});
+        root.put("flags", List.of(true, false));
+        root.put("nothing", null);
+        root.put("point", Map.of("x", 1.0, "y", 2.0));
+        root.put("empty", Map.of());
+        root.put("rows", List.of(Map.of("id", 1), Map.of("id", 2)));
+        String expected = """
+                {
+                  "format": "test/1",
+                  "count": 3,
+                  "values": [1.5, -2.0, 0.25],
+                  "flags": [true, false],
+                  "nothing": null,
+                  "point": { "x": 1.0, "y": 2.0 },
+                  "empty": {},
+                  "rows": [
+                    { "id": 1 },
+                    { "id": 2 }
+                  ]
+                }
+                """;
+        assertEquals(expected, JsonOutput.toJson(root));
+    }
+
+    @Test
+    void unorderedMapsAreWrittenWithSortedKeys() {
+        Map<String, Integer> hashed = new HashMap<>();
+        for (String k : List.of("zeta", "alpha", "mu", "beta", "omega", "gamma")) {
+            hashed.put(k, k.length());
+        }
+        String text = JsonOutput.toJson(Map.of("m", hashed));
+        assertEquals(JsonOutput.toJson(Map.of("m", new TreeMap<>(hashed))), text);
+        assertTrue(text.indexOf("alpha") < text.indexOf("beta") && text.indexOf("omega") < text.indexOf("zeta"), text);
+    }
+
+    @Test
+    void insertionOrderedMapsKeepTheirOrder() {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("z", 1);
+        m.put("a", 2);
+        assertEquals("{\n  \"z\": 1,\n  \"a\": 2\n}\n", JsonOutput.toJson(m));
+    }
+
+    @Test
+    void longContainersBreakIntoLines() {
+        List<Double> many = new ArrayList<>();
+        for (int k = 0; k < 30; k++) {
+            many.add(k + 0.5);
+        }
+        String text = JsonOutput.toJson(Map.of("a", many));
+        assertTrue(text.startsWith("{\n  \"a\": [\n    0.5,\n    1.5,\n"), text);
+        assertTrue(text.endsWith("    29.5\n  ]\n}\n"), text);
+    }
+
+    @Test
+    void textIsEscaped() {
+        assertEquals("[\"a\\\"b\\\\c\\nd\\u0001\", \"kN·m\"]\n", JsonOutput.toJson(List.of("a\"b\\c\nd\u0001", "kN·m")));
+    }
+
+    @Test
+    void nanAndInfinityAreRefusedNeverWritten() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> JsonOutput.toJson(Map.of("cases", List.of(Map.of("u", new double[] {1, Double.NaN})))));
+        assertTrue(e.getMessage().startsWith("$.cases[0].u[1]"), e.getMessage());
+        assertThrows(IllegalArgumentException.class, () -> JsonOutput.toJson(List.of(Double.POSITIVE_INFINITY)));
+    }
+
+    @Test
+    void unorderedSetsAndUnknownTypesAreRefused() {
+        assertThrows(IllegalArgumentException.class, () -> JsonOutput.toJson(new HashSet<>(List.of(1, 2))));
+        assertThrows(IllegalArgumentException.class, () -> JsonOutput.toJson(List.of(new Object())));
+    }
+
+    @Test
+    void sameValueSameBytes() {
+        Map<String, Object> a = new HashMap<>();
+        Map<String, Object> b = new HashMap<>(64);
+        for (int k = 0; k < 50; k++) {
+            a.put("key" + k, k * 0.1);
+        }
+        for (int k = 49; k >= 0; k--) {
+            b.put("key" + k, k * 0.1);
+        }
+        assertEquals(JsonOutput.toJson(a), JsonOutput.toJson(b));
+    }
+}

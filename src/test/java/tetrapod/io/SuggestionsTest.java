@@ -1,0 +1,31 @@
+package tetrapod.io;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+class SuggestionsTest {
+
+    @Test
+    void editDistance() {
+        // the textbook Levenshtein example: kitten → sitting takes 3 edits (2 substitutions, 1 insertion)
+        assertEquals(3, Suggestions.distance("kitten", "sitting"));
+        assertEquals(0, Suggestions.distance("", ""));
+        assertEquals(4, Suggestions.distance("", "abcd"));
+        // swapped neighbours count as one edit: hieght → height
+        assertEquals(1, Suggestions.distance("hieght", "height"));
+        // letter case is ignored
+        assertEquals(0, Suggestions.distance("topwidthx", "topWidthX"));
+    }
+
+    @Test
+    void nearestWithinTolerance() {
+        List<String> keys = List.of("height", "topWidthX", "topWidthY", "panels", "panelHeights");
+        assertEquals("height", Suggestions.nearest("hieght", keys));
+        assertEquals("panels", Suggestions.nearest("pannels", keys));
+        assertEquals(List.of("topWidthX", "topWidthY"), Suggestions.nearest("topWidth", keys, 3));
+        assertNull(Suggestions.nearest("colour", keys));
+    }
+}
