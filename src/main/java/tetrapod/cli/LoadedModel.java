@@ -14,7 +14,7 @@ import tetrapod.section.SteelGrades;
 record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Material material, Tower tower) {
 
     static LoadedModel read(Path file) throws BadInputException {
-        TowerSpec spec = SpecReader.read(file);
+        TowerSpec spec = SpecReader.read(file, SectionCatalogue.standard());
         SectionCatalogue sections = SectionCatalogue.standard().with(spec.userSections());
         Material material = SteelGrades.fromSpec(spec.material());
         Tower tower = TowerGenerator.generate(spec, sections, material);

@@ -1,5 +1,6 @@
 package tetrapod.cli;
 
+import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -71,7 +72,9 @@ final class NewCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        spec.commandLine().getOut().print(SpecWriter.write(starter()));
+        PrintWriter out = spec.commandLine().getOut();
+        out.print(SpecWriter.write(starter()));
+        out.flush();
         return ExitCode.DONE;
     }
 
