@@ -40,6 +40,7 @@ public final class ExplicitSpecs {
                         + original.description()).trim();
         return new TowerSpec(original.name(), description, original.idealisation(), null, List.of(),
                 original.material(), null, original.connectionAllowance(), List.of(),
-                original.userSections(), new ExplicitFrameSpec(nodes, members, supports), original.loads());
+                original.userSections(), new ExplicitFrameSpec(nodes, members, supports), original.loads(),
+                original.checks());
     }
 }

@@ -6,6 +6,7 @@ import java.util.function.Function;
 import tetrapod.model.Idealisation;
 import tetrapod.model.Role;
 import tetrapod.model.spec.Bracing;
+import tetrapod.model.spec.CheckMethod;
 import tetrapod.model.spec.Horizontals;
 import tetrapod.model.spec.SupportType;
 
@@ -16,6 +17,7 @@ record Choices<E>(String what, List<String> names, List<E> values) {
     static final Choices<Bracing> BRACING = of("bracing", Bracing.values(), Bracing::jsonName);
     static final Choices<Horizontals> HORIZONTALS = of("horizontals", Horizontals.values(), Horizontals::jsonName);
     static final Choices<SupportType> SUPPORT_TYPE = of("support type", SupportType.values(), SupportType::jsonName);
+    static final Choices<CheckMethod> CHECK_METHOD = of("check method", CheckMethod.values(), CheckMethod::jsonName);
     static final Choices<Role> ROLE = of("role", Role.values(), Role::jsonName);
 
     Choices {

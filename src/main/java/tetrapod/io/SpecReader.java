@@ -16,6 +16,7 @@ import tetrapod.model.Idealisation;
 import tetrapod.model.SectionLookup;
 import tetrapod.model.spec.BaseSpec;
 import tetrapod.model.spec.ExplicitFrameSpec;
+import tetrapod.model.spec.ChecksSpec;
 import tetrapod.model.spec.LoadsSpec;
 import tetrapod.model.spec.MaterialSpec;
 import tetrapod.model.spec.SegmentSpec;
@@ -34,7 +35,7 @@ import tetrapod.model.spec.UserSectionSpec;
 public final class SpecReader {
 
     static final List<String> TOP_KEYS = List.of("name", "description", "idealisation", "base", "segments",
-            "material", "supports", "connectionAllowance", "planBracingLevels", "userSections", "frame", "loads");
+            "material", "supports", "connectionAllowance", "planBracingLevels", "userSections", "frame", "loads", "checks");
     static final double DEFAULT_CONNECTION_ALLOWANCE = 0.10;
 
     private SpecReader() { }
@@ -128,11 +129,14 @@ public final class SpecReader {
             Fields loadFields = root.object("loads", false);
             LoadsSpec loads = loadFields == null ? LoadsSpec.NONE : new LoadsReader(problems).read(loadFields, nodeExists);
 
+            Fields checkFields = root.object("checks", false);
+            ChecksSpec checks = checkFields == null ? ChecksSpec.DEFAULT : new ChecksReader(problems).read(checkFields);
+
             if (problems.count() > 0) {
                 return null;
             }
             return new TowerSpec(name, description, idealisation, base, segments, material, supports, allowance,
-                    planLevels, userSections, frame, loads);
+                    planLevels, userSections, frame, loads, checks);
         }
     }
 }

@@ -71,6 +71,7 @@ public final class SpecWriter {
         if (!spec.loads().nodal().isEmpty()) {
             m.put("loads", Map.of("nodal", spec.loads().nodal().stream().map(SpecWriter::nodalLoad).toList()));
         }
+        m.put("checks", Map.of("method", spec.checks().method().jsonName()));
         return m;
     }
 

@@ -95,7 +95,8 @@ class SpecWriterTest {
                   "material": "S355",
                   "supports": "pinned",
                   "connectionAllowance": 0.1,
-                  "planBracingLevels": []
+                  "planBracingLevels": [],
+                  "checks": { "method": "en1993" }
                 }
                 """;
         assertEquals(expected, SpecWriter.write(spec));

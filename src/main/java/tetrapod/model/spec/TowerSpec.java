@@ -16,12 +16,13 @@ import tetrapod.model.Idealisation;
  *                            galvanising (0.10 = 10 %)
  * @param planBracingLevels   heights (m) of horizontal diaphragms; each must be a panel level
  * @param userSections        sections defined in the file, by name
+ * @param checks              how members, connections and foundations are checked
  */
 public record TowerSpec(String name, String description, Idealisation idealisation,
                         BaseSpec base, List<SegmentSpec> segments, MaterialSpec material,
                         SupportType supports, double connectionAllowance,
                         List<Double> planBracingLevels, Map<String, UserSectionSpec> userSections,
-                        ExplicitFrameSpec frame, LoadsSpec loads) {
+                        ExplicitFrameSpec frame, LoadsSpec loads, ChecksSpec checks) {
 
     public TowerSpec {
         Objects.requireNonNull(name, "name");
@@ -30,6 +31,17 @@ public record TowerSpec(String name, String description, Idealisation idealisati
         planBracingLevels = planBracingLevels == null ? List.of() : List.copyOf(planBracingLevels);
         userSections = userSections == null ? Map.of() : Map.copyOf(userSections);
         loads = loads == null ? LoadsSpec.NONE : loads;
+        checks = checks == null ? ChecksSpec.DEFAULT : checks;
+    }
+
+    /** A spec with the default checks. */
+    public TowerSpec(String name, String description, Idealisation idealisation,
+                     BaseSpec base, List<SegmentSpec> segments, MaterialSpec material,
+                     SupportType supports, double connectionAllowance,
+                     List<Double> planBracingLevels, Map<String, UserSectionSpec> userSections,
+                     ExplicitFrameSpec frame, LoadsSpec loads) {
+        this(name, description, idealisation, base, segments, material, supports, connectionAllowance,
+                planBracingLevels, userSections, frame, loads, ChecksSpec.DEFAULT);
     }
 
     public boolean isExplicit() {
