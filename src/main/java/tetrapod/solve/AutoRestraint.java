@@ -8,8 +8,9 @@ import tetrapod.model.Vec3;
  * (see {@link StabilityInspector}). It is exact, not a spring: the degree of freedom is eliminated.
  *
  * @param node      node id
- * @param dof       {@code ux uy uz rx ry rz} when the restrained direction is a global axis, or
- *                  {@code "un"} for a translation along the skew unit vector {@code direction}
+ * @param dof       {@code ux uy uz rx ry rz} when the restrained direction is a global axis,
+ *                  {@code "un"} for a translation along the skew unit vector {@code direction},
+ *                  {@code "rn"} for a rotation about the skew unit vector {@code direction}
  * @param direction unit vector of the restrained translation or rotation axis, tower axes
  * @param reason    why the model has no stiffness there, for people
  */
@@ -17,6 +18,8 @@ public record AutoRestraint(int node, String dof, Vec3 direction, String reason)
 
     /** Name of a skew translational auto-restraint. */
     public static final String SKEW = "un";
+    /** Name of a skew rotational auto-restraint. */
+    public static final String SKEW_ROTATION = "rn";
 
     public AutoRestraint {
         Objects.requireNonNull(dof, "dof");
@@ -25,6 +28,11 @@ public record AutoRestraint(int node, String dof, Vec3 direction, String reason)
     }
 
     public boolean isSkew() {
-        return SKEW.equals(dof);
+        return SKEW.equals(dof) || SKEW_ROTATION.equals(dof);
+    }
+
+    /** True for a rotational restraint (rx, ry, rz or rn). */
+    public boolean isRotation() {
+        return dof.startsWith("r");
     }
 }

@@ -81,7 +81,7 @@ public final class FactoredSystem {
         double[] ff = new double[numbering.freeCount()];
         double[] fr = new double[numbering.restrainedCount()];
         for (int n = 0; n < nodes; n++) {
-            double[] local = toNodeBasis(constraints.basis(n), applied, n);
+            double[] local = constraints.toNode(n, applied, 6 * n);
             for (int k = 0; k < dpn; k++) {
                 int code = numbering.code(n, k);
                 if (code >= 0) {
@@ -125,7 +125,7 @@ public final class FactoredSystem {
                 int code = numbering.code(n, k);
                 local[k] = code >= 0 ? uf[code] : 0;
             }
-            System.arraycopy(toGlobal(constraints.basis(n), local), 0, displacement, 6 * n, 6);
+            System.arraycopy(constraints.toGlobal(n, local), 0, displacement, 6 * n, 6);
         }
         guard(load, displacement);
         double[] restrainedForce = new double[numbering.restrainedCount()];
@@ -145,12 +145,12 @@ public final class FactoredSystem {
         List<NodeForce> reactions = new ArrayList<>(model.frame().supports().size());
         for (var s : model.frame().supports()) {
             int n = model.nodeIndex(s.node());
-            reactions.add(nodeForce(nodes.get(n).id(), toGlobal(constraints.basis(n), support[n] == null ? new double[6] : support[n])));
+            reactions.add(nodeForce(nodes.get(n).id(), constraints.toGlobal(n, support[n] == null ? new double[6] : support[n])));
         }
         List<NodeForce> autoForces = new ArrayList<>();
         for (int n = 0; n < nodes.size(); n++) {
             if (auto[n] != null) {
-                autoForces.add(nodeForce(nodes.get(n).id(), toGlobal(constraints.basis(n), auto[n])));
+                autoForces.add(nodeForce(nodes.get(n).id(), constraints.toGlobal(n, auto[n])));
             }
         }
         double error = Equilibrium.error(model, applied, reactions, autoForces);
@@ -219,29 +219,5 @@ public final class FactoredSystem {
 
     private static NodeForce nodeForce(int id, double[] v) {
         return new NodeForce(id, v[0], v[1], v[2], v[3], v[4], v[5]);
-    }
-
-    /** Node n's 6 load components turned into its DOF basis: F' = Qᵀ·F for the translations. */
-    private static double[] toNodeBasis(double[] q, double[] global, int n) {
-        double[] out = new double[6];
-        System.arraycopy(global, 6 * n, out, 0, 6);
-        if (q != null) {
-            for (int c = 0; c < 3; c++) {
-                out[c] = q[c] * global[6 * n] + q[3 + c] * global[6 * n + 1] + q[6 + c] * global[6 * n + 2];
-            }
-        }
-        return out;
-    }
-
-    /** u = Q·u' for the translations; rotations unchanged. */
-    private static double[] toGlobal(double[] q, double[] local) {
-        if (q == null) {
-            return local;
-        }
-        double[] out = local.clone();
-        for (int r = 0; r < 3; r++) {
-            out[r] = q[3 * r] * local[0] + q[3 * r + 1] * local[1] + q[3 * r + 2] * local[2];
-        }
-        return out;
     }
 }

@@ -149,7 +149,7 @@ final class MechanismDiagnosis {
         double[] amplitude = new double[nodes];
         double top = 0;
         for (int n = 0; n < nodes; n++) {
-            motion[n] = toGlobal(model.constraints().basis(n), motion[n]);
+            motion[n] = model.constraints().toGlobal(n, motion[n]);
             for (int k = 0; k < 6; k++) {
                 amplitude[n] = Math.max(amplitude[n], Math.abs(motion[n][k]) * (k < 3 ? 1 : scale));
             }
@@ -187,18 +187,6 @@ final class MechanismDiagnosis {
             text.append("; likely cause: ").append(cause(model));
         }
         return new UnstableStructureException(text.toString(), free);
-    }
-
-    /** u = Q·u' for the translations (rotations are always along the global axes). */
-    private static double[] toGlobal(double[] q, double[] local) {
-        if (q == null) {
-            return local;
-        }
-        double[] out = local.clone();
-        for (int r = 0; r < 3; r++) {
-            out[r] = q[3 * r] * local[0] + q[3 * r + 1] * local[1] + q[3 * r + 2] * local[2];
-        }
-        return out;
     }
 
     private static boolean unconnected(StructuralModel model, List<Integer> moving) {

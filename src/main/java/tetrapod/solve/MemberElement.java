@@ -41,11 +41,13 @@ record MemberElement(Member member, int i, int j, boolean beam, LocalAxes axes, 
      */
     double[] assemblyMatrix(NodeConstraints constraints) {
         double[] lambda = axes.rotation();
-        double[] ti = times(lambda, constraints.basis(i));
-        double[] tj = times(lambda, constraints.basis(j));
+        double[] ti = times(lambda, constraints.translationBasis(i));
+        double[] tj = times(lambda, constraints.translationBasis(j));
         if (beam) {
+            double[] ri = times(lambda, constraints.rotationBasis(i));
+            double[] rj = times(lambda, constraints.rotationBasis(j));
             double[] kLocal = ElementStiffness.beamLocal(1, 1, ea, eiy, eiz, gj, length);
-            return ElementStiffness.transform(kLocal, new double[][] {ti, lambda, tj, lambda});
+            return ElementStiffness.transform(kLocal, new double[][] {ti, ri, tj, rj});
         }
         // Axial bar: elongation = x·(u_j − u_i) = b·d with b = [−(first row of T_i), first row of T_j].
         double[] b = {-ti[0], -ti[1], -ti[2], tj[0], tj[1], tj[2]};

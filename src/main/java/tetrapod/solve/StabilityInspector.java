@@ -19,9 +19,13 @@ import tetrapod.model.Vec3;
  * <li>such a node whose members all lie on one line (a node splitting a straight leg) has no
  *     stiffness across the line: both perpendicular translations are eliminated;
  * <li>in the frame idealisation, a node where only pin-ended members meet has no rotational
- *     stiffness: rx, ry and rz are eliminated.
+ *     stiffness: rx, ry and rz are eliminated;
+ * <li>in the frame idealisation, a straight chain of beam-columns (a leg between kinks) joined
+ *     only by pin-ended members and pinned supports can spin about its own axis without
+ *     resistance (torsion stiffness GJ only links the chain's nodes to each other): the rotation
+ *     about the axis is eliminated at one node of the chain (its supported node if it has one).
  * </ul>
- * A node joined by at least one beam-column is stiff in every translation and rotation locally.
+ * Otherwise a node joined by at least one beam-column is stiff in every translation and rotation.
  * Directions already held by a support are not restrained again; a direction with a component
  * along a held axis is not free and needs nothing. When the free direction is a global axis the
  * DOF is eliminated as it is; otherwise the node's translations get a rotated basis containing the
@@ -40,6 +44,8 @@ final class StabilityInspector {
     static final String PLANE_REASON = "all members meeting here lie in one plane: no stiffness normal to it";
     static final String LINE_REASON = "all members meeting here lie on one line: no stiffness across it";
     static final String PIN_REASON = "only pin-ended members meet here: no rotational stiffness";
+    static final String SPIN_REASON = "a straight chain of beam-columns held only by pin-ended members and pinned supports: "
+            + "nothing stops it spinning about its own axis";
 
     private static final String[] DOF = {"ux", "uy", "uz", "rx", "ry", "rz"};
     private static final Vec3[] AXES = {Vec3.X, Vec3.Y, Vec3.Z};
@@ -99,7 +105,98 @@ final class StabilityInspector {
                 }
             }
         }
-        return new NodeConstraints(bases, kinds, autos);
+        double[][] rotationBases = new double[nodes][];
+        if (isFrame) {
+            restrainChainSpin(frame, nodeIndex, memberIsBeam, kinds, rotationBases, autos);
+        }
+        return new NodeConstraints(bases, rotationBases, kinds, autos);
+    }
+
+    /** Finds straight chains of beam-columns with nothing restraining their spin; see the class comment. */
+    private static void restrainChainSpin(Frame frame, Map<Integer, Integer> nodeIndex, boolean[] memberIsBeam,
+                                          byte[][] kinds, double[][] rotationBases, List<AutoRestraint> autos) {
+        int members = frame.members().size();
+        int nodes = frame.nodes().size();
+        Vec3[] dir = new Vec3[members];
+        int[][] ends = new int[members][];
+        List<List<Integer>> beamsAt = new ArrayList<>(nodes);
+        for (int n = 0; n < nodes; n++) {
+            beamsAt.add(new ArrayList<>());
+        }
+        int[] parent = new int[members];
+        for (int m = 0; m < members; m++) {
+            parent[m] = m;
+            if (!memberIsBeam[m]) {
+                continue;
+            }
+            Member member = frame.members().get(m);
+            ends[m] = new int[] {nodeIndex.get(member.i()), nodeIndex.get(member.j())};
+            dir[m] = LocalAxes.direction(frame.nodes().get(ends[m][0]).position(), frame.nodes().get(ends[m][1]).position());
+            beamsAt.get(ends[m][0]).add(m);
+            beamsAt.get(ends[m][1]).add(m);
+        }
+        for (List<Integer> at : beamsAt) {
+            for (int a = 0; a < at.size(); a++) {
+                for (int b = a + 1; b < at.size(); b++) {
+                    if (collinear(dir[at.get(a)], dir[at.get(b)])) {
+                        parent[find(parent, at.get(a))] = find(parent, at.get(b));
+                    }
+                }
+            }
+        }
+        Map<Integer, List<Integer>> chains = new java.util.TreeMap<>();
+        for (int m = 0; m < members; m++) {
+            if (memberIsBeam[m]) {
+                chains.computeIfAbsent(find(parent, m), k -> new ArrayList<>()).add(m);
+            }
+        }
+        for (List<Integer> chain : chains.values()) {
+            Vec3 axis = dir[chain.get(0)];
+            java.util.TreeSet<Integer> chainNodes = new java.util.TreeSet<>();
+            for (int m : chain) {
+                chainNodes.add(ends[m][0]);
+                chainNodes.add(ends[m][1]);
+            }
+            boolean restrained = false;
+            int supported = -1;
+            for (int n : chainNodes) {
+                for (int m : beamsAt.get(n)) {
+                    restrained |= !collinear(dir[m], axis);
+                }
+                double[] a = {axis.x(), axis.y(), axis.z()};
+                for (int k = 0; k < 3; k++) {
+                    if (kinds[n][3 + k] == NodeConstraints.SUPPORT) {
+                        restrained |= Math.abs(a[k]) > AXIS_TOLERANCE;
+                        supported = supported < 0 ? n : supported;
+                    }
+                }
+                if (supported < 0 && isTranslationSupported(kinds[n])) {
+                    supported = n;
+                }
+            }
+            if (restrained) {
+                continue;
+            }
+            int n = supported >= 0 ? supported : chainNodes.first();
+            double[] a = {axis.x(), axis.y(), axis.z()};
+            rotationBases[n] = restrain(frame.nodes().get(n).id(), kinds[n], 3, List.of(a), SPIN_REASON, autos);
+        }
+    }
+
+    private static boolean isTranslationSupported(byte[] kind) {
+        return kind[0] == NodeConstraints.SUPPORT || kind[1] == NodeConstraints.SUPPORT || kind[2] == NodeConstraints.SUPPORT;
+    }
+
+    private static boolean collinear(Vec3 a, Vec3 b) {
+        return a.cross(b).norm() < AXIS_TOLERANCE;
+    }
+
+    private static int find(int[] parent, int m) {
+        while (parent[m] != m) {
+            parent[m] = parent[parent[m]];
+            m = parent[m];
+        }
+        return m;
     }
 
     private static void restrainTranslations(int id, List<Vec3> dirs, byte[] kind, int n,
@@ -128,7 +225,21 @@ final class StabilityInspector {
         if (free.isEmpty()) {
             return;
         }
-        free = preferAxes(free, kind);
+        bases[n] = restrain(id, kind, 0, free, reason, autos);
+    }
+
+    /**
+     * Eliminates the unit directions {@code free} among the three DOFs at {@code offset} (0:
+     * translations, 3: rotations) of a node, none of which may have a component along a held axis.
+     * Axis directions are eliminated as they are; otherwise the triple gets a rotated basis: the
+     * held axes first (they stay DOFs along the axes), then the free directions, then a completion.
+     *
+     * @return the basis Q (row-major, columns the new DOF directions), or null for the global axes
+     */
+    private static double[] restrain(int id, byte[] kind, int offset, List<double[]> free, String reason,
+                                     List<AutoRestraint> autos) {
+        byte[] k3 = {kind[offset], kind[offset + 1], kind[offset + 2]};
+        free = preferAxes(free, k3);
         boolean allAxes = true;
         for (double[] v : free) {
             allAxes &= axisOf(v) >= 0;
@@ -136,17 +247,15 @@ final class StabilityInspector {
         if (allAxes) {
             for (double[] v : free) {
                 int a = axisOf(v);
-                kind[a] = NodeConstraints.AUTO;
-                autos.add(new AutoRestraint(id, DOF[a], AXES[a], reason));
+                kind[offset + a] = NodeConstraints.AUTO;
+                autos.add(new AutoRestraint(id, DOF[offset + a], AXES[a], reason));
             }
-            return;
+            return null;
         }
-        // Rotated basis: held global axes first (they stay DOFs along the axes), then the free
-        // directions, then a completion to an orthonormal basis.
         List<double[]> basis = new ArrayList<>();
         List<Byte> basisKind = new ArrayList<>();
         for (int a = 0; a < 3; a++) {
-            if (kind[a] == NodeConstraints.SUPPORT) {
+            if (k3[a] == NodeConstraints.SUPPORT) {
                 basis.add(unitAxis(a));
                 basisKind.add(NodeConstraints.SUPPORT);
             }
@@ -156,7 +265,8 @@ final class StabilityInspector {
             double[] dir = a >= 0 ? unitAxis(a) : canonicalSign(v);
             basis.add(dir);
             basisKind.add(NodeConstraints.AUTO);
-            autos.add(new AutoRestraint(id, a >= 0 ? DOF[a] : AutoRestraint.SKEW, vec(dir), reason));
+            String name = a >= 0 ? DOF[offset + a] : offset == 0 ? AutoRestraint.SKEW : AutoRestraint.SKEW_ROTATION;
+            autos.add(new AutoRestraint(id, name, vec(dir), reason));
         }
         for (int a = 0; a < 3 && basis.size() < 3; a++) {
             double[] v = unitAxis(a);
@@ -180,9 +290,9 @@ final class StabilityInspector {
             for (int r = 0; r < 3; r++) {
                 q[3 * r + c] = basis.get(c)[r];
             }
-            kind[c] = basisKind.get(c);
+            kind[offset + c] = basisKind.get(c);
         }
-        bases[n] = q;
+        return q;
     }
 
     /**
