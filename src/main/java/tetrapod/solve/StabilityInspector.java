@@ -373,15 +373,29 @@ final class StabilityInspector {
         return -1;
     }
 
-    /** v or −v, whichever has its largest component positive (so that reports read naturally). */
+    /**
+     * v or −v, whichever has its largest component positive, with round-off components
+     * (|c| &lt; 1e-14) set to zero, so that reports read naturally.
+     */
     private static double[] canonicalSign(double[] v) {
+        double[] out = v.clone();
+        for (int a = 0; a < 3; a++) {
+            if (Math.abs(out[a]) < 1e-14) {
+                out[a] = 0;
+            }
+        }
+        double norm = Math.sqrt(dot(out, out));
         int big = 0;
         for (int a = 1; a < 3; a++) {
-            if (Math.abs(v[a]) > Math.abs(v[big]) + 1e-12) {
+            if (Math.abs(out[a]) > Math.abs(out[big]) + 1e-12) {
                 big = a;
             }
         }
-        return v[big] < 0 ? new double[] {-v[0], -v[1], -v[2]} : v.clone();
+        double sign = out[big] < 0 ? -1 : 1;
+        for (int a = 0; a < 3; a++) {
+            out[a] = sign * out[a] / norm + 0.0; // + 0.0 turns −0.0 into 0.0
+        }
+        return out;
     }
 
     private static double[] unitAxis(int a) {
