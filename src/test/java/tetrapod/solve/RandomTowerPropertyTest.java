@@ -227,4 +227,26 @@ class RandomTowerPropertyTest {
             assertTrue(s.get(0).reaction(base[0]).fz() < 0 && s.get(0).reaction(base[1]).fz() > 0);
         }
     }
+
+    /**
+     * A tall, flexible tower of realistic proportions (150 m, 12 m base, 75 panels; |K|·|u| far
+     * above the loads) must still balance to 1e-9.
+     */
+    @Test
+    void aTallFlexibleTowerStaysInEquilibrium() throws Exception {
+        TowerFixture fixture = new TowerFixture(Idealisation.FRAME, 75, 12, 2.5, 150).support(Restraint.PINNED);
+        Frame frame = fixture.build();
+        List<NodeForce> loads = new ArrayList<>();
+        for (int id : fixture.topCorners()) {
+            loads.add(NodeForce.force(id, 20e3, 5e3, -40e3));
+        }
+        Solution s = Solver.factor(StructuralModel.of(frame)).solve(new LoadVector("top", loads));
+        assertTrue(s.displacement(fixture.topCorners()[0]).ux() > 1, "a flexible tower: the top moves metres");
+        assertTrue(s.equilibriumError() < 1e-9, "equilibrium " + s.equilibriumError());
+        double rz = 0;
+        for (NodeForce r : s.reactions()) {
+            rz += r.fz();
+        }
+        assertEquals(160e3, rz, 1e-9 * 160e3, "ΣRz = −ΣFz (statics)");
+    }
 }
