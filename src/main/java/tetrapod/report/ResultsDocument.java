@@ -1,0 +1,184 @@
+package tetrapod.report;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import tetrapod.io.SpecWriter;
+import tetrapod.model.Frame;
+import tetrapod.model.Member;
+import tetrapod.model.Node;
+import tetrapod.model.Restraint;
+import tetrapod.model.SectionProperties;
+import tetrapod.model.Support;
+import tetrapod.model.Vec3;
+import tetrapod.model.spec.TowerSpec;
+import tetrapod.solve.AutoRestraint;
+import tetrapod.solve.EndForces;
+import tetrapod.solve.MemberEndForces;
+import tetrapod.solve.NodeDisplacement;
+import tetrapod.solve.NodeForce;
+import tetrapod.solve.Solution;
+import tetrapod.solve.StructuralModel;
+
+/**
+ * results.json as ordered plain values (the machine contract of DESIGN.md and
+ * docs/results.schema.json): SI base units, N positive in tension, reactions the forces the
+ * supports exert. Same input, same document.
+ */
+public final class ResultsDocument {
+
+    public static final String FORMAT = "tetrapod-results/1";
+
+    private ResultsDocument() { }
+
+    public static Map<String, Object> build(TowerSpec spec, StructuralModel model, List<SolvedCase> cases) {
+        Map<String, Object> doc = new LinkedHashMap<>();
+        doc.put("format", FORMAT);
+        doc.put("input", SpecWriter.toMap(spec));
+        doc.put("model", model(model));
+        doc.put("cases", cases.stream().map(ResultsDocument::solvedCase).toList());
+        return doc;
+    }
+
+    private static Map<String, Object> model(StructuralModel model) {
+        Frame frame = model.frame();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("name", frame.name());
+        m.put("idealisation", frame.idealisation().jsonName());
+        m.put("nodes", frame.nodes().stream().map(ResultsDocument::node).toList());
+        m.put("members", frame.members().stream().map(member -> member(member, frame)).toList());
+        m.put("supports", frame.supports().stream().map(ResultsDocument::support).toList());
+        m.put("autoRestraints", model.autoRestraints().stream().map(ResultsDocument::autoRestraint).toList());
+        return m;
+    }
+
+    private static Map<String, Object> node(Node n) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("id", n.id());
+        m.put("x", n.x());
+        m.put("y", n.y());
+        m.put("z", n.z());
+        return m;
+    }
+
+    private static Map<String, Object> member(Member member, Frame frame) {
+        SectionProperties p = member.section().properties();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("id", member.id());
+        m.put("i", member.i());
+        m.put("j", member.j());
+        m.put("role", member.role().jsonName());
+        m.put("segment", member.segment());
+        m.put("panel", member.panel());
+        m.put("face", member.face().label());
+        m.put("section", member.section().name());
+        m.put("A", p.area());
+        // Local y is the major principal axis u–u, local z the minor v–v (tetrapod.solve package-info).
+        m.put("Iy", p.iu());
+        m.put("Iz", p.iv());
+        m.put("J", p.torsion());
+        m.put("E", frame.material().e());
+        m.put("G", frame.material().g());
+        m.put("axialOnly", member.axialOnly());
+        m.put("orientation", vector(member.orientation()));
+        return m;
+    }
+
+    private static Map<String, Object> support(Support s) {
+        List<Integer> flags = new ArrayList<>(6);
+        for (int k = 0; k < 6; k++) {
+            flags.add(s.restraint().holds(k) ? 1 : 0);
+        }
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("node", s.node());
+        m.put("restraint", flags);
+        return m;
+    }
+
+    private static Map<String, Object> autoRestraint(AutoRestraint r) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("node", r.node());
+        m.put("dof", r.dof());
+        m.put("direction", vector(r.direction()));
+        m.put("reason", r.reason());
+        return m;
+    }
+
+    private static Map<String, Object> solvedCase(SolvedCase c) {
+        Solution s = c.solution();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("id", c.id());
+        m.put("combination", c.combination());
+        m.put("azimuthDeg", c.azimuthDeg());
+        m.put("loads", nodeForces(summedByNode(s.loads().loads())));
+        m.put("displacements", s.displacements().stream().map(ResultsDocument::displacement).toList());
+        m.put("reactions", nodeForces(s.reactions()));
+        m.put("memberForces", s.memberForces().stream().map(ResultsDocument::memberForces).toList());
+        m.put("equilibriumError", s.equilibriumError());
+        return m;
+    }
+
+    /** The load vector with the entries of each node added up, in ascending node id. */
+    static List<NodeForce> summedByNode(List<NodeForce> loads) {
+        Map<Integer, double[]> sums = new TreeMap<>();
+        for (NodeForce f : loads) {
+            double[] sum = sums.computeIfAbsent(f.node(), k -> new double[6]);
+            for (int k = 0; k < 6; k++) {
+                sum[k] += f.component(k);
+            }
+        }
+        List<NodeForce> out = new ArrayList<>(sums.size());
+        sums.forEach((node, v) -> out.add(new NodeForce(node, v[0], v[1], v[2], v[3], v[4], v[5])));
+        return out;
+    }
+
+    private static List<Map<String, Object>> nodeForces(List<NodeForce> forces) {
+        List<Map<String, Object>> out = new ArrayList<>(forces.size());
+        for (NodeForce f : forces) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("node", f.node());
+            m.put("F", six(f::component));
+            out.add(m);
+        }
+        return out;
+    }
+
+    private static Map<String, Object> displacement(NodeDisplacement d) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("node", d.node());
+        m.put("u", six(d::component));
+        return m;
+    }
+
+    private static Map<String, Object> memberForces(MemberEndForces f) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("member", f.member());
+        m.put("N", f.axial());
+        m.put("endI", six(f.atI()));
+        m.put("endJ", six(f.atJ()));
+        return m;
+    }
+
+    private static List<Double> six(EndForces e) {
+        return six(e::component);
+    }
+
+    private static List<Double> six(java.util.function.IntToDoubleFunction component) {
+        List<Double> v = new ArrayList<>(6);
+        for (int k = 0; k < 6; k++) {
+            v.add(clean(component.applyAsDouble(k)));
+        }
+        return v;
+    }
+
+    private static List<Double> vector(Vec3 v) {
+        return List.of(clean(v.x()), clean(v.y()), clean(v.z()));
+    }
+
+    /** −0.0 written as 0.0, so that equal results give equal text. */
+    private static double clean(double v) {
+        return v == 0 ? 0.0 : v;
+    }
+}
