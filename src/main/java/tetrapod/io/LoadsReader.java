@@ -256,12 +256,15 @@ final class LoadsReader {
             if (f == null) {
                 continue;
             }
+            JsonNode name = array.get(k).get("name");
+            if (name != null && name.isTextual()) {
+                String first = names.putIfAbsent(name.textValue(), itemPath);
+                if (first != null) {
+                    problems.add(f.path("name"), "name '" + name.textValue() + "' is already used by " + first);
+                }
+            }
             AncillarySpec item = ancillary(f, towerHeight);
             if (item != null) {
-                String first = names.putIfAbsent(item.name(), itemPath);
-                if (first != null) {
-                    problems.add(f.path("name"), "name '" + item.name() + "' is already used by " + first);
-                }
                 items.add(item);
             }
         }
