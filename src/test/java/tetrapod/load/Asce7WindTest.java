@@ -55,7 +55,7 @@ class Asce7WindTest {
 
     /**
      * The basic wind speed is defined at 33 ft in exposure C (ASCE 7 §26.5.1), so both editions'
-     * profiles give K_z ≈ 1 there: 7-16 1.0018, 7-22 0.9997 (worked from the formulas).
+     * profiles give K_z ≈ 1 there: 7-16 1.0022, 7-22 0.9997 (worked from the formulas).
      */
     @Test
     void bothEditionsGiveOneAtThirtyThreeFeetInExposureC() {
