@@ -1,6 +1,5 @@
 package tetrapod.load;
 
-import java.math.BigDecimal;
 import java.util.Objects;
 
 /**
@@ -24,7 +23,6 @@ public record CaseKey(Combination combination, Double azimuthDeg) {
 
     /** An azimuth as people write it: 45, 47.5, 0.1. */
     public static String degrees(double azimuthDeg) {
-        BigDecimal d = BigDecimal.valueOf(Math.round(azimuthDeg * 1e9) / 1e9).stripTrailingZeros();
-        return d.scale() < 0 ? d.setScale(0).toPlainString() : d.toPlainString();
+        return PlainNumbers.of(azimuthDeg);
     }
 }

@@ -186,7 +186,7 @@ public final class TowerLoads {
     }
 
     private static String metres(double m) {
-        return CaseKey.degrees(m) + " m";
+        return PlainNumbers.of(m) + " m";
     }
 
     public Tower tower() {
