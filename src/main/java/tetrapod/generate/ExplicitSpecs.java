@@ -20,7 +20,11 @@ public final class ExplicitSpecs {
 
     private ExplicitSpecs() { }
 
-    /** {@code original} with its segments replaced by {@code frame} given node by node. */
+    /**
+     * {@code original} with its segments replaced by {@code frame} given node by node. Its loads keep
+     * what an explicit frame can carry ({@link tetrapod.model.spec.LoadsSpec#forExplicitFrame}): wind,
+     * ancillaries and ice act panel by panel and are left out.
+     */
     public static TowerSpec asExplicit(TowerSpec original, Frame frame) {
         List<NodeSpec> nodes = new ArrayList<>(frame.nodes().size());
         for (Node n : frame.nodes()) {
@@ -40,7 +44,7 @@ public final class ExplicitSpecs {
                         + original.description()).trim();
         return new TowerSpec(original.name(), description, original.idealisation(), null, List.of(),
                 original.material(), null, original.connectionAllowance(), List.of(),
-                original.userSections(), new ExplicitFrameSpec(nodes, members, supports), original.loads(),
+                original.userSections(), new ExplicitFrameSpec(nodes, members, supports), original.loads().forExplicitFrame(),
                 original.checks());
     }
 }

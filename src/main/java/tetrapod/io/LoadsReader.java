@@ -2,16 +2,50 @@ package tetrapod.io;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.function.IntPredicate;
+import tetrapod.model.Face;
+import tetrapod.model.spec.AncillarySpec;
+import tetrapod.model.spec.Asce7Edition;
+import tetrapod.model.spec.CombinationSpec;
+import tetrapod.model.spec.Exposure;
+import tetrapod.model.spec.IceSpec;
+import tetrapod.model.spec.LoadAction;
 import tetrapod.model.spec.LoadsSpec;
 import tetrapod.model.spec.LoadsSpec.NodalLoadSpec;
+import tetrapod.model.spec.TerrainCategory;
+import tetrapod.model.spec.WindSpec;
 
-/** Reads {@code loads}: forces (kN) and moments (kN·m) at nodes. */
+/**
+ * Reads {@code loads}: nodal forces (kN) and moments (kN·m), the wind (m/s, kPa), ancillaries
+ * (m, kN, kN/m, m²), ice (mm, kg/m³), combinations and the sweep step (degrees).
+ */
 final class LoadsReader {
 
-    static final List<String> LOADS_KEYS = List.of("nodal");
+    static final List<String> LOADS_KEYS = List.of("nodal", "wind", "ancillaries", "ice", "combinations", "sweepStep");
     static final List<String> NODAL_KEYS = List.of("node", "F");
+    static final Map<String, List<String>> WIND_KEYS = windKeys();
+    static final Map<String, List<String>> ANCILLARY_KEYS = Map.of(
+            "point", List.of("kind", "name", "height", "weight", "area", "forceCoefficient", "shielding", "face"),
+            "linear", List.of("kind", "name", "from", "to", "weight", "width", "forceCoefficient", "shielding", "face"));
+    static final List<String> ICE_KEYS = List.of("thickness_mm", "density", "heightFactor", "windSpeed", "windPressure");
+    static final List<String> COMBINATION_KEYS = List.of("name", "dead", "wind", "ice", "windOnIce", "nodal");
+    static final List<String> WIND_METHODS = List.of("en1991", "asce7", "uniform");
+
+    /** Wind speeds above this (m/s) are taken for a unit mistake. */
+    static final double MAX_SPEED = 100;
+    /** Largest pressure of the uniform method, kPa. */
+    static final double MAX_PRESSURE = 20;
+    static final double MAX_ICE_MM = 300;
+    static final double MAX_FACTOR = 10;
+    static final double MIN_STEP = 0.1;
+
+    private static final Bound FRACTION_TO_ONE = new Bound(0, false, 1, true);
+    private static final Bound SHIELDING = new Bound(0, true, 1, false);
 
     private final Problems problems;
 
@@ -19,12 +53,30 @@ final class LoadsReader {
         this.problems = problems;
     }
 
+    private static Map<String, List<String>> windKeys() {
+        Map<String, List<String>> m = new LinkedHashMap<>();
+        m.put("en1991", List.of("method", "basicSpeed", "terrain", "directionFactors", "seasonFactor", "orography",
+                "structuralFactor", "turbulenceFactor", "airDensity"));
+        m.put("asce7", List.of("method", "edition", "speed", "exposure", "topographicFactor", "elevationFactor",
+                "directionalityFactor", "gustFactor"));
+        m.put("uniform", List.of("method", "pressure", "forceCoefficient"));
+        return m;
+    }
+
+    /** What the reader knows of the tower the loads are on. */
+    record Tower(boolean generated, double height) {
+        static Tower explicit() {
+            return new Tower(false, Double.NaN);
+        }
+    }
+
     /**
      * The loads, or null (reported).
      *
      * @param nodeExists whether a node id exists; null when the ids are not known yet (generated towers)
+     * @param tower      whether the tower is generated and its height (NaN when not known)
      */
-    LoadsSpec read(Fields loads, IntPredicate nodeExists) {
+    LoadsSpec read(Fields loads, IntPredicate nodeExists, Tower tower) {
         int before = problems.count();
         loads.allowOnly(LOADS_KEYS);
         JsonNode nodal = loads.array("nodal", false);
@@ -38,7 +90,32 @@ final class LoadsReader {
                 }
             }
         }
-        return problems.count() == before ? new LoadsSpec(list) : null;
+        WindSpec wind = null;
+        List<AncillarySpec> ancillaries = List.of();
+        IceSpec ice = null;
+        if (!tower.generated()) {
+            for (String key : List.of("wind", "ancillaries", "ice")) {
+                if (loads.has(key)) {
+                    problems.add(loads.path(key), "applies only to a generated tower (base and segments): wind,"
+                            + " ancillaries and ice act on the tower panel by panel");
+                }
+            }
+        } else {
+            Fields windFields = loads.object("wind", false);
+            wind = windFields == null ? null : wind(windFields);
+            JsonNode items = loads.array("ancillaries", false);
+            ancillaries = items == null ? List.of() : ancillaries(items, loads.path("ancillaries"), tower.height());
+            Fields iceFields = loads.object("ice", false);
+            ice = iceFields == null ? null : ice(iceFields, loads.has("wind") ? windMethod(loads.get("wind")) : null);
+        }
+        JsonNode combos = loads.array("combinations", false);
+        List<CombinationSpec> combinations = combos == null ? List.of()
+                : combinations(combos, loads.path("combinations"), loads.has("wind") && tower.generated(),
+                        loads.has("ice") && tower.generated());
+        double step = loads.has("sweepStep") ? sweepStep(loads) : LoadsSpec.DEFAULT_SWEEP_STEP;
+        return problems.count() == before
+                ? new LoadsSpec(list, wind, ancillaries, ice, combinations, step)
+                : null;
     }
 
     private NodalLoadSpec nodal(Fields f, IntPredicate nodeExists) {
@@ -62,5 +139,271 @@ final class LoadsReader {
             }
         }
         return problems.count() == before ? new NodalLoadSpec(node, c[0], c[1], c[2], c[3], c[4], c[5]) : null;
+    }
+
+    /** The method named in a wind object, or null when it has none that is known. */
+    private static String windMethod(JsonNode wind) {
+        JsonNode m = wind.get("method");
+        return m != null && m.isTextual() && WIND_METHODS.contains(m.textValue()) ? m.textValue() : null;
+    }
+
+    private WindSpec wind(Fields f) {
+        int before = problems.count();
+        String method = f.requiredChoice("method", "wind method", WIND_METHODS, WIND_METHODS);
+        if (method == null) {
+            return null;
+        }
+        allowKeysOf(f, method, WIND_KEYS, "method");
+        Bound upToTwo = new Bound(0, false, 2, true);
+        switch (method) {
+            case "en1991" -> {
+                double speed = speed(f, "basicSpeed");
+                TerrainCategory terrain = Choices.TERRAIN.required(f, "terrain");
+                List<Double> cdir = directionFactors(f);
+                double season = f.optionalNumber("seasonFactor", FRACTION_TO_ONE, "", 1.0);
+                double orography = f.optionalNumber("orography", new Bound(0, false, 3, true), "", 1.0);
+                double structural = f.optionalNumber("structuralFactor", upToTwo, "", 1.0);
+                double turbulence = f.optionalNumber("turbulenceFactor", upToTwo, "", 1.0);
+                double density = f.optionalNumber("airDensity", upToTwo, "kg/m³", WindSpec.En1991.DEFAULT_AIR_DENSITY);
+                return problems.count() == before
+                        ? new WindSpec.En1991(speed, terrain, cdir, season, orography, structural, turbulence, density)
+                        : null;
+            }
+            case "asce7" -> {
+                Asce7Edition edition = Choices.EDITION.optional(f, "edition", Asce7Edition.ASCE_7_16);
+                double speed = speed(f, "speed");
+                Exposure exposure = Choices.EXPOSURE.required(f, "exposure");
+                double kzt = f.optionalNumber("topographicFactor", new Bound(0, false, 5, true), "", 1.0);
+                double ke = f.optionalNumber("elevationFactor", new Bound(0, false, 1.5, true), "", 1.0);
+                double kd = f.optionalNumber("directionalityFactor", FRACTION_TO_ONE, "", 0.85);
+                double g = f.optionalNumber("gustFactor", upToTwo, "", 0.85);
+                return problems.count() == before
+                        ? new WindSpec.Asce7(edition, speed, exposure, kzt, ke, kd, g)
+                        : null;
+            }
+            default -> {
+                double pressure = f.requiredNumber("pressure", new Bound(0, false, MAX_PRESSURE, true), "kPa");
+                double cf = f.optionalNumber("forceCoefficient", new Bound(0, false, 5, true), "", 1.0);
+                return problems.count() == before ? new WindSpec.Uniform(pressure, cf) : null;
+            }
+        }
+    }
+
+    /**
+     * Reports keys not in {@code kind}'s list: a key of another kind as such, any other with the
+     * nearest valid key.
+     */
+    private void allowKeysOf(Fields f, String kind, Map<String, List<String>> keysByKind, String kindKey) {
+        List<String> own = keysByKind.get(kind);
+        List<String> tolerated = new ArrayList<>(own);
+        for (String key : f.keys()) {
+            if (own.contains(key)) {
+                continue;
+            }
+            for (Map.Entry<String, List<String>> other : keysByKind.entrySet()) {
+                if (other.getValue().contains(key)) {
+                    problems.add(f.path(key), "is a key of " + kindKey + " '" + other.getKey() + "', not of '" + kind
+                            + "'; '" + kind + "' takes " + String.join(", ", own.subList(1, own.size())));
+                    tolerated.add(key);
+                    break;
+                }
+            }
+        }
+        f.allowOnly(tolerated);
+    }
+
+    /** A wind speed in m/s, > 0; a value above 100 m/s is reported as a likely unit mistake. NaN (reported) otherwise. */
+    private double speed(Fields f, String key) {
+        if (!f.has(key)) {
+            f.missing(key, "a wind speed > 0 m/s");
+            return Double.NaN;
+        }
+        return speedValue(f.get(key), f.path(key));
+    }
+
+    private double speedValue(JsonNode node, String path) {
+        double v = Values.number(node, path, Bound.POSITIVE, "m/s", problems);
+        if (v > MAX_SPEED) {
+            problems.add(path, "must be ≤ " + Numbers.format(MAX_SPEED) + " m/s, was " + Numbers.shown(node)
+                    + ": wind speeds are in m/s (basic wind speeds lie between about 20 and 70 m/s);"
+                    + " a value this large looks like km/h or mph");
+            return Double.NaN;
+        }
+        return v;
+    }
+
+    private List<Double> directionFactors(Fields f) {
+        if (!f.has("directionFactors")) {
+            return List.of();
+        }
+        String path = f.path("directionFactors");
+        List<Double> values = Values.numbers(f.get("directionFactors"), path, FRACTION_TO_ONE, "", problems);
+        if (values != null && values.size() != 12) {
+            problems.add(path, "must list 12 values of c_dir, for the 30° sectors centred on the azimuths 0°, 30°,"
+                    + " ... 330° (the direction the wind blows towards); had " + values.size());
+            return null;
+        }
+        return values;
+    }
+
+    private List<AncillarySpec> ancillaries(JsonNode array, String path, double towerHeight) {
+        int before = problems.count();
+        List<AncillarySpec> items = new ArrayList<>();
+        Map<String, String> names = new HashMap<>();
+        for (int k = 0; k < array.size(); k++) {
+            String itemPath = JsonPaths.index(path, k);
+            Fields f = Fields.of(array.get(k), itemPath, problems);
+            if (f == null) {
+                continue;
+            }
+            JsonNode name = array.get(k).get("name");
+            if (name != null && name.isTextual()) {
+                String first = names.putIfAbsent(name.textValue(), itemPath);
+                if (first != null) {
+                    problems.add(f.path("name"), "name '" + name.textValue() + "' is already used by " + first);
+                }
+            }
+            AncillarySpec item = ancillary(f, towerHeight);
+            if (item != null) {
+                items.add(item);
+            }
+        }
+        return problems.count() == before ? items : null;
+    }
+
+    private AncillarySpec ancillary(Fields f, double towerHeight) {
+        int before = problems.count();
+        String kind = f.requiredChoice("kind", "ancillary kind", List.of("point", "linear"), List.of("point", "linear"));
+        if (kind == null) {
+            return null;
+        }
+        allowKeysOf(f, kind, ANCILLARY_KEYS, "kind");
+        String name = f.requiredText("name");
+        Face face = Choices.FACE.optional(f, "face", Face.NONE);
+        Face where = face == null ? Face.NONE : face;
+        String label = name == null ? "" : name;
+        if (kind.equals("point")) {
+            double height = f.requiredNumber("height", Bound.NON_NEGATIVE, "m");
+            aboveTop(f, "height", height, towerHeight);
+            double weight = f.requiredNumber("weight", Bound.NON_NEGATIVE, "kN");
+            double area = f.requiredNumber("area", Bound.NON_NEGATIVE, "m²");
+            double cf = f.requiredNumber("forceCoefficient", new Bound(0, false, 5, true), "");
+            double shielding = f.optionalNumber("shielding", SHIELDING, "", 0.0);
+            return problems.count() == before
+                    ? new AncillarySpec.Point(label, height, weight, area, cf, shielding, where)
+                    : null;
+        }
+        double from = f.requiredNumber("from", Bound.NON_NEGATIVE, "m");
+        double to = f.requiredNumber("to", Bound.POSITIVE, "m");
+        if (to <= from) {
+            problems.add(f.path("to"), "must be above from (" + Numbers.format(from) + " m), was " + Numbers.shown(f.get("to")));
+        } else {
+            aboveTop(f, "to", to, towerHeight);
+        }
+        double weight = f.requiredNumber("weight", Bound.NON_NEGATIVE, "kN/m");
+        double width = f.requiredNumber("width", Bound.NON_NEGATIVE, "m");
+        double cf = f.requiredNumber("forceCoefficient", new Bound(0, false, 5, true), "");
+        double shielding = f.optionalNumber("shielding", SHIELDING, "", 0.0);
+        return problems.count() == before
+                ? new AncillarySpec.Linear(label, from, to, weight, width, cf, shielding, where)
+                : null;
+    }
+
+    private void aboveTop(Fields f, String key, double z, double towerHeight) {
+        if (Double.isFinite(towerHeight) && z > towerHeight + 1e-9) {
+            problems.add(f.path(key), "is above the tower top (" + Numbers.format(towerHeight) + " m), was "
+                    + Numbers.shown(f.get(key)));
+        }
+    }
+
+    /** @param method the wind method, or null when the file has no (valid) wind */
+    private IceSpec ice(Fields f, String method) {
+        int before = problems.count();
+        f.allowOnly(ICE_KEYS);
+        double thickness = f.requiredNumber("thickness_mm", new Bound(0, true, MAX_ICE_MM, true), "mm");
+        double density = f.optionalNumber("density", new Bound(100, true, 1000, true), "kg/m³", IceSpec.DEFAULT_DENSITY);
+        Boolean heightFactor = f.optionalBool("heightFactor", true);
+        double windSpeed = Double.NaN;
+        double windPressure = Double.NaN;
+        if (f.has("windSpeed")) {
+            if ("uniform".equals(method)) {
+                problems.add(f.path("windSpeed"), "applies to the en1991 and asce7 methods; with the uniform method give"
+                        + " windPressure (kPa)");
+            } else {
+                windSpeed = speedValue(f.get("windSpeed"), f.path("windSpeed"));
+            }
+        }
+        if (f.has("windPressure")) {
+            if (!"uniform".equals(method)) {
+                problems.add(f.path("windPressure"), "applies to the uniform method; with en1991 and asce7 give"
+                        + " windSpeed (m/s)");
+            } else {
+                windPressure = Values.number(f.get("windPressure"), f.path("windPressure"),
+                        new Bound(0, false, MAX_PRESSURE, true), "kPa", problems);
+            }
+        }
+        return problems.count() == before
+                ? new IceSpec(thickness, density, heightFactor, windSpeed, windPressure)
+                : null;
+    }
+
+    private List<CombinationSpec> combinations(JsonNode array, String path, boolean hasWind, boolean hasIce) {
+        int before = problems.count();
+        List<CombinationSpec> list = new ArrayList<>();
+        Map<String, String> names = new HashMap<>();
+        for (int k = 0; k < array.size(); k++) {
+            String itemPath = JsonPaths.index(path, k);
+            Fields f = Fields.of(array.get(k), itemPath, problems);
+            if (f == null) {
+                continue;
+            }
+            int start = problems.count();
+            f.allowOnly(COMBINATION_KEYS);
+            String name = f.requiredText("name");
+            if (name != null) {
+                String first = names.putIfAbsent(name, itemPath);
+                if (first != null) {
+                    problems.add(f.path("name"), "name '" + name + "' is already used by " + first);
+                }
+            }
+            Map<LoadAction, Double> factors = new EnumMap<>(LoadAction.class);
+            for (LoadAction a : LoadAction.values()) {
+                double v = f.optionalNumber(a.jsonName(), new Bound(0, true, MAX_FACTOR, true), "", 0.0);
+                if (v != 0) {
+                    factors.put(a, v);
+                }
+            }
+            if (factors.get(LoadAction.WIND) != null && !hasWind) {
+                problems.add(f.path("wind"), "the model has no wind (loads.wind)");
+            }
+            if (factors.get(LoadAction.WIND_ON_ICE) != null && !(hasWind && hasIce)) {
+                problems.add(f.path("windOnIce"), "needs both loads.wind and loads.ice");
+            }
+            if (factors.get(LoadAction.ICE) != null && !hasIce) {
+                problems.add(f.path("ice"), "the model has no ice (loads.ice)");
+            }
+            if (problems.count() == start && factors.isEmpty()) {
+                problems.add(f.path(), "must give a factor > 0 for at least one of dead, wind, ice, windOnIce, nodal");
+            }
+            if (problems.count() == start) {
+                list.add(new CombinationSpec(name, factors));
+            }
+        }
+        return problems.count() == before ? list : null;
+    }
+
+    private double sweepStep(Fields loads) {
+        double step = Values.number(loads.get("sweepStep"), loads.path("sweepStep"), new Bound(MIN_STEP, true, 90, true),
+                "degrees", problems);
+        if (Double.isNaN(step)) {
+            return step;
+        }
+        double n = 360 / step;
+        if (Math.abs(n - Math.rint(n)) > 1e-6 * n) {
+            problems.add(loads.path("sweepStep"), "360° is not a whole number of steps of " + Numbers.format(step)
+                    + "°; give a step that divides 360, such as 10, 5, 2.5, 1, 0.5 or 0.1");
+            return Double.NaN;
+        }
+        return step;
     }
 }

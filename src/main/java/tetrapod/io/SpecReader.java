@@ -97,6 +97,7 @@ public final class SpecReader {
             SupportType supports = SupportType.PINNED;
             List<Double> planLevels = List.of();
             IntPredicate nodeExists = null;
+            LoadsReader.Tower loadTower = LoadsReader.Tower.explicit();
             if (generated && explicit) {
                 problems.add(root.path("frame"), "give either base and segments (a generated tower) or frame"
                         + " (an explicit frame), not both");
@@ -109,6 +110,8 @@ public final class SpecReader {
                 base = baseFields == null ? null : segmentReader.base(baseFields);
                 JsonNode segmentArray = root.array("segments", true);
                 segments = segmentArray == null ? null : segmentReader.segments(segmentArray, root.path("segments"), base);
+                loadTower = new LoadsReader.Tower(true, segments == null ? Double.NaN
+                        : segments.stream().mapToDouble(SegmentSpec::height).sum());
                 supports = Choices.SUPPORT_TYPE.optional(root, "supports", SupportType.PINNED);
                 planLevels = root.has("planBracingLevels")
                         ? Values.numbers(root.get("planBracingLevels"), root.path("planBracingLevels"),
@@ -127,7 +130,7 @@ public final class SpecReader {
                 nodeExists = frameFields == null ? null : frameReader::nodeExists;
             }
             Fields loadFields = root.object("loads", false);
-            LoadsSpec loads = loadFields == null ? LoadsSpec.NONE : new LoadsReader(problems).read(loadFields, nodeExists);
+            LoadsSpec loads = loadFields == null ? LoadsSpec.NONE : new LoadsReader(problems).read(loadFields, nodeExists, loadTower);
 
             Fields checkFields = root.object("checks", false);
             ChecksSpec checks = checkFields == null ? ChecksSpec.DEFAULT : new ChecksReader(problems).read(checkFields);

@@ -7,17 +7,24 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import tetrapod.model.Face;
 import tetrapod.model.Restraint;
 import tetrapod.model.Role;
+import tetrapod.model.spec.AncillarySpec;
+import tetrapod.model.spec.CombinationSpec;
 import tetrapod.model.spec.ExplicitFrameSpec;
 import tetrapod.model.spec.ExplicitFrameSpec.MemberSpec;
 import tetrapod.model.spec.ExplicitFrameSpec.NodeSpec;
 import tetrapod.model.spec.ExplicitFrameSpec.SupportSpec;
+import tetrapod.model.spec.IceSpec;
+import tetrapod.model.spec.LoadAction;
+import tetrapod.model.spec.LoadsSpec;
 import tetrapod.model.spec.LoadsSpec.NodalLoadSpec;
 import tetrapod.model.spec.MaterialSpec;
 import tetrapod.model.spec.SegmentSpec;
 import tetrapod.model.spec.TowerSpec;
 import tetrapod.model.spec.UserSectionSpec;
+import tetrapod.model.spec.WindSpec;
 
 /**
  * Writes a {@link TowerSpec} in the model-file format, so that reading the text back gives an
@@ -25,7 +32,9 @@ import tetrapod.model.spec.UserSectionSpec;
  * idealisation, material, supports, connection allowance, plan levels, top widths, horizontals,
  * crossingConnected, redundants, member role and continuity). What is absent rather than
  * defaulted is left out: equal panels (no panelHeights), no orientation, no mass_kg_per_m, no
- * user sections, no loads. An explicit frame has no base, segments, supports or plan levels.
+ * user sections, no loads (and within loads: no wind, ancillaries, ice, combinations, c_dir table
+ * or face; the sweep step only with wind or when it is not the default). An explicit frame has
+ * no base, segments, supports or plan levels.
  */
 public final class SpecWriter {
 
@@ -68,8 +77,9 @@ public final class SpecWriter {
             m.put("userSections", sections);
         }
         spec.explicitFrame().ifPresent(frame -> m.put("frame", frame(frame)));
-        if (!spec.loads().nodal().isEmpty()) {
-            m.put("loads", Map.of("nodal", spec.loads().nodal().stream().map(SpecWriter::nodalLoad).toList()));
+        Map<String, Object> loads = loads(spec.loads());
+        if (!loads.isEmpty()) {
+            m.put("loads", loads);
         }
         m.put("checks", Map.of("method", spec.checks().method().jsonName()));
         return m;
@@ -181,6 +191,112 @@ public final class SpecWriter {
             flags.add(s.restraint().holds(dof) ? 1 : 0);
         }
         return ordered("node", s.node(), "restraint", flags);
+    }
+
+    /** The loads with their defaults written out; nothing for what is absent; the sweep step with wind or when not the default. */
+    private static Map<String, Object> loads(LoadsSpec loads) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        if (!loads.nodal().isEmpty()) {
+            m.put("nodal", loads.nodal().stream().map(SpecWriter::nodalLoad).toList());
+        }
+        if (loads.hasWind()) {
+            m.put("wind", wind(loads.wind()));
+        }
+        if (!loads.ancillaries().isEmpty()) {
+            m.put("ancillaries", loads.ancillaries().stream().map(SpecWriter::ancillary).toList());
+        }
+        if (loads.hasIce()) {
+            m.put("ice", ice(loads.ice()));
+        }
+        if (!loads.combinations().isEmpty()) {
+            m.put("combinations", loads.combinations().stream().map(SpecWriter::combination).toList());
+        }
+        if (loads.hasWind() || loads.sweepStep() != LoadsSpec.DEFAULT_SWEEP_STEP) {
+            m.put("sweepStep", loads.sweepStep());
+        }
+        return m;
+    }
+
+    private static Map<String, Object> wind(WindSpec wind) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("method", wind.method());
+        if (wind instanceof WindSpec.En1991 en) {
+            m.put("basicSpeed", en.basicSpeed());
+            m.put("terrain", en.terrain().jsonName());
+            if (!en.directionFactors().isEmpty()) {
+                m.put("directionFactors", en.directionFactors());
+            }
+            m.put("seasonFactor", en.seasonFactor());
+            m.put("orography", en.orography());
+            m.put("structuralFactor", en.structuralFactor());
+            m.put("turbulenceFactor", en.turbulenceFactor());
+            m.put("airDensity", en.airDensity());
+        } else if (wind instanceof WindSpec.Asce7 a) {
+            m.put("edition", a.edition().jsonName());
+            m.put("speed", a.speed());
+            m.put("exposure", a.exposure().jsonName());
+            m.put("topographicFactor", a.topographicFactor());
+            m.put("elevationFactor", a.elevationFactor());
+            m.put("directionalityFactor", a.directionalityFactor());
+            m.put("gustFactor", a.gustFactor());
+        } else {
+            WindSpec.Uniform u = (WindSpec.Uniform) wind;
+            m.put("pressure", u.pressure());
+            m.put("forceCoefficient", u.forceCoefficient());
+        }
+        return m;
+    }
+
+    private static Map<String, Object> ancillary(AncillarySpec item) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        if (item instanceof AncillarySpec.Point p) {
+            m.put("kind", "point");
+            m.put("name", p.name());
+            m.put("height", p.height());
+            m.put("weight", p.weight());
+            m.put("area", p.area());
+            m.put("forceCoefficient", p.forceCoefficient());
+            m.put("shielding", p.shielding());
+        } else {
+            AncillarySpec.Linear l = (AncillarySpec.Linear) item;
+            m.put("kind", "linear");
+            m.put("name", l.name());
+            m.put("from", l.from());
+            m.put("to", l.to());
+            m.put("weight", l.weight());
+            m.put("width", l.width());
+            m.put("forceCoefficient", l.forceCoefficient());
+            m.put("shielding", l.shielding());
+        }
+        if (item.face() != Face.NONE) {
+            m.put("face", item.face().label());
+        }
+        return m;
+    }
+
+    private static Map<String, Object> ice(IceSpec ice) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("thickness_mm", ice.thickness());
+        m.put("density", ice.density());
+        m.put("heightFactor", ice.heightFactor());
+        if (!Double.isNaN(ice.windSpeed())) {
+            m.put("windSpeed", ice.windSpeed());
+        }
+        if (!Double.isNaN(ice.windPressure())) {
+            m.put("windPressure", ice.windPressure());
+        }
+        return m;
+    }
+
+    private static Map<String, Object> combination(CombinationSpec c) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("name", c.name());
+        for (LoadAction a : LoadAction.values()) {
+            if (c.factors().containsKey(a)) {
+                m.put(a.jsonName(), c.factor(a));
+            }
+        }
+        return m;
     }
 
     private static Map<String, Object> nodalLoad(NodalLoadSpec load) {

@@ -104,8 +104,14 @@ final class Values {
         if (index >= 0) {
             return values.get(index);
         }
-        int caseless = names.indexOf(given.toLowerCase(Locale.ROOT));
-        String hint = caseless >= 0 ? "; names are lower case: '" + names.get(caseless) + "'" : "";
+        String hint = "";
+        for (String name : names) {
+            if (name.equalsIgnoreCase(given)) {
+                hint = name.equals(name.toLowerCase(Locale.ROOT))
+                        ? "; names are lower case: '" + name + "'"
+                        : "; write it '" + name + "'";
+            }
+        }
         problems.add(path, "unknown " + what + " '" + given + "'; expected one of " + String.join(", ", names) + hint);
         return null;
     }

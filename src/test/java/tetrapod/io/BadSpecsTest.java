@@ -76,7 +76,30 @@ class BadSpecsTest {
                         "unknown role 'column'; expected one of leg, diagonal, horizontal, redundant, plan, general", 1),
                 new Case("frame-with-tower-supports.json", "supports", 3, "applies only to a generated tower", 1),
                 new Case("not-an-object.json", "$", 1, "must be an object { ... }, was an array", 1),
-                new Case("empty-file.json", "$", 1, "the file is empty", 1));
+                new Case("empty-file.json", "$", 1, "the file is empty", 1),
+                new Case("wind-negative-speed.json", "loads.wind.basicSpeed", 9, "must be > 0 m/s, was -26.0", 1),
+                new Case("wind-absurd-speed.json", "loads.wind.speed", 9,
+                        "must be ≤ 100 m/s, was 160: wind speeds are in m/s", 1),
+                new Case("wind-unknown-terrain.json", "loads.wind.terrain", 10,
+                        "unknown terrain category 'V'; expected one of 0, I, II, III, IV", 1),
+                new Case("wind-unknown-exposure.json", "loads.wind.exposure", 10,
+                        "unknown exposure 'A'; expected one of B, C, D", 1),
+                new Case("wind-unknown-method.json", "loads.wind.method", 9,
+                        "unknown wind method 'en1992'; expected one of en1991, asce7, uniform", 1),
+                new Case("wind-key-of-other-method.json", "loads.wind.exposure", 10,
+                        "is a key of method 'asce7', not of 'en1991'", 1),
+                new Case("wind-direction-factors-count.json", "loads.wind.directionFactors", 10,
+                        "must list 12 values of c_dir", 1),
+                new Case("ancillary-above-top.json", "loads.ancillaries[1].height", 12,
+                        "is above the tower top (12 m), was 14.5", 1),
+                new Case("ice-negative-thickness.json", "loads.ice.thickness_mm", 10, "must be ≥ 0 mm and ≤ 300 mm, was -10", 1),
+                new Case("combination-misspelt-action.json", "loads.combinations[0].wnd", 11,
+                        "unknown key; did you mean 'wind'?", 1),
+                new Case("combination-wind-without-wind.json", "loads.combinations[0].wind", 11,
+                        "the model has no wind (loads.wind)", 1),
+                new Case("wind-on-explicit-frame.json", "loads.wind", 9, "applies only to a generated tower", 1),
+                new Case("sweep-step-not-divisor.json", "loads.sweepStep", 10,
+                        "360° is not a whole number of steps of 7°", 1));
     }
 
     @ParameterizedTest(name = "{0}")

@@ -64,7 +64,10 @@ class SchemaTest {
         "both-base-and-frame.json", "neither-base-nor-frame.json", "missing-name.json", "missing-bracing.json",
         "missing-horizontal-section.json", "redundants-out-of-range.json", "connection-allowance-range.json",
         "restraint-wrong-length.json", "frame-unknown-role.json", "frame-with-tower-supports.json",
-        "not-an-object.json"})
+        "not-an-object.json", "wind-negative-speed.json", "wind-absurd-speed.json", "wind-unknown-terrain.json",
+        "wind-unknown-exposure.json", "wind-unknown-method.json", "wind-key-of-other-method.json",
+        "wind-direction-factors-count.json", "ice-negative-thickness.json", "combination-misspelt-action.json",
+        "wind-on-explicit-frame.json"})
     void schemaRefusesBadSpecs(String file) throws IOException {
         JsonNode tree = MAPPER.readTree(BadSpecsTest.resource(file));
         assertFalse(schema().validate(tree).isEmpty(), file + " passed the schema");
@@ -74,7 +77,8 @@ class SchemaTest {
     @ParameterizedTest(name = "{0}")
     @ValueSource(strings = {"unknown-section.json", "panel-heights-sum.json", "panel-heights-count.json",
         "material-fu-below-fy.json", "user-angle-too-thick.json", "frame-member-missing-node.json",
-        "frame-duplicate-node-id.json", "load-on-missing-node.json"})
+        "frame-duplicate-node-id.json", "load-on-missing-node.json", "ancillary-above-top.json",
+        "combination-wind-without-wind.json", "sweep-step-not-divisor.json"})
     void someFaultsNeedTheReader(String file) throws IOException {
         JsonNode tree = MAPPER.readTree(BadSpecsTest.resource(file));
         assertEquals(Set.of(), schema().validate(tree), file);
@@ -101,7 +105,8 @@ class SchemaTest {
         assertEquals(List.of(), faults);
     }
 
-    private static final List<String> UNITS = List.of(" m", "m.", "m,", "MPa", "kN", "mm", "cm²", "cm⁴", "kg/m", "dimensionless");
+    private static final List<String> UNITS = List.of(" m", "m.", "m,", "MPa", "kN", "mm", "cm²", "cm⁴", "kg/m", "dimensionless",
+            "kPa", "m/s", "degrees");
 
     /** Walks schema objects only: the values of properties and $defs, and the sub-schemas of the keywords. */
     private static void walk(JsonNode root, JsonNode schema, String where, List<String> faults) {

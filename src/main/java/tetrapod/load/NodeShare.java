@@ -1,0 +1,4 @@
+package tetrapod.load;
+
+/** The fraction of a load that goes to one node. */
+public record NodeShare(int node, double fraction) { }

@@ -1,0 +1,80 @@
+package tetrapod.model.spec;
+
+import java.util.List;
+import java.util.Objects;
+
+/** The wind method and its parameters, in file units (m/s, kPa, kg/m³). Closed family: one record per method. */
+public sealed interface WindSpec permits WindSpec.En1991, WindSpec.Asce7, WindSpec.Uniform {
+
+    /** The method's name in the file: en1991, asce7 or uniform. */
+    String method();
+
+    /**
+     * EN 1991-1-4 §4 peak velocity pressure with EN 1993-3-1 Annex B lattice coefficients.
+     *
+     * @param basicSpeed       fundamental basic wind velocity v_b,0, m/s
+     * @param terrain          terrain category (Table 4.1)
+     * @param directionFactors c_dir for the 12 azimuth sectors of 30° centred on 0°, 30°, ... 330°
+     *                         (azimuth as everywhere in Tetrapod: the direction the wind blows
+     *                         towards); empty for c_dir = 1 in every direction
+     * @param seasonFactor     c_season
+     * @param orography        orography factor c0
+     * @param structuralFactor c_s·c_d
+     * @param turbulenceFactor k_I
+     * @param airDensity       ρ, kg/m³
+     */
+    record En1991(double basicSpeed, TerrainCategory terrain, List<Double> directionFactors, double seasonFactor,
+                  double orography, double structuralFactor, double turbulenceFactor, double airDensity)
+            implements WindSpec {
+
+        public static final double DEFAULT_AIR_DENSITY = 1.25;
+
+        public En1991 {
+            Objects.requireNonNull(terrain, "terrain");
+            directionFactors = directionFactors == null ? List.of() : List.copyOf(directionFactors);
+        }
+
+        @Override
+        public String method() {
+            return "en1991";
+        }
+    }
+
+    /**
+     * ASCE 7 velocity pressure (§26.10) with the trussed-tower force coefficients.
+     *
+     * @param edition               7-16 or 7-22
+     * @param speed                 basic wind speed V, m/s
+     * @param exposure              exposure category
+     * @param topographicFactor     K_zt
+     * @param elevationFactor       K_e
+     * @param directionalityFactor  K_d
+     * @param gustFactor            G
+     */
+    record Asce7(Asce7Edition edition, double speed, Exposure exposure, double topographicFactor,
+                 double elevationFactor, double directionalityFactor, double gustFactor) implements WindSpec {
+
+        public Asce7 {
+            Objects.requireNonNull(edition, "edition");
+            Objects.requireNonNull(exposure, "exposure");
+        }
+
+        @Override
+        public String method() {
+            return "asce7";
+        }
+    }
+
+    /**
+     * A constant pressure on the members' projected areas, for historical or hand calculations.
+     *
+     * @param pressure         kPa
+     * @param forceCoefficient dimensionless factor on the windward face's projected member area
+     */
+    record Uniform(double pressure, double forceCoefficient) implements WindSpec {
+        @Override
+        public String method() {
+            return "uniform";
+        }
+    }
+}
