@@ -5,19 +5,22 @@ import tetrapod.common.BadInputException;
 import tetrapod.generate.Tower;
 import tetrapod.generate.TowerGenerator;
 import tetrapod.io.SpecReader;
+import tetrapod.load.TowerLoads;
 import tetrapod.model.Material;
 import tetrapod.model.spec.TowerSpec;
 import tetrapod.section.SectionCatalogue;
 import tetrapod.section.SteelGrades;
 
-/** A model file read, its sections and material resolved, and its tower built. */
-record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Material material, Tower tower) {
+/** A model file read, its sections and material resolved, its tower built and its loads formed. */
+record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Material material, Tower tower,
+                   TowerLoads loads) {
 
     static LoadedModel read(Path file) throws BadInputException {
         TowerSpec spec = SpecReader.read(file, SectionCatalogue.standard());
         SectionCatalogue sections = SectionCatalogue.standard().with(spec.userSections());
         Material material = SteelGrades.fromSpec(spec.material());
         Tower tower = TowerGenerator.generate(spec, sections, material);
-        return new LoadedModel(file, spec, sections, material, tower);
+        TowerLoads loads = TowerLoads.build(tower, spec.loads());
+        return new LoadedModel(file, spec, sections, material, tower, loads);
     }
 }

@@ -5,6 +5,11 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import tetrapod.analysis.AnalysisResult;
+import tetrapod.analysis.LegBaseSweep;
+import tetrapod.analysis.SolvedCase;
+import tetrapod.load.AzimuthWind;
+import tetrapod.load.PanelForce;
 import tetrapod.io.SpecWriter;
 import tetrapod.model.Frame;
 import tetrapod.model.Member;
@@ -33,13 +38,53 @@ public final class ResultsDocument {
 
     private ResultsDocument() { }
 
-    public static Map<String, Object> build(TowerSpec spec, StructuralModel model, List<SolvedCase> cases) {
+    public static Map<String, Object> build(TowerSpec spec, AnalysisResult result) {
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("format", FORMAT);
         doc.put("input", SpecWriter.toMap(spec));
-        doc.put("model", model(model));
-        doc.put("cases", cases.stream().map(ResultsDocument::solvedCase).toList());
+        doc.put("model", model(result.model()));
+        doc.put("cases", result.cases().stream().map(ResultsDocument::solvedCase).toList());
+        doc.put("wind", result.wind().stream().map(ResultsDocument::wind).toList());
+        doc.put("sweep", sweep(result));
         return doc;
+    }
+
+    private static Map<String, Object> wind(AzimuthWind w) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("azimuthDeg", w.azimuthDeg());
+        List<Map<String, Object>> panels = new ArrayList<>();
+        for (PanelForce p : w.panels()) {
+            Map<String, Object> panel = new LinkedHashMap<>();
+            panel.put("panel", p.panel());
+            panel.put("zBottom", p.zBottom());
+            panel.put("zTop", p.zTop());
+            panel.put("zRef", p.zRef());
+            panel.put("q", p.q());
+            panel.put("solidity", p.solidity());
+            panel.put("cf", p.cf());
+            panel.put("area", p.area());
+            panel.put("force", List.of(clean(p.fx()), clean(p.fy())));
+            panels.add(panel);
+        }
+        m.put("panels", panels);
+        return m;
+    }
+
+    private static Map<String, Object> sweep(AnalysisResult result) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("stepDeg", result.loads().sweepStep());
+        List<Map<String, Object>> bases = new ArrayList<>();
+        for (LegBaseSweep s : result.sweep()) {
+            Map<String, Object> b = new LinkedHashMap<>();
+            b.put("node", s.node());
+            b.put("combination", s.combination());
+            b.put("azimuthDeg", s.azimuthDeg());
+            b.put("Fz", s.fz().stream().map(ResultsDocument::clean).toList());
+            b.put("Fh", s.fh().stream().map(ResultsDocument::clean).toList());
+            bases.add(b);
+        }
+        m.put("legBases", bases);
+        return m;
     }
 
     private static Map<String, Object> model(StructuralModel model) {

@@ -1,4 +1,4 @@
-package tetrapod.report;
+package tetrapod.analysis;
 
 import java.util.Objects;
 import tetrapod.solve.Solution;

@@ -1,0 +1,125 @@
+package tetrapod.solve;
+
+import java.util.Arrays;
+import java.util.List;
+import tetrapod.common.UnstableStructureException;
+
+/**
+ * The responses to a few load vectors, each solved once with the one factorisation, superposed
+ * for any weights: a linear structure's response to Σ w_k · F_k is Σ w_k · response(F_k). Holds
+ * only support reactions and member end forces, so that thousands of cases (every combination at
+ * every azimuth of a fine sweep) cost a few multiply-adds each and no solve.
+ */
+public final class BasisResponses {
+
+    private final int supports;
+    private final int members;
+    private final double[][] reactions; // [k][support * 6 + c], frame support order
+    private final double[][] endForces; // [k][member * 12 + c]: atI fx..mz then atJ fx..mz
+    private final double[][] axial;     // [k][member], N positive in tension
+
+    private BasisResponses(int supports, int members, double[][] reactions, double[][] endForces, double[][] axial) {
+        this.supports = supports;
+        this.members = members;
+        this.reactions = reactions;
+        this.endForces = endForces;
+        this.axial = axial;
+    }
+
+    /**
+     * Solves every vector of {@code basis} (input) with {@code system}.
+     *
+     * @throws UnstableStructureException as {@link FactoredSystem#solveAll}
+     */
+    public static BasisResponses of(FactoredSystem system, List<LoadVector> basis) throws UnstableStructureException {
+        List<Solution> solutions = system.solveAll(basis);
+        int supports = system.model().frame().supports().size();
+        int members = system.model().frame().members().size();
+        double[][] reactions = new double[basis.size()][supports * 6];
+        double[][] endForces = new double[basis.size()][members * 12];
+        double[][] axial = new double[basis.size()][members];
+        for (int k = 0; k < solutions.size(); k++) {
+            Solution s = solutions.get(k);
+            List<NodeForce> r = s.reactions();
+            for (int n = 0; n < supports; n++) {
+                for (int c = 0; c < 6; c++) {
+                    reactions[k][n * 6 + c] = r.get(n).component(c);
+                }
+            }
+            List<MemberEndForces> f = s.memberForces();
+            for (int m = 0; m < members; m++) {
+                MemberEndForces e = f.get(m);
+                for (int c = 0; c < 6; c++) {
+                    endForces[k][m * 12 + c] = e.atI().component(c);
+                    endForces[k][m * 12 + 6 + c] = e.atJ().component(c);
+                }
+                axial[k][m] = e.axial();
+            }
+        }
+        return new BasisResponses(supports, members, reactions, endForces, axial);
+    }
+
+    /** Number of basis vectors. */
+    public int size() {
+        return reactions.length;
+    }
+
+    /**
+     * Support reactions for {@code weights} (input, one per basis vector) into {@code out} (output,
+     * length ≥ 6 × supports): support s, component c (fx..mz) at {@code out[6 s + c]}, N and N·m.
+     *
+     * @return {@code out}
+     */
+    public double[] reactions(double[] weights, double[] out) {
+        return superpose(reactions, weights, out, supports * 6);
+    }
+
+    /**
+     * Axial forces of every member (frame member order, N, positive in tension) for
+     * {@code weights} into {@code out} (output, length ≥ members).
+     *
+     * @return {@code out}
+     */
+    public double[] axialForces(double[] weights, double[] out) {
+        return superpose(axial, weights, out, members);
+    }
+
+    /**
+     * End forces of the member at {@code memberIndex} (frame order) for {@code weights}, into
+     * {@code out} (output, length ≥ 12): the end actions at i (fx..mz) then at j, local axes, as
+     * {@link MemberEndForces}.
+     *
+     * @return {@code out}
+     */
+    public double[] endForces(int memberIndex, double[] weights, double[] out) {
+        Arrays.fill(out, 0, 12, 0.0);
+        int base = memberIndex * 12;
+        for (int k = 0; k < weights.length; k++) {
+            double w = weights[k];
+            if (w != 0) {
+                double[] f = endForces[k];
+                for (int c = 0; c < 12; c++) {
+                    out[c] += w * f[base + c];
+                }
+            }
+        }
+        return out;
+    }
+
+    private static double[] superpose(double[][] basis, double[] weights, double[] out, int length) {
+        if (weights.length != basis.length) {
+            throw new IllegalArgumentException("expected " + basis.length + " weights, got " + weights.length);
+        }
+        Arrays.fill(out, 0, length, 0.0);
+        for (int k = 0; k < weights.length; k++) {
+            double w = weights[k];
+            if (w != 0) {
+                double[] v = basis[k];
+                for (int i = 0; i < length; i++) {
+                    out[i] += w * v[i];
+                }
+            }
+        }
+        return out;
+    }
+}
