@@ -101,7 +101,8 @@ class SchemaTest {
         assertEquals(List.of(), faults);
     }
 
-    private static final List<String> UNITS = List.of(" m", "m.", "m,", "MPa", "kN", "mm", "cm²", "cm⁴", "kg/m", "dimensionless");
+    private static final List<String> UNITS = List.of(" m", "m.", "m,", "MPa", "kN", "mm", "cm²", "cm⁴", "kg/m", "dimensionless",
+            "kPa", "degrees");
 
     /** Walks schema objects only: the values of properties and $defs, and the sub-schemas of the keywords. */
     private static void walk(JsonNode root, JsonNode schema, String where, List<String> faults) {

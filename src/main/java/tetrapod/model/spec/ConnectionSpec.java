@@ -44,6 +44,10 @@ public record ConnectionSpec(Role role, List<Integer> segments, int bolts, doubl
         }
     }
 
+    /** Nominal diameters of the ISO metric coarse threads a bolt or anchor rod may have, mm (M12 … M72). */
+    public static final List<Integer> METRIC_SIZES_MM = List.of(12, 14, 16, 18, 20, 22, 24, 27, 30, 33, 36, 39, 42, 45,
+            48, 52, 56, 60, 64, 68, 72);
+
     /** End and edge distance assumed when not given: 1.5 d0 (common practice; EN 1993-1-8 Table 3.3 asks ≥ 1.2 d0). */
     public static final double ASSUMED_DISTANCE_PER_HOLE = 1.5;
     /** Pitch assumed when not given: 3.0 d0 (common practice; EN 1993-1-8 Table 3.3 asks ≥ 2.2 d0). */
