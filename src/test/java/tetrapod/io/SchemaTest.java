@@ -64,7 +64,8 @@ class SchemaTest {
         "both-base-and-frame.json", "neither-base-nor-frame.json", "missing-name.json", "missing-bracing.json",
         "missing-horizontal-section.json", "redundants-out-of-range.json", "connection-allowance-range.json",
         "restraint-wrong-length.json", "frame-unknown-role.json", "frame-with-tower-supports.json",
-        "not-an-object.json"})
+        "not-an-object.json", "checks-unknown-key.json", "checks-bolt-grade.json", "checks-bolt-size.json",
+        "checks-uplift-both.json", "checks-anchor-no-resistance.json", "checks-frustum-angle.json"})
     void schemaRefusesBadSpecs(String file) throws IOException {
         JsonNode tree = MAPPER.readTree(BadSpecsTest.resource(file));
         assertFalse(schema().validate(tree).isEmpty(), file + " passed the schema");
@@ -74,7 +75,8 @@ class SchemaTest {
     @ParameterizedTest(name = "{0}")
     @ValueSource(strings = {"unknown-section.json", "panel-heights-sum.json", "panel-heights-count.json",
         "material-fu-below-fy.json", "user-angle-too-thick.json", "frame-member-missing-node.json",
-        "frame-duplicate-node-id.json", "load-on-missing-node.json"})
+        "frame-duplicate-node-id.json", "load-on-missing-node.json", "checks-factors-asce.json",
+        "checks-connection-overlap.json", "checks-segment-out-of-range.json"})
     void someFaultsNeedTheReader(String file) throws IOException {
         JsonNode tree = MAPPER.readTree(BadSpecsTest.resource(file));
         assertEquals(Set.of(), schema().validate(tree), file);
