@@ -71,33 +71,21 @@ final class AngleGeometry {
     }
 
     /**
-     * The largest normal stress magnitude (Pa per N of force, so multiply by the force) at the
-     * outline when an axial force acts through the bolt line of the connected leg, at the face the
-     * gusset bears on (the back of that leg): σ = N/A + a1 (y − ȳ) + a2 (z − z̄), with a1, a2 from
-     * the first moments of the stress about the centroid, Iz a1 + Iyz a2 = N e_y and
-     * Iyz a1 + Iy a2 = N e_z (unsymmetric bending).
-     *
-     * @param edgeDistance e2: from the bolt line to the toe of the connected leg, m
+     * The largest normal stress magnitude (Pa per N of axial force) when the force acts in the
+     * plane of the gusset, at the back of the connected leg: an eccentricity e (the centroid's
+     * distance from that back) out of the gusset's plane. The gusset holds the angle to bending
+     * about the geometric axis parallel to the connected leg (restrained bending, common practice
+     * for an angle bolted to a gusset), so σ = N/A + N e z/I with z measured from that axis: at the
+     * back of the connected leg N (1/A + e²/I), at the toe of the other leg N (1/A − e (w − e)/I),
+     * w that leg's width.
      */
-    double eccentricStressPerNewton(ConnectedLeg leg, double edgeDistance) {
-        double ey;
-        double ez;
-        if (leg == ConnectedLeg.LONG) {
-            ey = angle.legA() - edgeDistance - p.centroidY();
-            ez = -p.centroidZ();
-        } else {
-            ey = -p.centroidY();
-            ez = angle.legB() - edgeDistance - p.centroidZ();
-        }
-        double det = p.iz() * p.iy() - iyz * iyz;
-        double a1 = (ey * p.iy() - ez * iyz) / det;
-        double a2 = (ez * p.iz() - ey * iyz) / det;
-        double max = 0;
-        for (double[] q : corners()) {
-            double sigma = 1 / p.area() + a1 * (q[0] - p.centroidY()) + a2 * (q[1] - p.centroidZ());
-            max = Math.max(max, Math.abs(sigma));
-        }
-        return max;
+    double eccentricStressPerNewton(ConnectedLeg leg) {
+        double e = outOfPlaneEccentricity(leg);
+        double inertia = leg == ConnectedLeg.LONG ? p.iy() : p.iz();
+        double otherLeg = leg == ConnectedLeg.LONG ? angle.legB() : angle.legA();
+        double back = 1 / p.area() + e * e / inertia;
+        double toe = 1 / p.area() - e * (otherLeg - e) / inertia;
+        return Math.max(Math.abs(back), Math.abs(toe));
     }
 
     /** Out-of-plane eccentricity of the bolt line's force from the centroid, m. */

@@ -146,8 +146,9 @@ public final class En1993MemberCheck implements MemberCheck {
     /**
      * A single angle bolted by one bolt: EN 1993-1-1 BB.1.2 (2) asks for the end eccentricity by
      * 6.2.9; for a class 3 (or effective class 4) section that is the elastic criterion
-     * σ_x,Ed ≤ f_y/γM0 (6.2.9.2 (6.42)) at the connection, with the force acting on the bolt line
-     * at the back of the connected leg.
+     * σ_x,Ed ≤ f_y/γM0 (6.2.9.2 (6.42)) at the connection, with the force acting at the back of the
+     * connected leg and bending restrained to the geometric axis parallel to it (see
+     * {@link AngleGeometry#eccentricStressPerNewton}).
      */
     private CheckResult singleBoltEccentricity(MemberCheckInput in, En1993Section cls, double fy) {
         Member member = in.member();
@@ -156,7 +157,7 @@ public final class En1993MemberCheck implements MemberCheck {
             return null;
         }
         AngleGeometry g = new AngleGeometry(angle, member.section().properties());
-        double sigmaPerNewton = g.eccentricStressPerNewton(in.connection().connectedLeg(), in.connection().edgeDistance())
+        double sigmaPerNewton = g.eccentricStressPerNewton(in.connection().connectedLeg())
                 * member.section().area() / cls.effectiveArea();
         double sigma = in.forces().compression() * sigmaPerNewton;
         return new CheckResult(CheckMode.COMBINED, CheckResult.ratio(sigma, fy / factors.gammaM0()),
