@@ -37,6 +37,7 @@ public final class HandMethod {
 
     /** Base diagonal d = √(b_x² + b_y²), m. */
     public static double baseDiagonal(double widthX, double widthY) {
+        requirePositive(widthX, widthY);
         return Math.hypot(widthX, widthY);
     }
 
@@ -47,16 +48,19 @@ public final class HandMethod {
 
     /** N/4 ± M/d: wind on the diagonal. */
     public static LegForces diagonal(double n, double m, double d) {
+        requirePositive(d, d);
         return new LegForces(n / 4 + m / d, m / d - n / 4);
     }
 
     /** N/4 ± M/(2b): wind normal to a face, b the base width along the wind. */
     public static LegForces faceNormal(double n, double m, double b) {
+        requirePositive(b, b);
         return new LegForces(n / 4 + m / (2 * b), m / (2 * b) - n / 4);
     }
 
     /** N/4 ± M (|cos θ|/(2 b_x) + |sin θ|/(2 b_y)): any azimuth. */
     public static LegForces atAzimuth(double n, double m, double azimuthDeg, double widthX, double widthY) {
+        requirePositive(widthX, widthY);
         double theta = Math.toRadians(azimuthDeg);
         double perMoment = Math.abs(Math.cos(theta)) / (2 * widthX) + Math.abs(Math.sin(theta)) / (2 * widthY);
         return new LegForces(n / 4 + m * perMoment, m * perMoment - n / 4);
@@ -72,5 +76,11 @@ public final class HandMethod {
         double m = baseMoment(h, zH) + otherMoment;
         return new Result(azimuthDeg, n, h, zH, m, baseDiagonal(widthX, widthY),
                 atAzimuth(n, m, azimuthDeg, widthX, widthY));
+    }
+
+    private static void requirePositive(double a, double b) {
+        if (!(a > 0) || !(b > 0) || !Double.isFinite(a) || !Double.isFinite(b)) {
+            throw new IllegalArgumentException("base widths and lever arms must be finite and > 0 m");
+        }
     }
 }
