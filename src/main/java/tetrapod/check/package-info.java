@@ -9,7 +9,9 @@
  * {@link tetrapod.check.MemberCheck} (EN 1993, ASCE 10), {@link tetrapod.check.BoltCheck},
  * {@link tetrapod.check.AnchorRodCheck}. Every check returns a
  * {@link tetrapod.check.CheckResult}: utilisation (demand / resistance), mode, clause and a note.
- * Envelopes over load cases and azimuths are built by the caller from these per-case results.
+ * Envelopes over load cases and azimuths are accumulated by the caller, case by case, in
+ * {@link tetrapod.check.MemberEnvelope} and {@link tetrapod.check.FoundationEnvelope} (each keeps
+ * the largest value with its case and azimuth; ties keep the earlier case).
  * SI units throughout. Formulas and sources: docs/methods-checks.md.
  */
 package tetrapod.check;
