@@ -65,7 +65,8 @@ public final class Asce10MemberCheck implements MemberCheck {
             }
             double fa = Asce10Slenderness.fa(s.klOverR(), fcr, e);
             out.add(new CheckResult(CheckMode.COMPRESSION_BUCKLING, CheckResult.ratio(f.compression(), fa * p.area()),
-                    "ASCE 10-97 3.6 (3.6-1)-(3.6-3), 3.7.4 curve " + s.curve(),
+                    "ASCE 10-97 3.6 (3.6-1)-(3.6-3), " + (s.curve() == 0 ? "3.7.4 leg KL/r = L/r (3.7-3)"
+                            : "3.7.4 curve " + s.curve()),
                     String.format(Locale.ROOT, "L/r = %.1f, KL/r = %.1f, C_c = %.1f, F_a = %.1f MPa, P_a = %.1f kN",
                             s.lOverR(), s.klOverR(), Asce10Slenderness.cc(fcr, e), fa / 1e6, fa * p.area() / 1e3)));
         }
@@ -212,7 +213,7 @@ public final class Asce10MemberCheck implements MemberCheck {
             double ampX = pc < pex ? 1 - pc / pex : 0;
             double ampY = pc < pey ? 1 - pc / pey : 0;
             double eq1 = ampX == 0 || ampY == 0
-                    ? En1993BoltCheck.TOO_CLOSE
+                    ? CheckResult.NO_RESISTANCE
                     : pc / pa + cmx * f.maxMomentY() / (max * ampX) + cmy * f.maxMomentZ() / (may * ampY);  // ASCE 10 (3.12-1)
             value = Math.max(eq1, eq2);
             note = String.format(Locale.ROOT, "(3.12-1) %.3f, (3.12-2) %.3f", eq1, eq2);

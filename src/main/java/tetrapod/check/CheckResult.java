@@ -21,6 +21,13 @@ public record CheckResult(CheckMode mode, double utilisation, String clause, Str
         }
     }
 
+    /**
+     * The utilisation shown when a demand meets no resistance at all (an edge distance leaving no
+     * bearing, a footing lifted off its base, a compression above the elastic critical force in an
+     * amplification factor): a finite number far above 1, never infinity or NaN.
+     */
+    public static final double NO_RESISTANCE = 99.0;
+
     public boolean passes() {
         return utilisation <= 1.0;
     }

@@ -46,7 +46,7 @@ public final class En1993BoltCheck implements BoltCheck {
                 single = ", single-bolt lap limit 1.5 f_u d t/γM2 (3.6.1 (10))";
             }
         }
-        double bearingUtilisation = fbRd > 0 ? CheckResult.ratio(force, n * fbRd) : (force > 0 ? TOO_CLOSE : 0);
+        double bearingUtilisation = fbRd > 0 ? CheckResult.ratio(force, n * fbRd) : (force > 0 ? CheckResult.NO_RESISTANCE : 0);
         CheckResult bearing = new CheckResult(CheckMode.BOLT_BEARING, bearingUtilisation,
                 "EN 1993-1-8 3.6.1, Table 3.4 (F_b,Rd)",
                 String.format(Locale.ROOT, "k1 = %.3f, α_b = %.3f, F_b,Rd = %.1f kN per bolt, t = %.1f mm%s", k1, alphaB,
@@ -62,7 +62,4 @@ public final class En1993BoltCheck implements BoltCheck {
                         c.endDistance() * 1e3, c.edgeDistance() * 1e3, c.pitch() * 1e3));
         return List.of(shear, bearing, detailing);
     }
-
-    /** Utilisation shown when the edge distance leaves no bearing resistance (k1 ≤ 0). */
-    static final double TOO_CLOSE = 99.0;
 }

@@ -210,7 +210,7 @@ public final class En1993MemberCheck implements MemberCheck {
         if (n <= 0) {
             return 0;
         }
-        return resistance > 0 ? n / resistance : En1993BoltCheck.TOO_CLOSE;
+        return resistance > 0 ? n / resistance : CheckResult.NO_RESISTANCE;
     }
 
     /**

@@ -48,8 +48,10 @@ record En1993Section(int sectionClass, double effectiveArea, boolean flagged, do
             }
             double lost = (1 - rho(h / t, eps)) * h * t + (1 - rho(b / t, eps)) * b * t;
             double effective = Math.max(area - lost, 0.05 * area);
-            return new En1993Section(4, effective, false, h / t, 15 * eps, "class 4 (h/t = " + f(h / t) + " > 15ε = "
-                    + f(15 * eps) + " or (b+h)/2t > 11.5ε), A_eff/A = " + f(effective / area) + " (EN 1993-1-5 4.4)");
+            String why = h / t > 15 * eps ? "h/t = " + f(h / t) + " > 15ε = " + f(15 * eps)
+                    : "(b+h)/2t = " + f((b + h) / (2 * t)) + " > 11.5ε = " + f(11.5 * eps);
+            return new En1993Section(4, effective, false, h / t, 15 * eps, "class 4 (" + why + "), A_eff/A = "
+                    + f(effective / area) + " by EN 1993-1-5 4.4" + (lost == 0 ? " (ρ = 1: no reduction)" : ""));
         }
         if (section.shape() instanceof SectionShape.Tube tube) {
             double ratio = tube.d() / tube.t();

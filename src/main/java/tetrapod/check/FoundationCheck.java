@@ -17,7 +17,8 @@ import tetrapod.model.spec.PartialFactors;
  *     being the design value of the factored load case.</li>
  * <li>Bearing (common practice): (C + W_block + W_soil on block) / (b_x b_y) ≤ q_allow.</li>
  * <li>Sliding (common practice): H × FS_sliding ≤ μ N, N the vertical force on the base (the
- *     compression plus the weights, or the weights less the uplift).</li>
+ *     compression plus the weights, or the weights less the uplift). Under uplift with anchor rods
+ *     the horizontal force is left to the rods (their shear check).</li>
  * <li>The concrete volume that would balance the uplift alone, without soil: T × FS/γ_c, or
  *     T/(γ_G,stb γ_c).</li>
  * </ul>
@@ -66,12 +67,18 @@ public final class FoundationCheck {
         out.add(new CheckResult(CheckMode.BEARING_PRESSURE, pressure / (spec.allowableBearing() * Units.KPA),
                 "allowable bearing pressure (common practice)",
                 String.format(Locale.ROOT, "q = %.1f kPa, allowable %.1f kPa", pressure / 1e3, spec.allowableBearing())));
-        double normal = Math.max(0, forces.vertical() + block.concreteWeight() + block.soilOnBlockWeight());
-        double friction = spec.friction() * normal;
-        double demand = forces.horizontal() * spec.slidingFactorOfSafety();
-        double sliding = demand <= 0 ? 0 : friction > 0 ? demand / friction : En1993BoltCheck.TOO_CLOSE;
-        out.add(new CheckResult(CheckMode.SLIDING, sliding, "H × FS ≤ μ N (common practice)",
-                String.format(Locale.ROOT, "H = %.1f kN, μ N = %.1f kN", forces.horizontal() / 1e3, friction / 1e3)));
+        if (forces.uplift() > 0 && rods != null) {
+            out.add(new CheckResult(CheckMode.SLIDING, 0, "H × FS ≤ μ N (common practice)",
+                    "the leg pulls up: the horizontal force is carried by the anchor rods (anchorShear)"));
+        } else {
+            double normal = Math.max(0, forces.vertical() + block.concreteWeight() + block.soilOnBlockWeight());
+            double friction = spec.friction() * normal;
+            double demand = forces.horizontal() * spec.slidingFactorOfSafety();
+            double sliding = demand <= 0 ? 0 : friction > 0 ? demand / friction : CheckResult.NO_RESISTANCE;
+            out.add(new CheckResult(CheckMode.SLIDING, sliding, "H × FS ≤ μ N (common practice)",
+                    String.format(Locale.ROOT, "H = %.1f kN, μ N = %.1f kN%s", forces.horizontal() / 1e3, friction / 1e3,
+                            friction > 0 ? "" : " (the block lifts off its base)")));
+        }
         if (rods != null) {
             out.addAll(rods.check(forces.uplift(), forces.horizontal()));
         }
