@@ -14,7 +14,9 @@ import tetrapod.model.spec.TowerSpec;
 
 /**
  * Turns a generated frame back into a spec that gives the same frame node by node, so that a
- * generated tower can be edited by hand or run through any other frame program.
+ * generated tower can be edited by hand or run through any other frame program. Members given
+ * node by node have no segment, so check settings per segment keep only each role's first entry
+ * ({@link tetrapod.model.spec.ChecksSpec#withoutSegments}).
  */
 public final class ExplicitSpecs {
 
@@ -45,6 +47,6 @@ public final class ExplicitSpecs {
         return new TowerSpec(original.name(), description, original.idealisation(), null, List.of(),
                 original.material(), null, original.connectionAllowance(), List.of(),
                 original.userSections(), new ExplicitFrameSpec(nodes, members, supports), original.loads().forExplicitFrame(),
-                original.checks());
+                original.isExplicit() ? original.checks() : original.checks().withoutSegments());
     }
 }

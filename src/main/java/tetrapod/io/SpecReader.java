@@ -133,7 +133,9 @@ public final class SpecReader {
             LoadsSpec loads = loadFields == null ? LoadsSpec.NONE : new LoadsReader(problems).read(loadFields, nodeExists, loadTower);
 
             Fields checkFields = root.object("checks", false);
-            ChecksSpec checks = checkFields == null ? ChecksSpec.DEFAULT : new ChecksReader(problems).read(checkFields);
+            int segmentCount = explicit && !generated ? 0 : segments == null ? -1 : segments.size();
+            ChecksSpec checks = checkFields == null ? ChecksSpec.DEFAULT
+                    : new ChecksReader(problems, segmentCount).read(checkFields);
 
             if (problems.count() > 0) {
                 return null;

@@ -12,7 +12,11 @@ import tetrapod.model.Restraint;
 import tetrapod.model.Role;
 import tetrapod.model.spec.AncillarySpec;
 import tetrapod.model.spec.CombinationSpec;
+import tetrapod.model.spec.BucklingOverride;
+import tetrapod.model.spec.ChecksSpec;
+import tetrapod.model.spec.ConnectionSpec;
 import tetrapod.model.spec.ExplicitFrameSpec;
+import tetrapod.model.spec.FoundationSpec;
 import tetrapod.model.spec.ExplicitFrameSpec.MemberSpec;
 import tetrapod.model.spec.ExplicitFrameSpec.NodeSpec;
 import tetrapod.model.spec.ExplicitFrameSpec.SupportSpec;
@@ -21,6 +25,7 @@ import tetrapod.model.spec.LoadAction;
 import tetrapod.model.spec.LoadsSpec;
 import tetrapod.model.spec.LoadsSpec.NodalLoadSpec;
 import tetrapod.model.spec.MaterialSpec;
+import tetrapod.model.spec.PartialFactors;
 import tetrapod.model.spec.SegmentSpec;
 import tetrapod.model.spec.TowerSpec;
 import tetrapod.model.spec.UserSectionSpec;
@@ -81,7 +86,90 @@ public final class SpecWriter {
         if (!loads.isEmpty()) {
             m.put("loads", loads);
         }
-        m.put("checks", Map.of("method", spec.checks().method().jsonName()));
+        m.put("checks", checks(spec.checks()));
+        return m;
+    }
+
+    /**
+     * {@code checks}: the method always; partial factors when they differ from the recommended
+     * ones; buckling overrides, connections and the foundation when given, with their defaults
+     * written out.
+     */
+    private static Map<String, Object> checks(ChecksSpec c) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("method", c.method().jsonName());
+        if (!c.partialFactors().equals(PartialFactors.RECOMMENDED)) {
+            PartialFactors f = c.partialFactors();
+            m.put("partialFactors", ordered("gammaM0", f.gammaM0(), "gammaM1", f.gammaM1(), "gammaM2", f.gammaM2()));
+        }
+        if (!c.bucklingLengths().isEmpty()) {
+            m.put("bucklingLengths", c.bucklingLengths().stream().map(SpecWriter::bucklingOverride).toList());
+        }
+        if (!c.connections().isEmpty()) {
+            m.put("connections", c.connections().stream().map(SpecWriter::connection).toList());
+        }
+        c.foundationSpec().ifPresent(f -> m.put("foundation", foundation(f)));
+        return m;
+    }
+
+    private static Map<String, Object> bucklingOverride(BucklingOverride b) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("role", b.role().jsonName());
+        if (!b.segments().isEmpty()) {
+            m.put("segments", b.segments());
+        }
+        m.put("minorAxisFactor", b.minorAxisFactor());
+        m.put("geometricAxisFactor", b.geometricAxisFactor());
+        m.put("crossing", b.crossing().jsonName());
+        return m;
+    }
+
+    private static Map<String, Object> connection(ConnectionSpec c) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("role", c.role().jsonName());
+        if (!c.segments().isEmpty()) {
+            m.put("segments", c.segments());
+        }
+        m.put("bolts", c.bolts());
+        m.put("diameter_mm", wholeMillimetres(c.diameter()));
+        m.put("grade", c.grade().jsonName());
+        m.put("holeClearance_mm", c.holeClearance());
+        m.put("endDistance_mm", c.endDistance());
+        m.put("edgeDistance_mm", c.edgeDistance());
+        m.put("pitch_mm", c.pitch());
+        m.put("shearPlanes", c.shearPlanes());
+        m.put("threadsInShearPlane", c.threadsInShearPlane());
+        m.put("holesInSection", c.holesInSection());
+        m.put("connectedLeg", c.connectedLeg().jsonName());
+        return m;
+    }
+
+    /** A metric bolt size as a whole number (16, not 16.0), as the schema lists the sizes. */
+    private static Object wholeMillimetres(double mm) {
+        return mm == Math.rint(mm) ? (Object) (int) mm : (Object) mm;
+    }
+
+    private static Map<String, Object> foundation(FoundationSpec f) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        FoundationSpec.Block b = f.block();
+        m.put("block", ordered("widthX", b.widthX(), "widthY", b.widthY(), "height", b.height(), "depth", b.depth()));
+        m.put("concreteUnitWeight", f.concreteUnitWeight());
+        m.put("soilUnitWeight", f.soilUnitWeight());
+        m.put("frustumHalfAngle", f.frustumHalfAngle());
+        if (f.uplift() instanceof FoundationSpec.FactorOfSafety fs) {
+            m.put("uplift", ordered("factorOfSafety", fs.factor()));
+        } else {
+            m.put("uplift", ordered("gammaStabilising", ((FoundationSpec.PartialFactor) f.uplift()).gammaStabilising()));
+        }
+        m.put("allowableBearing", f.allowableBearing());
+        m.put("friction", f.friction());
+        m.put("slidingFactorOfSafety", f.slidingFactorOfSafety());
+        if (f.anchorRods() instanceof FoundationSpec.RodsByGrade g) {
+            m.put("anchorRods", ordered("count", g.count(), "diameter_mm", wholeMillimetres(g.diameter()), "grade", g.grade().jsonName()));
+        } else if (f.anchorRods() instanceof FoundationSpec.RodsByAllowableStress a) {
+            m.put("anchorRods", ordered("count", a.count(), "diameter_mm", a.diameter(),
+                    "allowableTension", a.allowableTension(), "allowableShear", a.allowableShear()));
+        }
         return m;
     }
 

@@ -99,7 +99,23 @@ class BadSpecsTest {
                         "the model has no wind (loads.wind)", 1),
                 new Case("wind-on-explicit-frame.json", "loads.wind", 9, "applies only to a generated tower", 1),
                 new Case("sweep-step-not-divisor.json", "loads.sweepStep", 10,
-                        "360° is not a whole number of steps of 7°", 1));
+                        "360° is not a whole number of steps of 7°", 1),
+                new Case("checks-unknown-key.json", "checks.conections", 12, "unknown key; did you mean 'connections'?", 1),
+                new Case("checks-bolt-grade.json", "checks.connections[0].grade", 13,
+                        "unknown bolt grade '8.9'; expected one of 4.6, 5.6, 8.8, 10.9", 1),
+                new Case("checks-bolt-size.json", "checks.connections[0].diameter_mm", 13,
+                        "must be a metric coarse thread size from M12 to M72", 1),
+                new Case("checks-factors-asce.json", "checks.partialFactors", 12, "applies to method en1993 only", 1),
+                new Case("checks-connection-overlap.json", "checks.connections[1]", 13,
+                        "covers diagonal members already covered by checks.connections[0]", 1),
+                new Case("checks-segment-out-of-range.json", "checks.bucklingLengths[0].segments[0]", 12,
+                        "must be a whole number from 1 to 2, was 3", 1),
+                new Case("checks-uplift-both.json", "checks.foundation.uplift", 14,
+                        "give either factorOfSafety (uplift × FS ≤ weights) or gammaStabilising (EN 1997 UPL), not both", 1),
+                new Case("checks-anchor-no-resistance.json", "checks.foundation.anchorRods", 15,
+                        "give either grade (4.6, 5.6, 8.8, 10.9) or allowableTension and allowableShear in MPa", 1),
+                new Case("checks-frustum-angle.json", "checks.foundation.frustumHalfAngle", 14,
+                        "must be ≥ 0 degrees and < 90 degrees, was 90", 1));
     }
 
     @ParameterizedTest(name = "{0}")

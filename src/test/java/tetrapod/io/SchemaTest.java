@@ -67,7 +67,8 @@ class SchemaTest {
         "not-an-object.json", "wind-negative-speed.json", "wind-absurd-speed.json", "wind-unknown-terrain.json",
         "wind-unknown-exposure.json", "wind-unknown-method.json", "wind-key-of-other-method.json",
         "wind-direction-factors-count.json", "ice-negative-thickness.json", "combination-misspelt-action.json",
-        "wind-on-explicit-frame.json"})
+        "wind-on-explicit-frame.json",
+        "checks-unknown-key.json", "checks-bolt-grade.json", "checks-bolt-size.json", "checks-uplift-both.json", "checks-anchor-no-resistance.json", "checks-frustum-angle.json"})
     void schemaRefusesBadSpecs(String file) throws IOException {
         JsonNode tree = MAPPER.readTree(BadSpecsTest.resource(file));
         assertFalse(schema().validate(tree).isEmpty(), file + " passed the schema");
@@ -78,7 +79,8 @@ class SchemaTest {
     @ValueSource(strings = {"unknown-section.json", "panel-heights-sum.json", "panel-heights-count.json",
         "material-fu-below-fy.json", "user-angle-too-thick.json", "frame-member-missing-node.json",
         "frame-duplicate-node-id.json", "load-on-missing-node.json", "ancillary-above-top.json",
-        "combination-wind-without-wind.json", "sweep-step-not-divisor.json"})
+        "combination-wind-without-wind.json", "sweep-step-not-divisor.json",
+        "checks-factors-asce.json", "checks-connection-overlap.json", "checks-segment-out-of-range.json"})
     void someFaultsNeedTheReader(String file) throws IOException {
         JsonNode tree = MAPPER.readTree(BadSpecsTest.resource(file));
         assertEquals(Set.of(), schema().validate(tree), file);

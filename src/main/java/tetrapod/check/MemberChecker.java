@@ -1,0 +1,91 @@
+package tetrapod.check;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.IntFunction;
+import java.util.function.IntToDoubleFunction;
+import tetrapod.generate.Tower;
+import tetrapod.model.Frame;
+import tetrapod.model.Member;
+import tetrapod.model.spec.ChecksSpec;
+import tetrapod.model.spec.ConnectionSpec;
+
+/**
+ * Checks the members of one frame by the method of {@code checks.method}, one load case at a
+ * time: it finds each member's connection (from {@code checks.connections}, else the role's
+ * assumed one) and its buckling lengths in that case (the X-bracing rule needs the forces of the
+ * other diagonals). Immutable; safe to share between threads.
+ */
+public final class MemberChecker {
+
+    private final Frame frame;
+    private final MemberCheck method;
+    private final BucklingLengths buckling;
+    private final Map<Integer, Member> members = new HashMap<>();
+    private final Map<Integer, Connection> connections = new HashMap<>();
+
+    public MemberChecker(Frame frame, ChecksSpec checks) {
+        this.frame = frame;
+        this.method = MemberCheck.of(checks);
+        this.buckling = BucklingLengths.of(frame, checks.bucklingLengths());
+        for (Member m : frame.members()) {
+            members.put(m.id(), m);
+            connections.put(m.id(), connectionFor(m, checks.connections()));
+        }
+    }
+
+    public static MemberChecker of(Tower tower, ChecksSpec checks) {
+        return new MemberChecker(tower.frame(), checks);
+    }
+
+    private static Connection connectionFor(Member m, List<ConnectionSpec> specs) {
+        for (ConnectionSpec spec : specs) {
+            if (spec.covers(m.role(), m.segment())) {
+                return Connection.of(spec, false);
+            }
+        }
+        return Connection.assumed(m.role());
+    }
+
+    public MemberCheck method() {
+        return method;
+    }
+
+    public BucklingLengths bucklingLengths() {
+        return buckling;
+    }
+
+    /** The end connection used for member {@code memberId}. */
+    public Connection connectionOf(int memberId) {
+        Connection c = connections.get(memberId);
+        if (c == null) {
+            throw new IllegalArgumentException("no member " + memberId);
+        }
+        return c;
+    }
+
+    /**
+     * Checks member {@code memberId} under {@code forces}; {@code axialForce} gives the axial force
+     * (N, tension positive) of every member in the same load case, for the crossing rule.
+     */
+    public MemberCheckResult check(int memberId, MemberForces forces, IntToDoubleFunction axialForce) {
+        Member m = members.get(memberId);
+        if (m == null) {
+            throw new IllegalArgumentException("no member " + memberId);
+        }
+        BucklingLength lengths = buckling.forCase(memberId, axialForce);
+        return method.check(new MemberCheckInput(m, frame.material(), lengths, connections.get(memberId), forces));
+    }
+
+    /** Checks every member of the frame for one load case, in the frame's member order. */
+    public List<MemberCheckResult> checkAll(IntFunction<MemberForces> forcesOfMember) {
+        IntToDoubleFunction axial = id -> forcesOfMember.apply(id).axial();
+        List<MemberCheckResult> results = new ArrayList<>(frame.members().size());
+        for (Member m : frame.members()) {
+            results.add(check(m.id(), forcesOfMember.apply(m.id()), axial));
+        }
+        return List.copyOf(results);
+    }
+}

@@ -1,0 +1,120 @@
+package tetrapod.check;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import org.junit.jupiter.api.Test;
+import tetrapod.model.spec.BoltGrade;
+import tetrapod.model.spec.FoundationSpec;
+import tetrapod.model.spec.PartialFactors;
+
+/** Anchor rods, uplift, bearing and sliding of a leg footing, against the values and hand calculations. */
+class FoundationCheckTest {
+
+    private static CheckResult find(FoundationResult r, CheckMode mode) {
+        return r.checks().stream().filter(c -> c.mode() == mode).findFirst()
+                .orElseThrow(() -> new AssertionError("no " + mode + " in " + r.checks()));
+    }
+
+    /** EN 1993-1-8 Table 3.4: F_t,Rd = k2 f_ub A_s/γM2 = 0.9 · 800 · 353/1.25 = 203.3 kN for an M24 8.8 rod (A_s = 353 mm², ISO 898-1). */
+    @Test
+    void m24GradeEightEightRodInTension() {
+        En1993AnchorRods rods = new En1993AnchorRods(4, 0.024, BoltGrade.G8_8, 1.25);
+        assertEquals(203.3e3, rods.tensionResistance(), 203.3e3 * 0.005);
+        // four rods, 400 kN uplift: 100 kN per rod, 100/203.3 = 0.492
+        CheckResult tension = rods.check(400e3, 0).get(0);
+        assertEquals(CheckMode.ANCHOR_TENSION, tension.mode());
+        assertEquals(0.492, tension.utilisation(), 0.005);
+    }
+
+    /**
+     * Tension with shear, EN 1993-1-8 Table 3.4: F_v,Ed/F_v,Rd + F_t,Ed/(1.4 F_t,Rd); M24 8.8 through the
+     * threads F_v,Rd = 0.6 · 800 · 353/1.25 = 135.6 kN; 100 kN tension and 40 kN shear per rod:
+     * 40/135.6 + 100/(1.4 · 203.3) = 0.2950 + 0.3514 = 0.646.
+     */
+    @Test
+    void rodInTensionWithShear() {
+        En1993AnchorRods rods = new En1993AnchorRods(1, 0.024, BoltGrade.G8_8, 1.25);
+        CheckResult combined = rods.check(100e3, 40e3).get(2);
+        assertEquals(CheckMode.ANCHOR_COMBINED, combined.mode());
+        assertEquals(0.646, combined.utilisation(), 0.004);
+    }
+
+    /**
+     * Three 120 mm rods at an allowable 60 MPa carry about 2 036 kN (common practice, allowable-stress
+     * check, the issue's figure): 3 · π · 60² mm² · 60 MPa = 2 035.75 kN — the figure is reached on the
+     * gross area of the rod, π d²/4 with d = 120 mm (radius 60 mm), so that is the area basis.
+     */
+    @Test
+    void threeLargeRodsAtAnAllowableStress() {
+        AllowableStressAnchorRods rods = new AllowableStressAnchorRods(3, 0.120, 60e6, 40e6);
+        assertEquals(2035.75e3, rods.tensionCapacity(), 0.01e3);
+        assertEquals(1.0, rods.check(2035.75e3, 0).get(0).utilisation(), 1e-5);
+    }
+
+    /**
+     * 75 m³ of concrete at 25 kN/m³ (EN 1991-1-1 Table A.1, reinforced concrete) balances 1 875 kN:
+     * with a factor of 1, the volume needed for 1 875 kN of uplift is 1 875/25 = 75 m³; and a 5 × 5 × 3 m
+     * block (75 m³) standing on the ground under 1 875 kN of uplift is used exactly.
+     */
+    @Test
+    void concreteVolumeBalancingUplift() {
+        FoundationSpec spec = new FoundationSpec(new FoundationSpec.Block(5, 5, 3, 0), 25, 18, 20,
+                new FoundationSpec.FactorOfSafety(1.0), 200, 0.4, 1.5, null);
+        FoundationCheck check = new FoundationCheck(spec, PartialFactors.RECOMMENDED);
+        assertEquals(75.0, check.concreteVolumeToBalance(1875e3), 1e-9);
+        FoundationResult r = check.check(new LegBaseForces(-1875e3, 0));
+        assertEquals(1.0, find(r, CheckMode.UPLIFT).utilisation(), 1e-9);
+        assertEquals(75.0, r.concreteVolumeRequired(), 1e-9);
+    }
+
+    /**
+     * The prismatoid formula against the frustum of a pyramid V = h/3 (A1 + A2 + √(A1 A2)): a 2 × 2 m
+     * block under 1.5 m of soil, half-angle 30°: spread 1.5 tan 30° = 0.8660 m, top 3.7321² = 13.928 m²,
+     * V = 0.5 (4 + 13.928 + 7.464) = 12.696 m³. Rectangular 2 × 3 m, 1.2 m, 20°: the integral
+     * ∫(2 + 2z tan θ)(3 + 2z tan θ) dz = 2·3·1.2 + 5 tan θ · 1.2² + 4/3 tan²θ · 1.2³ = 7.2 + 2.6206 + 0.3052 = 10.1258 m³.
+     */
+    @Test
+    void frustumVolumeByThePrismatoidFormula() {
+        FootingBlock square = new FootingBlock(2, 2, 1, 2.5, 25e3, 18e3, Math.toRadians(30));
+        double a1 = 4;
+        double a2 = Math.pow(2 + 2 * 1.5 * Math.tan(Math.toRadians(30)), 2);
+        assertEquals(1.5 / 3 * (a1 + a2 + Math.sqrt(a1 * a2)), square.frustumVolume(), 1e-9);
+        assertEquals(12.696, square.frustumVolume(), 5e-4);
+        double t = Math.tan(Math.toRadians(20));
+        FootingBlock rectangle = new FootingBlock(2, 3, 1, 2.2, 25e3, 18e3, Math.toRadians(20));
+        assertEquals(2 * 3 * 1.2 + 5 * t * 1.44 + 4.0 / 3 * t * t * Math.pow(1.2, 3), rectangle.frustumVolume(), 1e-9);
+        assertEquals(10.1258, rectangle.frustumVolume(), 5e-4);
+        // a prismatoid of one constant section is a prism
+        assertEquals(6.0, FootingBlock.prismatoidVolume(2, 3, 3, 3), 1e-12);
+    }
+
+    /**
+     * A 2 × 2 × 1 m block with its base 2 m deep (1 m of soil on it), γc = 25, γs = 18 kN/m³,
+     * half-angle 0: the block weighs 100 kN, the soil on it 72 kN.
+     * Bearing under 300 kN: (300 + 100 + 72)/4 = 118 kPa against 200 kPa: 0.59.
+     * Sliding under H = 50 kN, μ = 0.4, FS 1.5: 1.5 · 50/(0.4 · 472) = 0.3972.
+     * Uplift 150 kN with γ_G,stb = 0.9 (EN 1997-1 UPL): 150/(0.9 · 172) = 0.9690; the concrete alone to
+     * balance it, 150/(0.9 · 25) = 6.667 m³.
+     */
+    @Test
+    void bearingSlidingAndUpliftByHand() {
+        FoundationSpec spec = new FoundationSpec(new FoundationSpec.Block(2, 2, 1, 2), 25, 18, 0,
+                new FoundationSpec.PartialFactor(0.9), 200, 0.4, 1.5, null);
+        FoundationCheck check = new FoundationCheck(spec, PartialFactors.RECOMMENDED);
+        FoundationResult compression = check.check(new LegBaseForces(300e3, 50e3));
+        assertEquals(0.59, find(compression, CheckMode.BEARING_PRESSURE).utilisation(), 1e-9);
+        assertEquals(0.3972, find(compression, CheckMode.SLIDING).utilisation(), 5e-5);
+        assertEquals(0, find(compression, CheckMode.UPLIFT).utilisation());
+        FoundationResult uplift = check.check(new LegBaseForces(-150e3, 0));
+        assertEquals(0.9690, find(uplift, CheckMode.UPLIFT).utilisation(), 5e-5);
+        assertEquals(6.667, uplift.concreteVolumeRequired(), 5e-4);
+    }
+
+    @Test
+    void legBaseForcesFromTheReaction() {
+        LegBaseForces f = LegBaseForces.fromReaction(30e3, -40e3, -100e3);
+        assertEquals(50e3, f.horizontal(), 1e-9);
+        assertEquals(100e3, f.uplift(), 1e-9);
+        assertEquals(0, f.compression());
+    }
+}
