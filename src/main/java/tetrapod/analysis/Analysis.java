@@ -1,10 +1,19 @@
 package tetrapod.analysis;
 
 import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import java.util.List;
 import tetrapod.common.ProgressListener;
 import tetrapod.common.UnstableStructureException;
+import tetrapod.check.Extreme;
+import tetrapod.check.FoundationCheck;
+import tetrapod.check.FoundationEnvelope;
+import tetrapod.check.MemberChecker;
+import tetrapod.check.MemberEnvelope;
 import tetrapod.generate.Tower;
+import tetrapod.model.spec.ChecksSpec;
 import tetrapod.load.AzimuthWind;
 import tetrapod.load.CaseKey;
 import tetrapod.load.Combination;
@@ -36,7 +45,7 @@ public final class Analysis {
      *
      * @throws UnstableStructureException when the structure is a mechanism
      */
-    public static AnalysisResult run(Tower tower, TowerLoads loads, ProgressListener progress)
+    public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, ProgressListener progress)
             throws UnstableStructureException {
         StructuralModel model = StructuralModel.of(tower.frame());
         FactoredSystem system = Solver.factor(model, progress);
@@ -47,7 +56,15 @@ public final class Analysis {
         }
         BasisResponses responses = BasisResponses.of(system, vectors);
 
-        Sweep sweep = new Sweep(tower.frame(), responses);
+        FoundationCheck footing = checks.foundationSpec()
+                .map(f -> new FoundationCheck(f, checks.partialFactors())).orElse(null);
+        LoadResultants resultants = new LoadResultants(tower.frame(),
+                basis.components().stream().map(LoadComponent::loads).toList());
+        double baseX = tower.isGenerated() ? tower.levels().get(0).widthX() : Double.NaN;
+        double baseY = tower.isGenerated() ? tower.levels().get(0).widthY() : Double.NaN;
+        Sweep sweep = new Sweep(tower.frame(), responses, MemberChecker.of(tower, checks), footing, resultants,
+                baseX, baseY);
+        Map<String, CaseKey> keys = new HashMap<>();
         List<Double> azimuths = loads.azimuths();
         long total = 0;
         for (Combination c : loads.combinations()) {
@@ -56,28 +73,50 @@ public final class Analysis {
         long done = 0;
         double[] weights = new double[basis.size()];
         for (Combination c : loads.combinations()) {
-            if (c.hasWind()) {
-                sweep.startCombination(c.name(), azimuths.size());
-                for (double azimuth : azimuths) {
-                    sweep.add(c.name(), azimuth, basis.weights(c, azimuth, weights));
-                    progress.progress("sweep", ++done, total);
-                }
-            } else {
-                sweep.add(c.name(), null, basis.weights(c, null, weights));
+            for (Double azimuth : c.hasWind() ? azimuths : java.util.Collections.<Double>singletonList(null)) {
+                CaseKey key = new CaseKey(c, azimuth);
+                keys.put(key.id(), key);
+                sweep.add(c, azimuth, basis.weights(c, azimuth, weights));
                 progress.progress("sweep", ++done, total);
             }
         }
 
-        List<SolvedCase> cases = new ArrayList<>();
+        Map<String, CaseKey> reported = new LinkedHashMap<>();
         for (Combination c : loads.combinations()) {
             for (Double azimuth : c.hasWind() ? REPORTED_AZIMUTHS : java.util.Collections.<Double>singletonList(null)) {
-                cases.add(solveCase(system, loads.loadCase(new CaseKey(c, azimuth))));
+                CaseKey key = new CaseKey(c, azimuth);
+                reported.put(key.id(), key);
             }
+        }
+        List<LegBaseExtremes> legBases = sweep.legBaseExtremes();
+        List<MemberEnvelope> members = sweep.memberEnvelopes();
+        List<FoundationEnvelope> foundations = sweep.foundationEnvelopes();
+        for (LegBaseExtremes leg : legBases) {
+            for (Extreme e : List.of(leg.compression(), leg.uplift(), leg.shear())) {
+                addGoverning(reported, keys, e);
+            }
+        }
+        for (MemberEnvelope m : members) {
+            addGoverning(reported, keys, m.governingWhere());
+        }
+        for (FoundationEnvelope f : foundations) {
+            f.checks().values().forEach(g -> addGoverning(reported, keys, g.where()));
+        }
+        List<SolvedCase> cases = new ArrayList<>(reported.size());
+        for (CaseKey key : reported.values()) {
+            cases.add(solveCase(system, loads.loadCase(key)));
         }
         List<AzimuthWind> wind = new ArrayList<>();
         loads.wind().ifPresent(w -> REPORTED_AZIMUTHS.forEach(a -> wind.add(w.azimuth(a))));
-        return new AnalysisResult(tower, loads, model, cases, wind, sweep.legBaseSweeps(), sweep.legBaseExtremes(),
-                sweep.memberEnvelopes(), responses, (int) total);
+        return new AnalysisResult(tower, loads, model, cases, wind, sweep.legBaseSweeps(), legBases, members,
+                foundations, sweep.handComparisons(), responses, (int) total);
+    }
+
+    /** Adds the case where {@code e} occurred to the reported cases (after those already there). */
+    private static void addGoverning(Map<String, CaseKey> reported, Map<String, CaseKey> keys, Extreme e) {
+        if (e != null && e.caseId() != null && keys.containsKey(e.caseId())) {
+            reported.putIfAbsent(e.caseId(), keys.get(e.caseId()));
+        }
     }
 
     /** Solves one load case directly (not by superposition), for a full report of it. */

@@ -1,33 +1,54 @@
 package tetrapod.analysis;
 
 import java.util.List;
+import tetrapod.check.FoundationEnvelope;
+import tetrapod.check.MemberEnvelope;
 import tetrapod.generate.Tower;
 import tetrapod.load.AzimuthWind;
 import tetrapod.load.TowerLoads;
-
 import tetrapod.solve.BasisResponses;
 import tetrapod.solve.StructuralModel;
 
 /**
  * Everything the analysis found.
  *
- * @param cases        the cases reported in full: each combination without wind once, each with
- *                     wind at 0, 45, ... 315 degrees
- * @param wind         the wind on each panel at each reported azimuth
- * @param sweep        every leg base's reaction against azimuth, per combination with wind
- * @param legBases     governing reactions of each leg base over every case of the sweep
- * @param members      largest tension and compression of each member over every case
- * @param responses    the superposable responses, for further cases
- * @param caseCount    number of load cases covered (combinations × azimuths)
+ * @param cases       the cases reported in full: each combination without wind once, each with
+ *                    wind at 0, 45, ... 315 degrees, and every case that governs a member, a leg
+ *                    base or a footing
+ * @param wind        the wind on each panel at each reported azimuth
+ * @param sweep       every leg base's reaction against azimuth, per combination with wind
+ * @param legBases    governing reactions of each leg base over every case
+ * @param members     every member's governing check and largest tension and compression
+ * @param foundations every footing's governing checks (empty when the model gives no foundation)
+ * @param hand        the hand method beside the analysis, per wind combination and azimuth
+ * @param responses   the superposable responses, for further cases
+ * @param caseCount   number of load cases covered (combinations × azimuths)
  */
 public record AnalysisResult(Tower tower, TowerLoads loads, StructuralModel model, List<SolvedCase> cases,
                              List<AzimuthWind> wind, List<LegBaseSweep> sweep, List<LegBaseExtremes> legBases,
-                             List<MemberAxialEnvelope> members, BasisResponses responses, int caseCount) {
+                             List<MemberEnvelope> members, List<FoundationEnvelope> foundations,
+                             List<HandComparison> hand, BasisResponses responses, int caseCount) {
     public AnalysisResult {
         cases = List.copyOf(cases);
         wind = List.copyOf(wind);
         sweep = List.copyOf(sweep);
         legBases = List.copyOf(legBases);
         members = List.copyOf(members);
+        foundations = List.copyOf(foundations);
+        hand = List.copyOf(hand);
+    }
+
+    /** The largest utilisation of any member or footing. */
+    public double maxUtilisation() {
+        double max = 0;
+        for (MemberEnvelope m : members) {
+            max = Math.max(max, m.governing() == null ? 0 : m.governing().utilisation());
+        }
+        for (FoundationEnvelope f : foundations) {
+            for (FoundationEnvelope.Governing g : f.checks().values()) {
+                max = Math.max(max, g.check().utilisation());
+            }
+        }
+        return max;
     }
 }

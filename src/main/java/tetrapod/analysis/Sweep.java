@@ -4,71 +4,151 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import tetrapod.check.Extreme;
+import tetrapod.check.FoundationCheck;
+import tetrapod.check.FoundationEnvelope;
+import tetrapod.check.HandMethod;
+import tetrapod.check.LegBaseForces;
+import tetrapod.check.MemberChecker;
+import tetrapod.check.MemberEnvelope;
+import tetrapod.check.MemberForces;
+import tetrapod.load.CaseKey;
+import tetrapod.load.Combination;
 import tetrapod.model.Frame;
+import tetrapod.model.Member;
 import tetrapod.solve.BasisResponses;
 
 /**
- * Collects, case by case, the leg base reactions against azimuth and the extremes of reactions and
- * member axial forces. Keeps envelopes, not every case's results.
+ * Takes the cases one by one (formed by superposition) and keeps what the report needs: each leg
+ * base's reaction against azimuth, the extremes of the reactions, every member's check envelope,
+ * every footing's check envelope, and the hand method beside the analysis. Keeps envelopes, not
+ * every case's results.
  */
 final class Sweep {
 
     private final Frame frame;
     private final BasisResponses responses;
+    private final MemberChecker checker;
+    private final FoundationCheck footing;
+    private final LoadResultants resultants;
+    private final double baseWidthX;
+    private final double baseWidthY;
     private final List<Integer> supportNodes;
     private final double[] reactions;
     private final double[] axial;
+    private final double[] ends = new double[12];
+    private final double[] totals = new double[5];
+    private final Map<Integer, Integer> memberIndex;
     private final Map<String, List<double[]>> perCombination = new LinkedHashMap<>();
     private final Extreme[] compression;
     private final Extreme[] uplift;
     private final Extreme[] shear;
-    private final Extreme[] tension;
-    private final Extreme[] memberCompression;
+    private final MemberEnvelope[] members;
+    private final FoundationEnvelope[] foundations;
+    private final List<HandComparison> hand = new ArrayList<>();
 
-    Sweep(Frame frame, BasisResponses responses) {
+    /**
+     * @param footing    the footing check, or null when the model gives no foundation
+     * @param baseWidthX leg spacing along x at the base, m; NaN for an explicit frame (no hand method)
+     */
+    Sweep(Frame frame, BasisResponses responses, MemberChecker checker, FoundationCheck footing,
+          LoadResultants resultants, double baseWidthX, double baseWidthY) {
         this.frame = frame;
         this.responses = responses;
+        this.checker = checker;
+        this.footing = footing;
+        this.resultants = resultants;
+        this.baseWidthX = baseWidthX;
+        this.baseWidthY = baseWidthY;
         this.supportNodes = Analysis.supportNodes(frame.supports());
         this.reactions = new double[6 * supportNodes.size()];
         this.axial = new double[frame.members().size()];
-        this.compression = new Extreme[supportNodes.size()];
-        this.uplift = new Extreme[supportNodes.size()];
-        this.shear = new Extreme[supportNodes.size()];
-        this.tension = new Extreme[frame.members().size()];
-        this.memberCompression = new Extreme[frame.members().size()];
+        this.memberIndex = new java.util.HashMap<>();
+        for (int m = 0; m < frame.members().size(); m++) {
+            memberIndex.put(frame.members().get(m).id(), m);
+        }
+        int s = supportNodes.size();
+        this.compression = filled(s);
+        this.uplift = filled(s);
+        this.shear = filled(s);
+        this.members = new MemberEnvelope[frame.members().size()];
+        for (int m = 0; m < members.length; m++) {
+            members[m] = MemberEnvelope.empty(frame.members().get(m).id());
+        }
+        this.foundations = new FoundationEnvelope[footing == null ? 0 : s];
+        for (int k = 0; k < foundations.length; k++) {
+            foundations[k] = FoundationEnvelope.empty(supportNodes.get(k));
+        }
     }
 
-    void startCombination(String combination, int azimuths) {
-        perCombination.put(combination, new ArrayList<>(azimuths));
+    private static Extreme[] filled(int n) {
+        Extreme[] e = new Extreme[n];
+        java.util.Arrays.fill(e, Extreme.NONE);
+        return e;
     }
 
-    /** One case: the combination, its azimuth (null without wind) and the basis weights (input). */
-    void add(String combination, Double azimuthDeg, double[] weights) {
+    /** One case: its combination, its azimuth (null without wind) and the basis weights (input). */
+    void add(Combination combination, Double azimuthDeg, double[] weights) {
+        String caseId = new CaseKey(combination, azimuthDeg).id();
         responses.reactions(weights, reactions);
-        List<double[]> rows = perCombination.get(combination);
+        List<double[]> rows = azimuthDeg == null ? null
+                : perCombination.computeIfAbsent(combination.name(), k -> new ArrayList<>());
+        double feCompression = Double.NEGATIVE_INFINITY;
+        double feTension = Double.NEGATIVE_INFINITY;
         for (int s = 0; s < supportNodes.size(); s++) {
+            double fx = reactions[6 * s];
+            double fy = reactions[6 * s + 1];
             double fz = reactions[6 * s + 2];
-            double fh = Math.hypot(reactions[6 * s], reactions[6 * s + 1]);
-            compression[s] = larger(compression[s], fz, combination, azimuthDeg);
-            uplift[s] = larger(uplift[s], -fz, combination, azimuthDeg);
-            shear[s] = larger(shear[s], fh, combination, azimuthDeg);
+            double fh = Math.hypot(fx, fy);
+            feCompression = Math.max(feCompression, fz);
+            feTension = Math.max(feTension, -fz);
+            if (fz > 0) {
+                compression[s] = compression[s].max(fz, caseId, azimuthDeg);
+            }
+            if (fz < 0) {
+                uplift[s] = uplift[s].max(-fz, caseId, azimuthDeg);
+            }
+            shear[s] = shear[s].max(fh, caseId, azimuthDeg);
             if (rows != null) {
                 rows.add(new double[] {s, azimuthDeg, fz, fh});
+            }
+            if (footing != null) {
+                LegBaseForces f = LegBaseForces.fromReaction(fx, fy, fz);
+                foundations[s] = foundations[s].with(footing.check(f), f, caseId, azimuthDeg);
             }
         }
         responses.axialForces(weights, axial);
         for (int m = 0; m < axial.length; m++) {
-            tension[m] = larger(tension[m], axial[m], combination, azimuthDeg);
-            memberCompression[m] = larger(memberCompression[m], -axial[m], combination, azimuthDeg);
+            Member member = frame.members().get(m);
+            MemberForces forces = memberForces(m, member, weights);
+            members[m] = members[m].with(checker.check(member.id(), forces, id -> axial[memberIndex.get(id)]),
+                    forces, caseId, azimuthDeg);
+        }
+        if (azimuthDeg != null && !Double.isNaN(baseWidthX)) {
+            hand.add(handComparison(combination.name(), azimuthDeg, weights, feCompression, feTension));
         }
     }
 
-    /** Replaces {@code current} when {@code value} is positive and larger; the first case wins ties. */
-    private static Extreme larger(Extreme current, double value, String combination, Double azimuthDeg) {
-        if (value > 0 && (current == null || value > current.value())) {
-            return new Extreme(value, combination, azimuthDeg);
+    private MemberForces memberForces(int m, Member member, double[] weights) {
+        if (member.axialOnly()) {
+            return MemberForces.axial(axial[m]);
         }
-        return current;
+        responses.endForces(m, weights, ends);
+        // End actions at i (fx..mz) then at j: my is component 4, mz component 5.
+        return new MemberForces(axial[m], ends[4], ends[10], ends[5], ends[11]);
+    }
+
+    private HandComparison handComparison(String combination, double azimuthDeg, double[] weights,
+                                          double feCompression, double feTension) {
+        resultants.combine(weights, totals);
+        double n = -totals[2];
+        double h = Math.hypot(totals[0], totals[1]);
+        double m = Math.hypot(totals[3], totals[4]);
+        double zH = h > 0 ? m / h : 0;
+        HandMethod.LegForces legs = HandMethod.atAzimuth(n, m, azimuthDeg, baseWidthX, baseWidthY);
+        HandMethod.Result result = new HandMethod.Result(azimuthDeg, n, h, zH, m,
+                HandMethod.baseDiagonal(baseWidthX, baseWidthY), legs);
+        return new HandComparison(combination, result, feCompression, feTension);
     }
 
     List<LegBaseSweep> legBaseSweeps() {
@@ -99,11 +179,15 @@ final class Sweep {
         return out;
     }
 
-    List<MemberAxialEnvelope> memberEnvelopes() {
-        List<MemberAxialEnvelope> out = new ArrayList<>(tension.length);
-        for (int m = 0; m < tension.length; m++) {
-            out.add(new MemberAxialEnvelope(frame.members().get(m).id(), tension[m], memberCompression[m]));
-        }
-        return out;
+    List<MemberEnvelope> memberEnvelopes() {
+        return List.of(members);
+    }
+
+    List<FoundationEnvelope> foundationEnvelopes() {
+        return List.of(foundations);
+    }
+
+    List<HandComparison> handComparisons() {
+        return List.copyOf(hand);
     }
 }

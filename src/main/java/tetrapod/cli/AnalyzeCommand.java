@@ -11,9 +11,6 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 import tetrapod.analysis.Analysis;
 import tetrapod.analysis.AnalysisResult;
-import tetrapod.analysis.Extreme;
-import tetrapod.analysis.LegBaseExtremes;
-import tetrapod.analysis.SolvedCase;
 import tetrapod.common.ProgressListener;
 import tetrapod.io.JsonOutput;
 import tetrapod.report.ResultsDocument;
@@ -32,6 +29,9 @@ final class AnalyzeCommand implements Callable<Integer> {
             description = "Output folder (default: out/<model file name>/).")
     Path output;
 
+    @Option(names = "--strict", description = "Exit with code 1 when any member or footing is overstressed.")
+    boolean strict;
+
     @Option(names = "--timings", description = "Print the wall time of each stage and the DOF and case counts.")
     boolean timings;
 
@@ -44,58 +44,21 @@ final class AnalyzeCommand implements Callable<Integer> {
         Stopwatch watch = new Stopwatch();
         LoadedModel loaded = LoadedModel.read(model);
         watch.lap("read+generate+loads");
-        AnalysisResult result = Analysis.run(loaded.tower(), loaded.loads(), ProgressListener.NONE);
+        AnalysisResult result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(), ProgressListener.NONE);
         watch.lap("analyse");
         Path folder = output != null ? output : OutputFolders.forModel(model);
         Path resultsFile = folder.resolve("results.json");
         JsonOutput.write(resultsFile, ResultsDocument.build(loaded.spec(), result));
         watch.lap("report");
 
-        Summary.print(out, result);
+        AnalysisSummary.print(out, result);
         out.println("results written to " + folder);
         if (timings) {
             out.printf(Locale.ROOT, "timings (%d DOF, %d load cases, %d basis vectors):%n",
                     result.model().freeDofCount(), result.caseCount(), result.responses().size());
             watch.print(out);
         }
-        return ExitCode.DONE;
+        return strict && result.maxUtilisation() > 1.0 ? ExitCode.OVERSTRESS : ExitCode.DONE;
     }
 
-    /** The short summary printed after an analysis. */
-    static final class Summary {
-        private Summary() { }
-
-        static void print(PrintWriter out, AnalysisResult r) {
-            var frame = r.tower().frame();
-            out.printf(Locale.ROOT, "%s: %s, %d nodes, %d members, %d load cases (%d combinations, sweep step %s deg)%n",
-                    frame.name(), frame.idealisation().jsonName(), frame.nodes().size(), frame.members().size(),
-                    r.caseCount(), r.loads().combinations().size(),
-                    tetrapod.load.CaseKey.degrees(r.loads().sweepStep()));
-            if (!r.model().autoRestraints().isEmpty()) {
-                out.printf(Locale.ROOT, "auto-restrained: %d directions where the lattice model has no stiffness "
-                        + "(listed in results.json model.autoRestraints)%n", r.model().autoRestraints().size());
-            }
-            out.println("leg base reactions (the support on the leg; compression = support pushes up):");
-            out.printf(Locale.ROOT, "  %5s  %14s  %-28s %14s  %-28s %12s  %s%n", "node", "compression kN", "case",
-                    "uplift kN", "case", "shear kN", "case");
-            for (LegBaseExtremes leg : r.legBases()) {
-                out.printf(Locale.ROOT, "  %5d  %14s  %-28s %14s  %-28s %12s  %s%n", leg.node(),
-                        kN(leg.compression()), caseOf(leg.compression()), kN(leg.uplift()), caseOf(leg.uplift()),
-                        kN(leg.shear()), caseOf(leg.shear()));
-            }
-            double worst = 0;
-            for (SolvedCase c : r.cases()) {
-                worst = Math.max(worst, c.solution().equilibriumError());
-            }
-            out.printf(Locale.ROOT, "equilibrium: largest residual of the reported cases %.1e%n", worst);
-        }
-
-        private static String kN(Extreme e) {
-            return e == null ? "none" : String.format(Locale.ROOT, "%.1f", e.value() / 1e3);
-        }
-
-        private static String caseOf(Extreme e) {
-            return e == null ? "-" : e.caseId();
-        }
-    }
 }

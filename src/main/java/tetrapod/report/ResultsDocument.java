@@ -6,6 +6,12 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import tetrapod.analysis.AnalysisResult;
+import tetrapod.analysis.HandComparison;
+import tetrapod.analysis.LegBaseExtremes;
+import tetrapod.check.Extreme;
+import tetrapod.check.FoundationEnvelope;
+import tetrapod.check.HandMethod;
+import tetrapod.check.MemberEnvelope;
 import tetrapod.analysis.LegBaseSweep;
 import tetrapod.analysis.SolvedCase;
 import tetrapod.load.AzimuthWind;
@@ -46,7 +52,82 @@ public final class ResultsDocument {
         doc.put("cases", result.cases().stream().map(ResultsDocument::solvedCase).toList());
         doc.put("wind", result.wind().stream().map(ResultsDocument::wind).toList());
         doc.put("sweep", sweep(result));
+        doc.put("checks", result.members().stream().map(ResultsDocument::memberCheck).toList());
+        doc.put("foundations", result.foundations().stream().map(ResultsDocument::foundation).toList());
+        doc.put("legBases", result.legBases().stream().map(ResultsDocument::legBase).toList());
+        doc.put("handMethod", result.hand().stream().map(ResultsDocument::hand).toList());
         return doc;
+    }
+
+    private static Map<String, Object> memberCheck(MemberEnvelope e) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("member", e.member());
+        m.put("utilisation", e.governing().utilisation());
+        m.put("mode", e.governing().mode().jsonName());
+        m.put("clause", e.governing().clause());
+        m.put("note", e.governing().note());
+        m.put("case", e.governingWhere().caseId());
+        m.put("azimuthDeg", e.governingWhere().azimuthDeg());
+        m.put("maxTension", extreme(e.maxTension()));
+        m.put("maxCompression", extreme(e.maxCompression()));
+        return m;
+    }
+
+    /** An extreme force as {value (N), case, azimuthDeg}; value 0 and case null when it never occurs. */
+    private static Map<String, Object> extreme(Extreme e) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("value", clean(e.value()));
+        m.put("case", e.caseId());
+        m.put("azimuthDeg", e.azimuthDeg());
+        return m;
+    }
+
+    private static Map<String, Object> foundation(FoundationEnvelope f) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("node", f.node());
+        List<Map<String, Object>> checks = new ArrayList<>();
+        f.checks().forEach((mode, g) -> {
+            Map<String, Object> c = new LinkedHashMap<>();
+            c.put("name", mode.jsonName());
+            c.put("utilisation", g.check().utilisation());
+            c.put("clause", g.check().clause());
+            c.put("note", g.check().note());
+            c.put("case", g.where().caseId());
+            c.put("azimuthDeg", g.where().azimuthDeg());
+            checks.add(c);
+        });
+        m.put("checks", checks);
+        m.put("concreteVolumeRequired", f.concreteVolumeRequired());
+        return m;
+    }
+
+    private static Map<String, Object> legBase(LegBaseExtremes leg) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("node", leg.node());
+        m.put("maxCompression", extreme(leg.compression()));
+        m.put("maxUplift", extreme(leg.uplift()));
+        m.put("maxShear", extreme(leg.shear()));
+        return m;
+    }
+
+    private static Map<String, Object> hand(HandComparison h) {
+        HandMethod.Result r = h.hand();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("combination", h.combination());
+        m.put("azimuthDeg", r.azimuthDeg());
+        m.put("N", clean(r.n()));
+        m.put("H", clean(r.h()));
+        m.put("zH", clean(r.zH()));
+        m.put("M", clean(r.m()));
+        m.put("d", r.d());
+        m.put("legCompression", clean(r.legs().compression()));
+        m.put("legTension", clean(r.legs().tension()));
+        m.put("fe", Map.of("maxCompression", clean(h.feMaxCompression()), "maxTension", clean(h.feMaxTension())));
+        Map<String, Object> diff = new LinkedHashMap<>();
+        diff.put("compression", clean(h.compressionDifferencePct()));
+        diff.put("tension", clean(h.tensionDifferencePct()));
+        m.put("differencePct", diff);
+        return m;
     }
 
     private static Map<String, Object> wind(AzimuthWind w) {

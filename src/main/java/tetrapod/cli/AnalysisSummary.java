@@ -1,0 +1,124 @@
+package tetrapod.cli;
+
+import java.io.PrintWriter;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import tetrapod.analysis.Analysis;
+import tetrapod.analysis.AnalysisResult;
+import tetrapod.analysis.HandComparison;
+import tetrapod.analysis.LegBaseExtremes;
+import tetrapod.analysis.SolvedCase;
+import tetrapod.check.Extreme;
+import tetrapod.check.FoundationEnvelope;
+import tetrapod.check.MemberEnvelope;
+import tetrapod.load.CaseKey;
+import tetrapod.model.Frame;
+import tetrapod.model.Member;
+
+/** The short summary {@code analyze} prints: governing members, leg bases, footings, hand method, verdict. */
+final class AnalysisSummary {
+
+    private static final int MOST_UTILISED = 5;
+
+    private AnalysisSummary() { }
+
+    static void print(PrintWriter out, AnalysisResult r) {
+        Frame frame = r.tower().frame();
+        out.printf(Locale.ROOT, "%s: %s, %d nodes, %d members; %d load cases (%d combinations, sweep step %s deg)%n",
+                frame.name(), frame.idealisation().jsonName(), frame.nodes().size(), frame.members().size(),
+                r.caseCount(), r.loads().combinations().size(), CaseKey.degrees(r.loads().sweepStep()));
+        if (!r.model().autoRestraints().isEmpty()) {
+            out.printf(Locale.ROOT, "auto-restrained: %d directions where the lattice model has no stiffness "
+                    + "(listed in results.json model.autoRestraints)%n", r.model().autoRestraints().size());
+        }
+        members(out, r, frame);
+        legBases(out, r);
+        footings(out, r);
+        hand(out, r);
+        double worst = 0;
+        for (SolvedCase c : r.cases()) {
+            worst = Math.max(worst, c.solution().equilibriumError());
+        }
+        out.printf(Locale.ROOT, "equilibrium: largest residual of the %d cases solved in full: %.1e%n",
+                r.cases().size(), worst);
+        double max = r.maxUtilisation();
+        out.printf(Locale.ROOT, "%s: largest utilisation %.3f%n", max > 1.0 ? "OVERSTRESSED" : "all checks pass", max);
+        out.println("Results must be checked by a qualified engineer against the codes that apply locally.");
+    }
+
+    private static void members(PrintWriter out, AnalysisResult r, Frame frame) {
+        List<MemberEnvelope> top = r.members().stream().filter(m -> m.governing() != null)
+                .sorted(Comparator.comparingDouble((MemberEnvelope m) -> -m.governing().utilisation())
+                        .thenComparingInt(MemberEnvelope::member))
+                .limit(MOST_UTILISED).toList();
+        out.println("most utilised members:");
+        out.printf(Locale.ROOT, "  %6s %-10s %4s %-10s %6s  %-20s %-34s %s%n", "member", "role", "seg", "section",
+                "util", "mode", "clause", "case");
+        var index = new java.util.HashMap<Integer, Member>();
+        frame.members().forEach(m -> index.put(m.id(), m));
+        for (MemberEnvelope e : top) {
+            Member m = index.get(e.member());
+            out.printf(Locale.ROOT, "  %6d %-10s %4d %-10s %6.3f  %-20s %-34s %s%n", m.id(), m.role().jsonName(),
+                    m.segment(), m.section().name(), e.governing().utilisation(), e.governing().mode().jsonName(),
+                    e.governing().clause(), e.governingWhere().caseId());
+        }
+    }
+
+    private static void legBases(PrintWriter out, AnalysisResult r) {
+        out.println("leg base reactions (compression: the support pushes up on the leg; uplift: it pulls down):");
+        out.printf(Locale.ROOT, "  %5s  %15s  %-26s %10s  %-26s %9s  %s%n", "node", "compression kN", "case",
+                "uplift kN", "case", "shear kN", "case");
+        for (LegBaseExtremes leg : r.legBases()) {
+            out.printf(Locale.ROOT, "  %5d  %15s  %-26s %10s  %-26s %9s  %s%n", leg.node(), kN(leg.compression()),
+                    caseOf(leg.compression()), kN(leg.uplift()), caseOf(leg.uplift()), kN(leg.shear()),
+                    caseOf(leg.shear()));
+        }
+    }
+
+    private static void footings(PrintWriter out, AnalysisResult r) {
+        if (r.foundations().isEmpty()) {
+            out.println("footings: not checked (the model gives no checks.foundation)");
+            return;
+        }
+        out.println("footings (governing check of each kind over all leg bases):");
+        var worst = new java.util.EnumMap<tetrapod.check.CheckMode, FoundationEnvelope.Governing>(
+                tetrapod.check.CheckMode.class);
+        double volume = 0;
+        for (FoundationEnvelope f : r.foundations()) {
+            f.checks().forEach((mode, g) -> worst.merge(mode, g,
+                    (a, b) -> b.check().utilisation() > a.check().utilisation() ? b : a));
+            volume = Math.max(volume, f.concreteVolumeRequired());
+        }
+        worst.forEach((mode, g) -> out.printf(Locale.ROOT, "  %-16s %6.3f  %-40s %s%n", mode.jsonName(),
+                g.check().utilisation(), g.check().clause(), g.where().caseId()));
+        out.printf(Locale.ROOT, "  concrete volume that would balance the governing uplift: %.2f m3 per leg%n", volume);
+    }
+
+    private static void hand(PrintWriter out, AnalysisResult r) {
+        if (r.hand().isEmpty()) {
+            return;
+        }
+        String combination = r.hand().get(0).combination();
+        out.printf(Locale.ROOT, "hand method (N/4 +- M/lever) beside the analysis, %s:%n", combination);
+        out.printf(Locale.ROOT, "  %7s %10s %12s %14s %14s %7s %12s %12s %7s%n", "azimuth", "N kN", "M kNm",
+                "hand comp kN", "analysis kN", "diff %", "hand upl kN", "analysis kN", "diff %");
+        for (HandComparison h : r.hand()) {
+            if (!h.combination().equals(combination) || !Analysis.REPORTED_AZIMUTHS.contains(h.hand().azimuthDeg())) {
+                continue;
+            }
+            out.printf(Locale.ROOT, "  %7s %10.1f %12.1f %14.1f %14.1f %7.1f %12.1f %12.1f %7.1f%n",
+                    CaseKey.degrees(h.hand().azimuthDeg()), h.hand().n() / 1e3, h.hand().m() / 1e3,
+                    h.hand().legs().compression() / 1e3, h.feMaxCompression() / 1e3, h.compressionDifferencePct(),
+                    h.hand().legs().tension() / 1e3, h.feMaxTension() / 1e3, h.tensionDifferencePct());
+        }
+    }
+
+    private static String kN(Extreme e) {
+        return e.caseId() == null ? "none" : String.format(Locale.ROOT, "%.1f", e.value() / 1e3);
+    }
+
+    private static String caseOf(Extreme e) {
+        return e.caseId() == null ? "-" : e.caseId();
+    }
+}
