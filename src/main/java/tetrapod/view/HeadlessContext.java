@@ -124,6 +124,9 @@ final class HeadlessContext implements AutoCloseable {
             GL.destroy();
             glCreated = false;
         }
+        // leave LWJGL as an ordinary program finds it (the window initialises it implicitly)
+        Configuration.OPENGL_CONTEXT_API.set(null);
+        Configuration.OPENGL_EXPLICIT_INIT.set(null);
         GLFWErrorCallback mine = glfwSetErrorCallback(previous);
         if (mine != null) {
             mine.free();

@@ -47,6 +47,11 @@ public record SceneOptions(int caseIndex, Colouring colouring, boolean deformed,
                 caption);
     }
 
+    public SceneOptions withWind(boolean on) {
+        return new SceneOptions(caseIndex, colouring, deformed, deformationScale, grid, axes, reactions, on, legend,
+                caption);
+    }
+
     public SceneOptions withGrid(boolean on) {
         return new SceneOptions(caseIndex, colouring, deformed, deformationScale, on, axes, reactions, wind, legend,
                 caption);

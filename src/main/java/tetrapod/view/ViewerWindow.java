@@ -59,6 +59,7 @@ public final class ViewerWindow {
         GLFWErrorCallback previous = glfwSetErrorCallback(errors);
         boolean started = false;
         try {
+            glfwInitHint(GLFW_PLATFORM, GLFW_ANY_PLATFORM);  // a headless render may have asked for the null one
             if (!glfwInit()) {
                 throw new Unavailable("cannot open a window: " + errors.text());
             }
@@ -75,6 +76,9 @@ public final class ViewerWindow {
             }
             glfwMakeContextCurrent(window);
             glfwSwapInterval(measureFrames > 0 ? 0 : 1);
+            if (GL.getFunctionProvider() == null) {
+                GL.create();  // a headless render in this process destroyed LWJGL's GL state
+            }
             GL.createCapabilities();
             glEnable(GL_MULTISAMPLE);
             renderer = new GlRenderer();
