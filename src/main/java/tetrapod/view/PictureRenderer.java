@@ -23,15 +23,19 @@ public final class PictureRenderer {
         return render(scene, camera, request.width(), request.height(), request.routes());
     }
 
+    /** The line for an image drawn by Java2D after the OpenGL routes failed as {@code failures} say. */
+    static String fallbackLine(List<String> failures) {
+        return failures.isEmpty() ? "render: built-in 2D renderer (Java2D)"
+                : "render: no OpenGL found (" + String.join("; ", failures) + "), used the built-in 2D renderer";
+    }
+
     /** Draws {@code scene} as {@code camera} sees it, trying {@code routes} in order. */
     public static Picture render(Scene scene, Camera camera, int width, int height, List<RenderRoute> routes) {
         List<String> failures = new ArrayList<>();
         for (RenderRoute route : routes) {
             if (route == RenderRoute.JAVA2D) {
                 BufferedImage image = SoftwareRenderer.render(scene, camera, width, height);
-                String line = failures.isEmpty() ? "render: built-in 2D renderer (Java2D)"
-                        : "render: no OpenGL found (" + String.join("; ", failures) + "), used the built-in 2D renderer";
-                return new Picture(image, scene, camera, route, line);
+                return new Picture(image, scene, camera, route, fallbackLine(failures));
             }
             try (HeadlessContext context = HeadlessContext.open(route)) {
                 String description = context.describe();
