@@ -46,16 +46,20 @@ final class RenderCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        LoadedModel loaded = LoadedModel.read(model);
-        OptionalDouble az = azimuth == null ? OptionalDouble.empty() : OptionalDouble.of(azimuth);
-        ViewData data = ViewInputs.data(loaded, az);
         int[] wh = ViewInputs.size(size, "--size");
-        SceneOptions options = ViewInputs.options(data, az, colour);
+        OptionalDouble az = azimuth == null ? OptionalDouble.empty() : OptionalDouble.of(azimuth);
         Path target = output != null ? output : OutputFolders.forModel(model).resolve("tower.png");
-        RenderRequest request = new RenderRequest(wh[0], wh[1], options, RenderRequest.ALL_ROUTES);
-        PrintWriter out = spec.commandLine().getOut();
-        out.println(write(data, request, target));
-        out.println("  image written  " + target);
+        // the OpenGL context comes up on its own thread while the model is read
+        try (PictureRenderer renderer = PictureRenderer.start(RenderRequest.ALL_ROUTES)) {
+            LoadedModel loaded = LoadedModel.read(model);
+            ViewData data = ViewInputs.data(loaded, az);
+            SceneOptions options = ViewInputs.options(data, az, colour);
+            Picture picture = renderer.draw(data, new RenderRequest(wh[0], wh[1], options, RenderRequest.ALL_ROUTES));
+            ViewInputs.writePng(picture.image(), target);
+            PrintWriter out = spec.commandLine().getOut();
+            out.println(picture.routeLine());
+            out.println("  image written  " + target);
+        }
         return ExitCode.DONE;
     }
 

@@ -83,6 +83,15 @@ final class GlRenderer implements AutoCloseable {
 
     /** Clears the bound framebuffer and draws the scene seen by {@code camera} on a {@code width} × {@code height} viewport. */
     void draw(Scene scene, Camera camera, int width, int height) {
+        if (painter == null || painter.scale() != height / 1000.0) {
+            painter = new LabelPainter(height);
+            atlas = null;
+        }
+        draw(scene, camera, width, height, OverlayLayout.place(scene, new Projector(camera, width, height), painter));
+    }
+
+    /** The same, with the overlay images already placed (see {@link OverlayLayout}). */
+    void draw(Scene scene, Camera camera, int width, int height, List<PlacedImage> overlay) {
         if (scene != uploaded) {
             upload(scene);
         }
@@ -106,7 +115,7 @@ final class GlRenderer implements AutoCloseable {
         glBindVertexArray(segmentVao);
         glDrawArraysInstanced(GL_TRIANGLE_STRIP, 0, 4, instances);
 
-        drawOverlay(scene, new Projector(camera, width, height));
+        drawOverlay(overlay, width, height);
         glBindVertexArray(0);
         glUseProgram(0);
     }
@@ -132,12 +141,7 @@ final class GlRenderer implements AutoCloseable {
         uploaded = scene;
     }
 
-    private void drawOverlay(Scene scene, Projector projector) {
-        if (painter == null || painter.scale() != projector.height() / 1000.0) {
-            painter = new LabelPainter(projector.height());
-            atlas = null;
-        }
-        List<PlacedImage> placed = OverlayLayout.place(scene, projector, painter);
+    private void drawOverlay(List<PlacedImage> placed, int width, int height) {
         if (placed.isEmpty()) {
             return;
         }
@@ -170,7 +174,7 @@ final class GlRenderer implements AutoCloseable {
         glEnable(GL_BLEND);
         glBlendFuncSeparate(GL_SRC_ALPHA, GL_ONE_MINUS_SRC_ALPHA, GL_ONE, GL_ONE_MINUS_SRC_ALPHA);
         glUseProgram(overlay.id);
-        glUniform2f(uOverlayViewport, projector.width(), projector.height());
+        glUniform2f(uOverlayViewport, width, height);
         glActiveTexture(GL_TEXTURE0);
         glBindTexture(GL_TEXTURE_2D, atlasTexture);
         glBindVertexArray(overlayVao);

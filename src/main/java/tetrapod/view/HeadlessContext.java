@@ -85,6 +85,10 @@ final class HeadlessContext implements AutoCloseable {
         GL.createCapabilities();
     }
 
+    RenderRoute route() {
+        return route;
+    }
+
     /** E.g. "OpenGL 4.5 llvmpipe (software, EGL)". */
     String describe() {
         return describe(route == RenderRoute.EGL ? "EGL" : "OSMesa");

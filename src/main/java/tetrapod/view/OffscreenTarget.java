@@ -1,12 +1,12 @@
 package tetrapod.view;
 
 import static org.lwjgl.opengl.GL33C.*;
-import static org.lwjgl.system.MemoryUtil.memAlloc;
+import static org.lwjgl.system.MemoryUtil.memAllocInt;
 import static org.lwjgl.system.MemoryUtil.memFree;
 
 import java.awt.image.BufferedImage;
 import java.awt.image.DataBufferInt;
-import java.nio.ByteBuffer;
+import java.nio.IntBuffer;
 
 /**
  * A multisampled framebuffer to draw into, and a single-sampled one it is resolved into before
@@ -74,18 +74,17 @@ final class OffscreenTarget implements AutoCloseable {
         glBlitFramebuffer(0, 0, width, height, 0, 0, width, height, GL_COLOR_BUFFER_BIT, GL_NEAREST);
         glBindFramebuffer(GL_READ_FRAMEBUFFER, resolveFbo);
         glPixelStorei(GL_PACK_ALIGNMENT, 1);
-        ByteBuffer pixels = memAlloc(width * height * 4);
+        IntBuffer pixels = memAllocInt(width * height);
         try {
-            glReadPixels(0, 0, width, height, GL_RGBA, GL_UNSIGNED_BYTE, pixels);
+            // one int per pixel, 0xAARRGGBB: the layout of a TYPE_INT_RGB raster (whose alpha byte is ignored)
+            glReadPixels(0, 0, width, height, GL_BGRA, GL_UNSIGNED_INT_8_8_8_8_REV, pixels);
             BufferedImage image = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
             int[] out = ((DataBufferInt) image.getRaster().getDataBuffer()).getData();
             for (int row = 0; row < height; row++) {
-                int src = (height - 1 - row) * width * 4;  // OpenGL's first row is the bottom one
-                int dst = row * width;
-                for (int col = 0; col < width; col++, src += 4) {
-                    out[dst + col] = ((pixels.get(src) & 0xff) << 16) | ((pixels.get(src + 1) & 0xff) << 8)
-                            | (pixels.get(src + 2) & 0xff);
-                }
+                pixels.get((height - 1 - row) * width, out, row * width, width);  // OpenGL's first row is the bottom one
+            }
+            for (int k = 0; k < out.length; k++) {
+                out[k] &= 0xffffff;
             }
             return image;
         } finally {
