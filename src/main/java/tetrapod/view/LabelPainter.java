@@ -58,7 +58,7 @@ final class LabelPainter {
         int lineHeight = fm.getHeight();
         int width = 1;
         for (String line : lines) {
-            width = Math.max(width, fm.stringWidth(line));
+            width = Math.max(width, fm.stringWidth(line) + 2);
         }
         BufferedImage image = new BufferedImage(width + 2 * pad, lineHeight * lines.length + 2 * pad,
                 BufferedImage.TYPE_INT_ARGB);
@@ -97,7 +97,7 @@ final class LabelPainter {
 
     static FontMetrics metrics(Font font) {
         BufferedImage scratch = new BufferedImage(1, 1, BufferedImage.TYPE_INT_ARGB);
-        Graphics2D g = scratch.createGraphics();
+        Graphics2D g = graphics(scratch);  // the same hints as the drawing, so that widths agree
         try {
             return g.getFontMetrics(font);
         } finally {

@@ -59,7 +59,7 @@ public final class ViewerWindow {
         GLFWErrorCallback previous = glfwSetErrorCallback(errors);
         boolean started = false;
         try {
-            glfwInitHint(GLFW_PLATFORM, GLFW_ANY_PLATFORM);  // a headless render may have asked for the null one
+            glfwInitHint(GLFW_PLATFORM, platform());  // a headless render may have asked for the null one
             if (!glfwInit()) {
                 throw new Unavailable("cannot open a window: " + errors.text());
             }
@@ -103,6 +103,13 @@ public final class ViewerWindow {
                 mine.free();
             }
         }
+    }
+
+    /** X11 when only an X display is named (no noisy Wayland probe first), else GLFW's own choice. */
+    private static int platform() {
+        boolean wayland = System.getenv("WAYLAND_DISPLAY") != null;
+        boolean x11 = System.getenv("DISPLAY") != null;
+        return x11 && !wayland ? GLFW_PLATFORM_X11 : GLFW_ANY_PLATFORM;
     }
 
     private String loop() {
