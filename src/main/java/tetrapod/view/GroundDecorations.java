@@ -80,7 +80,7 @@ final class GroundDecorations {
         Vec3 tip = onRing(centre, radius * 1.15, a + Math.PI);
         ArrowGlyphs.add(out, tail, tip, WIND, 0.3 * radius);
         labels.add(new SceneLabel(String.format(Locale.ROOT, "wind %.0f°", Angles.normaliseDeg(azimuthDeg)),
-                LabelStyle.WIND, new LabelAnchor.AtPoint(tail, 0, -14, LabelAnchor.Align.CENTRE)));
+                LabelStyle.WIND, new LabelAnchor.AtPoint(tail, 0, 16, LabelAnchor.Align.CENTRE)));
     }
 
     /** The point at angle {@code a} (radians from +x towards +y) on a ring on z = 0. */

@@ -62,7 +62,12 @@ final class HeadlessContext implements AutoCloseable {
     private void start() {
         Configuration.OPENGL_EXPLICIT_INIT.set(true);
         Configuration.OPENGL_CONTEXT_API.set(route == RenderRoute.EGL ? "EGL" : "OSMesa");
-        GL.create();
+        try {
+            GL.create();
+        } catch (IllegalStateException e) {
+            throw new IllegalStateException("cannot load " + (route == RenderRoute.EGL ? "libEGL" : "libOSMesa")
+                    + " (" + e.getMessage() + ")", e);
+        }
         glCreated = true;
         glfwInitHint(GLFW_PLATFORM, GLFW_PLATFORM_NULL);
         if (!glfwInit()) {

@@ -46,6 +46,7 @@ public final class PictureRenderer implements AutoCloseable {
         if (routes.isEmpty()) {
             throw new IllegalArgumentException("no render route to try");
         }
+        LwjglMessages.silence();
         return new PictureRenderer(routes);
     }
 

@@ -75,7 +75,7 @@ public final class SceneBuilder {
             GroundDecorations.grid(ground, baseCentre, gridHalf);
         }
         if (options.axes()) {
-            Vec3 corner = baseCentre.plus(new Vec3(-gridHalf, gridHalf, 0));
+            Vec3 corner = baseCentre.minus(new Vec3(gridHalf, gridHalf, 0));  // on the left of the default view
             GroundDecorations.axes(deco, labels, corner, 0.1 * size);
             framed.add(corner);
         }
