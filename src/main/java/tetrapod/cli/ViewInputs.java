@@ -66,9 +66,10 @@ final class ViewInputs {
             var c = Colouring.fromOptionName(colour);
             if (c.isEmpty()) {
                 problems.add("--colour: unknown value '" + colour + "'; expected one of role, axial, utilisation, azimuth");
-            } else if (!data.colourings().contains(c.get())) {
+            } else if (!data.cases().get(options.caseIndex()).offers(c.get())) {
                 problems.add("--colour: no " + c.get().optionName() + " values to colour by (this command draws the "
-                        + "geometry; results come with the analysis); available: " + names(data.colourings()));
+                        + "geometry; results come with the analysis); available: "
+                        + names(data.colourings(options.caseIndex())));
             } else {
                 options = options.withColouring(c.get());
             }

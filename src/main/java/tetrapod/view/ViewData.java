@@ -16,8 +16,9 @@ import tetrapod.model.Support;
  * azimuth, an envelope, ...) and the colouring to start with. This is the whole contract between
  * the analysis and the view; the view computes nothing structural.
  *
- * @param cases     at least one; the window steps through them in this order
- * @param colouring the colouring to start with; every case must offer it
+ * @param cases     at least one; the window steps through them in this order. Cases may offer
+ *                  different colourings (e.g. only an envelope carries governing azimuths)
+ * @param colouring the colouring to start with; the first case must offer it
  */
 public record ViewData(Frame frame, List<ViewCase> cases, Colouring colouring) {
 
@@ -62,9 +63,10 @@ public record ViewData(Frame frame, List<ViewCase> cases, Colouring colouring) {
                             + ", which is not a support");
                 }
             }
-            if (!c.offers(colouring)) {
-                throw new IllegalArgumentException("case '" + c.name() + "' has no " + colouring.optionName() + " values");
-            }
+        }
+        if (!cases.get(0).offers(colouring)) {
+            throw new IllegalArgumentException("case '" + cases.get(0).name() + "' has no " + colouring.optionName()
+                    + " values");
         }
     }
 
@@ -74,7 +76,7 @@ public record ViewData(Frame frame, List<ViewCase> cases, Colouring colouring) {
         return new ViewData(frame, List.of(ViewCase.geometry(name, windAzimuthDeg)), Colouring.ROLE);
     }
 
-    /** The same data starting with another colouring (every case must offer it). */
+    /** The same data starting with another colouring (the first case must offer it). */
     public ViewData withColouring(Colouring c) {
         return new ViewData(frame, cases, c);
     }
@@ -99,11 +101,11 @@ public record ViewData(Frame frame, List<ViewCase> cases, Colouring colouring) {
         return list;
     }
 
-    /** The colourings every case offers, in enum order ({@link Colouring#ROLE} always). */
-    public List<Colouring> colourings() {
+    /** The colourings case {@code caseIndex} offers, in enum order ({@link Colouring#ROLE} always). */
+    public List<Colouring> colourings(int caseIndex) {
         List<Colouring> list = new ArrayList<>();
         for (Colouring c : Colouring.values()) {
-            if (cases.stream().allMatch(vc -> vc.offers(c))) {
+            if (cases.get(caseIndex).offers(c)) {
                 list.add(c);
             }
         }

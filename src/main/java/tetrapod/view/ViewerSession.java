@@ -15,6 +15,8 @@ public final class ViewerSession {
     private int width;
     private int height;
     private SceneOptions options;
+    /** The colouring last chosen: shown whenever the current case offers it, else role. */
+    private Colouring preferred;
     private Camera camera;
     private OptionalInt picked = OptionalInt.empty();
     private boolean help = true;
@@ -24,6 +26,7 @@ public final class ViewerSession {
     public ViewerSession(ViewData data, SceneOptions options, int width, int height) {
         this.data = data;
         this.options = options;
+        this.preferred = options.colouring();
         resize(width, height);
         rebuild();
         camera = framing();
@@ -45,17 +48,21 @@ public final class ViewerSession {
         } else if (action instanceof ViewerAction.Zoom z) {
             camera = camera.zoom(z.factor());
         } else if (action instanceof ViewerAction.StepCase s) {
-            options = options.withCase(Math.floorMod(options.caseIndex() + s.step(), data.cases().size()));
+            int index = Math.floorMod(options.caseIndex() + s.step(), data.cases().size());
+            Colouring c = data.cases().get(index).offers(preferred) ? preferred : Colouring.ROLE;
+            options = options.withCase(index).withColouring(c);
             rebuild();
         } else if (action instanceof ViewerAction.NextColouring) {
-            List<Colouring> offered = data.colourings();
-            options = options.withColouring(offered.get((offered.indexOf(options.colouring()) + 1) % offered.size()));
+            List<Colouring> offered = data.colourings(options.caseIndex());
+            preferred = offered.get((offered.indexOf(options.colouring()) + 1) % offered.size());
+            options = options.withColouring(preferred);
             rebuild();
         } else if (action instanceof ViewerAction.UseColouring u) {
-            if (!data.colourings().contains(u.colouring()) || u.colouring() == options.colouring()) {
+            if (!data.cases().get(options.caseIndex()).offers(u.colouring()) || u.colouring() == options.colouring()) {
                 return false;
             }
-            options = options.withColouring(u.colouring());
+            preferred = u.colouring();
+            options = options.withColouring(preferred);
             rebuild();
         } else if (action instanceof ViewerAction.ToggleDeformed) {
             options = options.withDeformed(!options.deformed());

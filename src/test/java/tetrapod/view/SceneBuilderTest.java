@@ -149,7 +149,7 @@ class SceneBuilderTest {
         ViewData data = ViewData.geometryOnly(frame, OptionalDouble.empty());
         assertThrows(IllegalArgumentException.class,
                 () -> SceneBuilder.build(data, SceneOptions.defaults(data).withColouring(Colouring.UTILISATION)));
-        assertFalse(data.colourings().contains(Colouring.AXIAL));
+        assertFalse(data.colourings(0).contains(Colouring.AXIAL));
     }
 
     private static Arrow arrow(Scene scene, int node, String component) {

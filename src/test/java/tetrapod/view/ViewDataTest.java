@@ -32,7 +32,7 @@ class ViewDataTest {
         assertEquals(OptionalInt.of(2), data.caseAt(-270));
         assertEquals(OptionalInt.empty(), data.caseAt(30));
         assertEquals(List.of(0.0, 45.0, 90.0), data.azimuths());
-        assertEquals(List.of(Colouring.ROLE, Colouring.AXIAL), data.colourings());
+        assertEquals(List.of(Colouring.ROLE, Colouring.AXIAL), data.colourings(1));
     }
 
     @Test

@@ -107,6 +107,24 @@ class ViewerSessionTest {
     }
 
     @Test
+    void steppingIntoACaseWithoutTheChosenColouringShowsRolesAndComesBack() {
+        int n = frame.members().size();
+        ViewCase envelope = new ViewCase("envelope", OptionalDouble.empty(),
+                Map.of(Colouring.UTILISATION, MemberScalars.of(new double[n]), Colouring.AZIMUTH,
+                        MemberScalars.of(new double[n])), List.of(), List.of(), List.of());
+        ViewCase wind = new ViewCase("wind 0", OptionalDouble.of(0),
+                Map.of(Colouring.UTILISATION, MemberScalars.of(new double[n])), List.of(), List.of(), List.of());
+        ViewData data = new ViewData(frame, List.of(envelope, wind), Colouring.UTILISATION);
+        ViewerSession s = session(data);
+        s.apply(new ViewerAction.UseColouring(Colouring.AZIMUTH));
+        assertEquals(Colouring.AZIMUTH, s.options().colouring());
+        s.apply(new ViewerAction.StepCase(1));
+        assertEquals(Colouring.ROLE, s.options().colouring(), "the wind case has no governing azimuths");
+        s.apply(new ViewerAction.StepCase(1));
+        assertEquals(Colouring.AZIMUTH, s.options().colouring());
+    }
+
+    @Test
     void clickingAMemberShowsItsDescriptionAndClickingNothingClearsIt() {
         ViewData data = threeAzimuths();
         ViewerSession s = session(data);
