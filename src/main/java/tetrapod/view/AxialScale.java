@@ -35,14 +35,15 @@ public record AxialScale(double maxAbs) implements ColourScale {
     @Override
     public Legend legend() {
         double kN = range() / 1000;
+        String f = kN >= 100 ? "%.0f" : kN >= 1 ? "%.1f" : "%.3f";  // one format for every tick
         return new Legend("axial force, kN", ColourScale.sampleBar(this, -range(), range()),
-                List.of(new Legend.Tick(0, kn(-kN) + " compression"), new Legend.Tick(0.25, kn(-kN / 2)),
-                        new Legend.Tick(0.5, "0"), new Legend.Tick(0.75, kn(kN / 2)),
-                        new Legend.Tick(1, kn(kN) + " tension")),
+                List.of(new Legend.Tick(0, kn(f, -kN) + " compression"), new Legend.Tick(0.25, kn(f, -kN / 2)),
+                        new Legend.Tick(0.5, "0"), new Legend.Tick(0.75, kn(f, kN / 2)),
+                        new Legend.Tick(1, kn(f, kN) + " tension")),
                 List.of(new Legend.Swatch(NO_VALUE, "no value")));
     }
 
-    private static String kn(double value) {
-        return String.format(Locale.ROOT, Math.abs(value) >= 100 ? "%.0f" : "%.1f", value);
+    private static String kn(String format, double value) {
+        return String.format(Locale.ROOT, format, value);
     }
 }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.HashSet;
+import java.util.List;
 import java.util.Random;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
@@ -85,6 +86,13 @@ class ColourScaleTest {
         assertTrue(tension.b() > tension.r(), "tension should be cool: " + tension);
         assertEquals(s.colour(-250e3), s.colour(-900e3), "beyond the range is the end colour");
         assertEquals(1.0, new AxialScale(0).range(), "an all-zero case still has a scale");
+    }
+
+    @Test
+    void axialLegendNumbersTheRangeInKilonewtons() {
+        Legend legend = new AxialScale(199_990).legend();  // ±199.99 kN
+        assertEquals(List.of("-200 compression", "-100", "0", "100", "200 tension"),
+                legend.ticks().stream().map(Legend.Tick::label).toList());
     }
 
     @Test
