@@ -1,0 +1,76 @@
+package tetrapod.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.OptionalDouble;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+import tetrapod.view.Picture;
+import tetrapod.view.PictureRenderer;
+import tetrapod.view.RenderRequest;
+import tetrapod.view.SceneOptions;
+import tetrapod.view.ViewData;
+
+/** Draws the tower to a PNG without a display: OpenGL when any can be had, Java2D otherwise. */
+@Command(name = "render", mixinStandardHelpOptions = true,
+        description = "Draw the tower in 3D to a PNG file. Needs no display and no GPU: uses OpenGL "
+                + "(EGL or OSMesa) when available, else a built-in 2D renderer; prints which.")
+final class RenderCommand implements Callable<Integer> {
+
+    @Parameters(paramLabel = "MODEL.json", description = "The tower spec.")
+    Path model;
+
+    @Option(names = {"-o", "--output"}, paramLabel = "FILE",
+            description = "The PNG to write (default: out/<model file name>/tower.png).")
+    Path output;
+
+    @Option(names = "--azimuth", paramLabel = "DEG",
+            description = "Show the case with wind from this azimuth (0 = towards +x, 90 = towards +y).")
+    Double azimuth;
+
+    @Option(names = "--size", paramLabel = "WxH", defaultValue = "1600x1200",
+            description = "Image size in px (default: ${DEFAULT-VALUE}).")
+    String size;
+
+    @Option(names = "--colour", paramLabel = "KIND",
+            description = "Colour members by role, axial, utilisation or azimuth (default: role until results exist).")
+    String colour;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        int[] wh = ViewInputs.size(size, "--size");
+        OptionalDouble az = azimuth == null ? OptionalDouble.empty() : OptionalDouble.of(azimuth);
+        Path target = output != null ? output : OutputFolders.forModel(model).resolve("tower.png");
+        // the OpenGL context comes up on its own thread while the model is read
+        try (PictureRenderer renderer = PictureRenderer.start(RenderRequest.ALL_ROUTES)) {
+            LoadedModel loaded = LoadedModel.read(model);
+            ViewData data = ViewInputs.data(loaded, az);
+            SceneOptions options = ViewInputs.options(data, az, colour);
+            Picture picture = renderer.draw(data, new RenderRequest(wh[0], wh[1], options, RenderRequest.ALL_ROUTES));
+            ViewInputs.writePng(picture.image(), target);
+            PrintWriter out = spec.commandLine().getOut();
+            out.println(picture.routeLine());
+            out.println("  image written  " + target);
+        }
+        return ExitCode.DONE;
+    }
+
+    /**
+     * Draws {@code data} as {@code request} says and writes it to {@code file} as a PNG; returns the
+     * line saying which route drew it (e.g. {@code render: OpenGL 4.5 llvmpipe (software, EGL)}).
+     * For `analyze`, which writes tower.png from its results the same way.
+     */
+    static String write(ViewData data, RenderRequest request, Path file) throws IOException {
+        Picture picture = PictureRenderer.render(data, request);
+        ViewInputs.writePng(picture.image(), file);
+        return picture.routeLine();
+    }
+}
