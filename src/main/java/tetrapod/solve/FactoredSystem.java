@@ -44,6 +44,11 @@ public final class FactoredSystem {
         return model;
     }
 
+    /** The lower Cholesky factor (null when nothing is free); read-only, for benchmarks and tests. */
+    DMatrixSparseCSC lowerFactor() {
+        return lower;
+    }
+
     /** Non-zeros stored in the Cholesky factor L (a measure of fill and of solve cost). */
     public long factorNonZeros() {
         return lower == null ? 0 : lower.nz_length;

@@ -1,10 +1,5 @@
 package tetrapod.solve;
 
-import java.util.ArrayDeque;
-import java.util.ArrayList;
-import java.util.Arrays;
-import java.util.List;
-
 /**
  * Reverse Cuthill–McKee ordering of an undirected graph (here: nodes joined by members), and the
  * bandwidth and profile of an ordering.
@@ -21,37 +16,36 @@ final class ReverseCuthillMcKee {
     private ReverseCuthillMcKee() { }
 
     /**
-     * @param adjacency input: adjacency[v] lists the neighbours of vertex v (no self-loops)
+     * @param adjacency input: adjacency[v] lists the neighbours of vertex v (no self-loops, no repeats)
      * @return order[k] = the vertex placed k-th
      */
     static int[] order(int[][] adjacency) {
         int n = adjacency.length;
-        int[] degree = new int[n];
-        for (int v = 0; v < n; v++) {
-            degree[v] = adjacency[v].length;
-        }
         boolean[] placed = new boolean[n];
         int[] order = new int[n];
+        int[] buffer = new int[n];
+        Levels levels = new Levels(n);
         int count = 0;
         for (int seed = 0; seed < n; seed++) {
             if (placed[seed]) {
                 continue;
             }
-            int start = pseudoPeripheral(adjacency, degree, minimumDegreeVertex(adjacency, degree, seed));
-            ArrayDeque<Integer> queue = new ArrayDeque<>();
-            queue.add(start);
+            int start = pseudoPeripheral(adjacency, levels, minimumDegreeVertex(adjacency, levels, seed));
+            int head = count;
+            order[count++] = start;
             placed[start] = true;
-            while (!queue.isEmpty()) {
-                int v = queue.poll();
-                order[count++] = v;
-                int[] next = Arrays.stream(adjacency[v]).filter(u -> !placed[u]).distinct().toArray();
-                Integer[] boxed = Arrays.stream(next).boxed().toArray(Integer[]::new);
-                Arrays.sort(boxed, (a, b) -> degree[a] != degree[b] ? Integer.compare(degree[a], degree[b])
-                        : Integer.compare(a, b));
-                for (int u : boxed) {
-                    placed[u] = true;
-                    queue.add(u);
+            while (head < count) {
+                int v = order[head++];
+                int k = 0;
+                for (int u : adjacency[v]) {
+                    if (!placed[u]) {
+                        placed[u] = true;
+                        buffer[k++] = u;
+                    }
                 }
+                sortByDegree(buffer, k, adjacency);
+                System.arraycopy(buffer, 0, order, count, k);
+                count += k;
             }
         }
         for (int a = 0, b = n - 1; a < b; a++, b--) {
@@ -62,57 +56,95 @@ final class ReverseCuthillMcKee {
         return order;
     }
 
-    /** The vertex of least degree in the component of {@code seed}. */
-    private static int minimumDegreeVertex(int[][] adjacency, int[] degree, int seed) {
+    /** Insertion sort of buffer[0..k) by (degree, index): neighbour lists are short. */
+    private static void sortByDegree(int[] buffer, int k, int[][] adjacency) {
+        for (int a = 1; a < k; a++) {
+            int v = buffer[a];
+            int b = a - 1;
+            while (b >= 0 && before(v, buffer[b], adjacency)) {
+                buffer[b + 1] = buffer[b];
+                b--;
+            }
+            buffer[b + 1] = v;
+        }
+    }
+
+    private static boolean before(int v, int w, int[][] adjacency) {
+        int dv = adjacency[v].length;
+        int dw = adjacency[w].length;
+        return dv < dw || (dv == dw && v < w);
+    }
+
+    /** The vertex of least degree (then lowest index) in the component of {@code seed}. */
+    private static int minimumDegreeVertex(int[][] adjacency, Levels levels, int seed) {
+        levels.build(adjacency, seed);
         int best = seed;
-        for (int v : levels(adjacency, seed).stream().flatMap(List::stream).toList()) {
-            if (degree[v] < degree[best] || (degree[v] == degree[best] && v < best)) {
+        for (int k = 0; k < levels.size; k++) {
+            int v = levels.vertices[k];
+            if (before(v, best, adjacency)) {
                 best = v;
             }
         }
         return best;
     }
 
-    private static int pseudoPeripheral(int[][] adjacency, int[] degree, int start) {
+    private static int pseudoPeripheral(int[][] adjacency, Levels levels, int start) {
         int current = start;
-        List<List<Integer>> levels = levels(adjacency, current);
+        int depth = levels.build(adjacency, current);
         while (true) {
-            List<Integer> last = levels.get(levels.size() - 1);
-            int candidate = last.get(0);
-            for (int v : last) {
-                if (degree[v] < degree[candidate] || (degree[v] == degree[candidate] && v < candidate)) {
+            int candidate = -1;
+            for (int k = levels.lastLevelStart; k < levels.size; k++) {
+                int v = levels.vertices[k];
+                if (candidate < 0 || before(v, candidate, adjacency)) {
                     candidate = v;
                 }
             }
-            List<List<Integer>> candidateLevels = levels(adjacency, candidate);
-            if (candidateLevels.size() <= levels.size()) {
+            int candidateDepth = levels.build(adjacency, candidate);
+            if (candidateDepth <= depth) {
                 return current;
             }
             current = candidate;
-            levels = candidateLevels;
+            depth = candidateDepth;
         }
     }
 
-    /** Breadth-first level structure rooted at {@code root}. */
-    private static List<List<Integer>> levels(int[][] adjacency, int root) {
-        List<List<Integer>> levels = new ArrayList<>();
-        boolean[] seen = new boolean[adjacency.length];
-        List<Integer> level = List.of(root);
-        seen[root] = true;
-        while (!level.isEmpty()) {
-            levels.add(level);
-            List<Integer> next = new ArrayList<>();
-            for (int v : level) {
-                for (int u : adjacency[v]) {
-                    if (!seen[u]) {
-                        seen[u] = true;
-                        next.add(u);
+    /** A reusable breadth-first level structure (vertices in BFS order, start of the last level). */
+    private static final class Levels {
+        final int[] vertices;
+        final int[] mark;
+        int stamp;
+        int size;
+        int lastLevelStart;
+
+        Levels(int n) {
+            vertices = new int[n];
+            mark = new int[n];
+        }
+
+        /** BFS from root over its component; returns the number of levels. */
+        int build(int[][] adjacency, int root) {
+            stamp++;
+            size = 0;
+            vertices[size++] = root;
+            mark[root] = stamp;
+            int levelStart = 0;
+            int depth = 0;
+            while (levelStart < size) {
+                int levelEnd = size;
+                lastLevelStart = levelStart;
+                depth++;
+                for (int k = levelStart; k < levelEnd; k++) {
+                    for (int u : adjacency[vertices[k]]) {
+                        if (mark[u] != stamp) {
+                            mark[u] = stamp;
+                            vertices[size++] = u;
+                        }
                     }
                 }
+                levelStart = levelEnd;
             }
-            level = next;
+            return depth;
         }
-        return levels;
     }
 
     /** Largest |position(u) − position(v)| over the edges; position[v] = place of vertex v. */

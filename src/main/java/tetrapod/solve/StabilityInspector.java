@@ -38,8 +38,6 @@ final class StabilityInspector {
 
     /** Eigenvalues of Σ d dᵀ below this fraction of the member count count as zero (angles below ~1e-5 rad). */
     static final double PLANARITY_TOLERANCE = 1e-10;
-    /** A unit vector this close to a global axis is taken as that axis. */
-    private static final double AXIS_TOLERANCE = 1e-9;
 
     static final String PLANE_REASON = "all members meeting here lie in one plane: no stiffness normal to it";
     static final String LINE_REASON = "all members meeting here lie on one line: no stiffness across it";
@@ -107,96 +105,9 @@ final class StabilityInspector {
         }
         double[][] rotationBases = new double[nodes][];
         if (isFrame) {
-            restrainChainSpin(frame, nodeIndex, memberIsBeam, kinds, rotationBases, autos);
+            SpinningChains.restrain(frame, nodeIndex, memberIsBeam, kinds, rotationBases, autos);
         }
         return new NodeConstraints(bases, rotationBases, kinds, autos);
-    }
-
-    /** Finds straight chains of beam-columns with nothing restraining their spin; see the class comment. */
-    private static void restrainChainSpin(Frame frame, Map<Integer, Integer> nodeIndex, boolean[] memberIsBeam,
-                                          byte[][] kinds, double[][] rotationBases, List<AutoRestraint> autos) {
-        int members = frame.members().size();
-        int nodes = frame.nodes().size();
-        Vec3[] dir = new Vec3[members];
-        int[][] ends = new int[members][];
-        List<List<Integer>> beamsAt = new ArrayList<>(nodes);
-        for (int n = 0; n < nodes; n++) {
-            beamsAt.add(new ArrayList<>());
-        }
-        int[] parent = new int[members];
-        for (int m = 0; m < members; m++) {
-            parent[m] = m;
-            if (!memberIsBeam[m]) {
-                continue;
-            }
-            Member member = frame.members().get(m);
-            ends[m] = new int[] {nodeIndex.get(member.i()), nodeIndex.get(member.j())};
-            dir[m] = LocalAxes.direction(frame.nodes().get(ends[m][0]).position(), frame.nodes().get(ends[m][1]).position());
-            beamsAt.get(ends[m][0]).add(m);
-            beamsAt.get(ends[m][1]).add(m);
-        }
-        for (List<Integer> at : beamsAt) {
-            for (int a = 0; a < at.size(); a++) {
-                for (int b = a + 1; b < at.size(); b++) {
-                    if (collinear(dir[at.get(a)], dir[at.get(b)])) {
-                        parent[find(parent, at.get(a))] = find(parent, at.get(b));
-                    }
-                }
-            }
-        }
-        Map<Integer, List<Integer>> chains = new java.util.TreeMap<>();
-        for (int m = 0; m < members; m++) {
-            if (memberIsBeam[m]) {
-                chains.computeIfAbsent(find(parent, m), k -> new ArrayList<>()).add(m);
-            }
-        }
-        for (List<Integer> chain : chains.values()) {
-            Vec3 axis = dir[chain.get(0)];
-            java.util.TreeSet<Integer> chainNodes = new java.util.TreeSet<>();
-            for (int m : chain) {
-                chainNodes.add(ends[m][0]);
-                chainNodes.add(ends[m][1]);
-            }
-            boolean restrained = false;
-            int supported = -1;
-            for (int n : chainNodes) {
-                for (int m : beamsAt.get(n)) {
-                    restrained |= !collinear(dir[m], axis);
-                }
-                double[] a = {axis.x(), axis.y(), axis.z()};
-                for (int k = 0; k < 3; k++) {
-                    if (kinds[n][3 + k] == NodeConstraints.SUPPORT) {
-                        restrained |= Math.abs(a[k]) > AXIS_TOLERANCE;
-                        supported = supported < 0 ? n : supported;
-                    }
-                }
-                if (supported < 0 && isTranslationSupported(kinds[n])) {
-                    supported = n;
-                }
-            }
-            if (restrained) {
-                continue;
-            }
-            int n = supported >= 0 ? supported : chainNodes.first();
-            double[] a = {axis.x(), axis.y(), axis.z()};
-            rotationBases[n] = restrain(frame.nodes().get(n).id(), kinds[n], 3, List.of(a), SPIN_REASON, autos);
-        }
-    }
-
-    private static boolean isTranslationSupported(byte[] kind) {
-        return kind[0] == NodeConstraints.SUPPORT || kind[1] == NodeConstraints.SUPPORT || kind[2] == NodeConstraints.SUPPORT;
-    }
-
-    private static boolean collinear(Vec3 a, Vec3 b) {
-        return a.cross(b).norm() < AXIS_TOLERANCE;
-    }
-
-    private static int find(int[] parent, int m) {
-        while (parent[m] != m) {
-            parent[m] = parent[parent[m]];
-            m = parent[m];
-        }
-        return m;
     }
 
     private static void restrainTranslations(int id, List<Vec3> dirs, byte[] kind, int n,
@@ -225,74 +136,7 @@ final class StabilityInspector {
         if (free.isEmpty()) {
             return;
         }
-        bases[n] = restrain(id, kind, 0, free, reason, autos);
-    }
-
-    /**
-     * Eliminates the unit directions {@code free} among the three DOFs at {@code offset} (0:
-     * translations, 3: rotations) of a node, none of which may have a component along a held axis.
-     * Axis directions are eliminated as they are; otherwise the triple gets a rotated basis: the
-     * held axes first (they stay DOFs along the axes), then the free directions, then a completion.
-     *
-     * @return the basis Q (row-major, columns the new DOF directions), or null for the global axes
-     */
-    private static double[] restrain(int id, byte[] kind, int offset, List<double[]> free, String reason,
-                                     List<AutoRestraint> autos) {
-        byte[] k3 = {kind[offset], kind[offset + 1], kind[offset + 2]};
-        free = preferAxes(free, k3);
-        boolean allAxes = true;
-        for (double[] v : free) {
-            allAxes &= axisOf(v) >= 0;
-        }
-        if (allAxes) {
-            for (double[] v : free) {
-                int a = axisOf(v);
-                kind[offset + a] = NodeConstraints.AUTO;
-                autos.add(new AutoRestraint(id, DOF[offset + a], AXES[a], reason));
-            }
-            return null;
-        }
-        List<double[]> basis = new ArrayList<>();
-        List<Byte> basisKind = new ArrayList<>();
-        for (int a = 0; a < 3; a++) {
-            if (k3[a] == NodeConstraints.SUPPORT) {
-                basis.add(unitAxis(a));
-                basisKind.add(NodeConstraints.SUPPORT);
-            }
-        }
-        for (double[] v : free) {
-            int a = axisOf(v);
-            double[] dir = a >= 0 ? unitAxis(a) : canonicalSign(v);
-            basis.add(dir);
-            basisKind.add(NodeConstraints.AUTO);
-            String name = a >= 0 ? DOF[offset + a] : offset == 0 ? AutoRestraint.SKEW : AutoRestraint.SKEW_ROTATION;
-            autos.add(new AutoRestraint(id, name, vec(dir), reason));
-        }
-        for (int a = 0; a < 3 && basis.size() < 3; a++) {
-            double[] v = unitAxis(a);
-            for (double[] b : basis) {
-                double dot = dot(v, b);
-                for (int r = 0; r < 3; r++) {
-                    v[r] -= dot * b[r];
-                }
-            }
-            double norm = Math.sqrt(dot(v, v));
-            if (norm > 1e-3) {
-                for (int r = 0; r < 3; r++) {
-                    v[r] /= norm;
-                }
-                basis.add(v);
-                basisKind.add(NodeConstraints.FREE);
-            }
-        }
-        double[] q = new double[9];
-        for (int c = 0; c < 3; c++) {
-            for (int r = 0; r < 3; r++) {
-                q[3 * r + c] = basis.get(c)[r];
-            }
-            kind[offset + c] = basisKind.get(c);
-        }
-        return q;
+        bases[n] = DirectionRestraint.restrain(id, kind, 0, free, reason, autos);
     }
 
     /**
@@ -323,7 +167,7 @@ final class StabilityInspector {
                         v[r] += c[p] * nullSpace.get(p)[r];
                     }
                 }
-                double norm = Math.sqrt(dot(v, v));
+                double norm = Math.sqrt(DirectionRestraint.dot(v, v));
                 for (int r = 0; r < 3; r++) {
                     v[r] /= norm;
                 }
@@ -333,82 +177,4 @@ final class StabilityInspector {
         return out;
     }
 
-    /** When a free global axis lies in span(free), use it as the first vector of the span. */
-    private static List<double[]> preferAxes(List<double[]> free, byte[] kind) {
-        if (free.size() != 2) {
-            return free;
-        }
-        for (int a = 0; a < 3; a++) {
-            if (kind[a] != NodeConstraints.FREE) {
-                continue;
-            }
-            double p0 = free.get(0)[a];
-            double p1 = free.get(1)[a];
-            if (p0 * p0 + p1 * p1 > 1 - AXIS_TOLERANCE) {
-                double[] axis = unitAxis(a);
-                double[] other = free.get(0).clone(); // the in-span vector orthogonal to the axis
-                double[] alt = free.get(1);
-                double[] pick = Math.abs(p0) < Math.abs(p1) ? other : alt.clone();
-                double dot = dot(pick, axis);
-                for (int r = 0; r < 3; r++) {
-                    pick[r] -= dot * axis[r];
-                }
-                double norm = Math.sqrt(dot(pick, pick));
-                for (int r = 0; r < 3; r++) {
-                    pick[r] /= norm;
-                }
-                return List.of(axis, pick);
-            }
-        }
-        return free;
-    }
-
-    /** The global axis (0, 1, 2) that unit vector v lies along, or −1. */
-    private static int axisOf(double[] v) {
-        for (int a = 0; a < 3; a++) {
-            if (Math.abs(v[a]) > 1 - AXIS_TOLERANCE) {
-                return a;
-            }
-        }
-        return -1;
-    }
-
-    /**
-     * v or −v, whichever has its largest component positive, with round-off components
-     * (|c| &lt; 1e-14) set to zero, so that reports read naturally.
-     */
-    private static double[] canonicalSign(double[] v) {
-        double[] out = v.clone();
-        for (int a = 0; a < 3; a++) {
-            if (Math.abs(out[a]) < 1e-14) {
-                out[a] = 0;
-            }
-        }
-        double norm = Math.sqrt(dot(out, out));
-        int big = 0;
-        for (int a = 1; a < 3; a++) {
-            if (Math.abs(out[a]) > Math.abs(out[big]) + 1e-12) {
-                big = a;
-            }
-        }
-        double sign = out[big] < 0 ? -1 : 1;
-        for (int a = 0; a < 3; a++) {
-            out[a] = sign * out[a] / norm + 0.0; // + 0.0 turns −0.0 into 0.0
-        }
-        return out;
-    }
-
-    private static double[] unitAxis(int a) {
-        double[] v = new double[3];
-        v[a] = 1;
-        return v;
-    }
-
-    private static double dot(double[] a, double[] b) {
-        return a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
-    }
-
-    private static Vec3 vec(double[] v) {
-        return new Vec3(v[0], v[1], v[2]);
-    }
 }

@@ -148,18 +148,32 @@ public final class StructuralModel {
                 mat.e() * p.area(), mat.e() * p.iu(), mat.e() * p.iv(), mat.g() * p.torsion());
     }
 
+    /** Sorted, duplicate-free neighbour lists of the node graph (nodes joined by members). */
     private static int[][] adjacency(int nodes, List<MemberElement> elements) {
-        List<Set<Integer>> sets = new ArrayList<>(nodes);
-        for (int n = 0; n < nodes; n++) {
-            sets.add(new java.util.TreeSet<>());
-        }
+        int[] degree = new int[nodes];
         for (MemberElement e : elements) {
-            sets.get(e.i()).add(e.j());
-            sets.get(e.j()).add(e.i());
+            degree[e.i()]++;
+            degree[e.j()]++;
         }
         int[][] adjacency = new int[nodes][];
         for (int n = 0; n < nodes; n++) {
-            adjacency[n] = sets.get(n).stream().mapToInt(Integer::intValue).toArray();
+            adjacency[n] = new int[degree[n]];
+        }
+        int[] fill = new int[nodes];
+        for (MemberElement e : elements) {
+            adjacency[e.i()][fill[e.i()]++] = e.j();
+            adjacency[e.j()][fill[e.j()]++] = e.i();
+        }
+        for (int n = 0; n < nodes; n++) {
+            int[] row = adjacency[n];
+            Arrays.sort(row);
+            int unique = 0;
+            for (int k = 0; k < row.length; k++) {
+                if (k == 0 || row[k] != row[k - 1]) {
+                    row[unique++] = row[k];
+                }
+            }
+            adjacency[n] = unique == row.length ? row : Arrays.copyOf(row, unique);
         }
         return adjacency;
     }
