@@ -32,6 +32,10 @@ final class AnalysisSummary {
             out.printf(Locale.ROOT, "auto-restrained: %d directions where the lattice model has no stiffness "
                     + "(listed in results.json model.autoRestraints)%n", r.model().autoRestraints().size());
         }
+        if (!r.model().continuityNodes().isEmpty()) {
+            out.printf(Locale.ROOT, "continuity: %d bracing nodes held across their member by its bending stiffness "
+                    + "(results.json model.continuityNodes)%n", r.model().continuityNodes().size());
+        }
         members(out, r, frame);
         legBases(out, r);
         footings(out, r);

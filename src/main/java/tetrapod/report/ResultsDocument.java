@@ -26,6 +26,7 @@ import tetrapod.model.Support;
 import tetrapod.model.Vec3;
 import tetrapod.model.spec.TowerSpec;
 import tetrapod.solve.AutoRestraint;
+import tetrapod.solve.ContinuityNode;
 import tetrapod.solve.EndForces;
 import tetrapod.solve.MemberEndForces;
 import tetrapod.solve.NodeDisplacement;
@@ -177,6 +178,7 @@ public final class ResultsDocument {
         m.put("members", frame.members().stream().map(member -> member(member, frame)).toList());
         m.put("supports", frame.supports().stream().map(ResultsDocument::support).toList());
         m.put("autoRestraints", model.autoRestraints().stream().map(ResultsDocument::autoRestraint).toList());
+        m.put("continuityNodes", model.continuityNodes().stream().map(ResultsDocument::continuity).toList());
         return m;
     }
 
@@ -229,6 +231,14 @@ public final class ResultsDocument {
         m.put("dof", r.dof());
         m.put("direction", vector(r.direction()));
         m.put("reason", r.reason());
+        return m;
+    }
+
+    private static Map<String, Object> continuity(ContinuityNode c) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("node", c.node());
+        m.put("line", List.of(c.lineStart(), c.lineEnd()));
+        m.put("stiffness", c.stiffness());
         return m;
     }
 

@@ -35,27 +35,33 @@ final class Assembler {
         DMatrixSparseTriplet ff = new DMatrixSparseTriplet(free, free, (int) Math.min(estimate, Integer.MAX_VALUE - 8));
         DMatrixSparseTriplet rf = new DMatrixSparseTriplet(restrained, free, 16);
         for (MemberElement e : model.elements()) {
-            double[] k = e.assemblyMatrix(model.constraints());
-            int[] codes = e.codes(numbering);
-            int size = codes.length;
-            for (int r = 0; r < size; r++) {
-                int row = codes[r];
-                for (int c = 0; c < size; c++) {
-                    int col = codes[c];
-                    // the upper triangle mirrored, so that the stored matrix is exactly symmetric
-                    double v = r <= c ? k[r * size + c] : k[c * size + r];
-                    if (col < 0 || v == 0) {
-                        continue;
-                    }
-                    if (row >= 0) {
-                        ff.addItem(row, col, v);
-                    } else {
-                        rf.addItem(-1 - row, col, v);
-                    }
+            add(e.assemblyMatrix(model.constraints()), e.codes(numbering), ff, rf);
+        }
+        for (ContinuityElement c : model.continuity()) {
+            add(c.assemblyMatrix(model.constraints()), c.codes(numbering), ff, rf);
+        }
+        return new Blocks(compress(ff), compress(rf));
+    }
+
+    /** Adds element matrix {@code k} (row-major, one row per code) at DOF {@code codes}. */
+    private static void add(double[] k, int[] codes, DMatrixSparseTriplet ff, DMatrixSparseTriplet rf) {
+        int size = codes.length;
+        for (int r = 0; r < size; r++) {
+            int row = codes[r];
+            for (int c = 0; c < size; c++) {
+                int col = codes[c];
+                // the upper triangle mirrored, so that the stored matrix is exactly symmetric
+                double v = r <= c ? k[r * size + c] : k[c * size + r];
+                if (col < 0 || v == 0) {
+                    continue;
+                }
+                if (row >= 0) {
+                    ff.addItem(row, col, v);
+                } else {
+                    rf.addItem(-1 - row, col, v);
                 }
             }
         }
-        return new Blocks(compress(ff), compress(rf));
     }
 
     private static DMatrixSparseCSC compress(DMatrixSparseTriplet triplet) {

@@ -54,8 +54,11 @@ final class StabilityInspector {
      * @param frame        input
      * @param nodeIndex    node id → index in frame.nodes()
      * @param memberIsBeam per member index, true for a beam-column (always false in a truss)
+     * @param held         per node index, true for a node a {@link ContinuityElement} holds
+     *                     across its member line (stable in every translation)
      */
-    static NodeConstraints inspect(Frame frame, Map<Integer, Integer> nodeIndex, boolean[] memberIsBeam) {
+    static NodeConstraints inspect(Frame frame, Map<Integer, Integer> nodeIndex, boolean[] memberIsBeam,
+                                   boolean[] held) {
         int nodes = frame.nodes().size();
         boolean isFrame = frame.idealisation() == Idealisation.FRAME;
         List<List<Vec3>> directions = new ArrayList<>(nodes);
@@ -89,7 +92,7 @@ final class StabilityInspector {
         List<AutoRestraint> autos = new ArrayList<>();
         for (int n = 0; n < nodes; n++) {
             List<Vec3> dirs = directions.get(n);
-            if (dirs.isEmpty() || hasBeam[n]) {
+            if (dirs.isEmpty() || hasBeam[n] || held[n]) {
                 continue; // unconnected nodes are left for the mechanism diagnosis
             }
             int id = frame.nodes().get(n).id();

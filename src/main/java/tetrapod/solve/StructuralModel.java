@@ -40,18 +40,20 @@ public final class StructuralModel {
     private final Map<Integer, Integer> nodeIndex;
     private final Map<Integer, Integer> memberIndex;
     private final List<MemberElement> elements;
+    private final List<ContinuityElement> continuity;
     private final NodeConstraints constraints;
     private final DofNumbering numbering;
     private final OrderingSummary ordering;
     private final double size;
 
     private StructuralModel(Frame frame, Map<Integer, Integer> nodeIndex, Map<Integer, Integer> memberIndex,
-                            List<MemberElement> elements, NodeConstraints constraints, DofNumbering numbering,
-                            OrderingSummary ordering, double size) {
+                            List<MemberElement> elements, List<ContinuityElement> continuity,
+                            NodeConstraints constraints, DofNumbering numbering, OrderingSummary ordering, double size) {
         this.frame = frame;
         this.nodeIndex = nodeIndex;
         this.memberIndex = memberIndex;
         this.elements = elements;
+        this.continuity = continuity;
         this.constraints = constraints;
         this.numbering = numbering;
         this.ordering = ordering;
@@ -99,8 +101,11 @@ public final class StructuralModel {
                 throw new IllegalArgumentException("node " + s.node() + " has two supports");
             }
         }
-        NodeConstraints constraints = StabilityInspector.inspect(frame, nodeIndex, beam);
-        int[][] adjacency = adjacency(frame.nodes().size(), elements);
+        List<ContinuityElement> continuity = isFrame ? List.of() : ContinuityFinder.find(frame, nodeIndex);
+        boolean[] held = new boolean[frame.nodes().size()];
+        continuity.forEach(c -> held[c.a()] = true);
+        NodeConstraints constraints = StabilityInspector.inspect(frame, nodeIndex, beam, held);
+        int[][] adjacency = adjacency(frame.nodes().size(), elements, continuity);
         int[] given = new int[frame.nodes().size()];
         Arrays.setAll(given, k -> k);
         int[] givenPosition = ReverseCuthillMcKee.positions(given);
@@ -120,8 +125,8 @@ public final class StructuralModel {
         OrderingSummary summary = new OrderingSummary(used, ReverseCuthillMcKee.bandwidth(adjacency, position),
                 ReverseCuthillMcKee.profile(adjacency, position), givenBand, givenProfile);
         DofNumbering numbering = new DofNumbering(order, isFrame ? 6 : 3, constraints);
-        return new StructuralModel(frame, nodeIndex, memberIndex, List.copyOf(elements), constraints, numbering,
-                summary, size(frame.nodes()));
+        return new StructuralModel(frame, nodeIndex, memberIndex, List.copyOf(elements), List.copyOf(continuity),
+                constraints, numbering, summary, size(frame.nodes()));
     }
 
     private static MemberElement element(Frame frame, Map<Integer, Integer> nodeIndex, Member member, boolean beam) {
@@ -149,11 +154,15 @@ public final class StructuralModel {
     }
 
     /** Sorted, duplicate-free neighbour lists of the node graph (nodes joined by members). */
-    private static int[][] adjacency(int nodes, List<MemberElement> elements) {
+    private static int[][] adjacency(int nodes, List<MemberElement> elements, List<ContinuityElement> continuity) {
         int[] degree = new int[nodes];
         for (MemberElement e : elements) {
             degree[e.i()]++;
             degree[e.j()]++;
+        }
+        for (ContinuityElement c : continuity) {
+            degree[c.p()]++;
+            degree[c.q()]++;
         }
         int[][] adjacency = new int[nodes][];
         for (int n = 0; n < nodes; n++) {
@@ -163,6 +172,10 @@ public final class StructuralModel {
         for (MemberElement e : elements) {
             adjacency[e.i()][fill[e.i()]++] = e.j();
             adjacency[e.j()][fill[e.j()]++] = e.i();
+        }
+        for (ContinuityElement c : continuity) {
+            adjacency[c.p()][fill[c.p()]++] = c.q();
+            adjacency[c.q()][fill[c.q()]++] = c.p();
         }
         for (int n = 0; n < nodes; n++) {
             int[] row = adjacency[n];
@@ -247,6 +260,23 @@ public final class StructuralModel {
             throw new IllegalArgumentException("unknown member " + id);
         }
         return m;
+    }
+
+    List<ContinuityElement> continuity() {
+        return continuity;
+    }
+
+    /**
+     * Nodes of a truss held across a straight bracing member by its bending stiffness, because
+     * only redundants join them there (see {@link ContinuityElement}); empty for a frame.
+     */
+    public List<ContinuityNode> continuityNodes() {
+        List<ContinuityNode> out = new ArrayList<>(continuity.size());
+        for (ContinuityElement c : continuity) {
+            out.add(new ContinuityNode(frame.nodes().get(c.a()).id(), frame.nodes().get(c.p()).id(),
+                    frame.nodes().get(c.q()).id(), c.k()));
+        }
+        return out;
     }
 
     List<MemberElement> elements() {

@@ -36,6 +36,14 @@ final class DenseReference {
      * @param loads       6 per node (global, in frame node order)
      */
     DenseReference(Frame frame, List<Constraint> constraints, double[] loads) {
+        this(frame, constraints, List.of(), loads);
+    }
+
+    /**
+     * @param continuity nodes held across a straight bracing line by its bending: each adds
+     *                   k·BᵀB with w = B·u = P⊥(u_node − (1 − t) u_start − t u_end)
+     */
+    DenseReference(Frame frame, List<Constraint> constraints, List<ContinuityNode> continuity, double[] loads) {
         index = frame.nodeIndex();
         int nodes = frame.nodes().size();
         boolean truss = frame.idealisation() == Idealisation.TRUSS;
@@ -59,6 +67,35 @@ final class DenseReference {
             for (int r = 0; r < 12; r++) {
                 for (int c = 0; c < 12; c++) {
                     k.add(dofs[r], dofs[c], kg[12 * r + c]);
+                }
+            }
+        }
+        for (ContinuityNode c : continuity) {
+            Vec3 start = frame.nodes().get(index.get(c.lineStart())).position();
+            Vec3 end = frame.nodes().get(index.get(c.lineEnd())).position();
+            Vec3 at = frame.nodes().get(index.get(c.node())).position();
+            double t = at.distanceTo(start) / end.distanceTo(start);
+            Vec3 e = end.minus(start).unit();
+            double[] ev = {e.x(), e.y(), e.z()};
+            int[] nodeOf = {index.get(c.lineStart()), index.get(c.node()), index.get(c.lineEnd())};
+            double[] weight = {-(1 - t), 1, -t};
+            // rows of B: w_r = Σ_n weight_n Σ_s (δ_rs − e_r e_s) u_n,s
+            for (int r = 0; r < 3; r++) {
+                double[] row = new double[n];
+                for (int a = 0; a < 3; a++) {
+                    for (int q = 0; q < 3; q++) {
+                        row[6 * nodeOf[a] + q] += weight[a] * ((r == q ? 1 : 0) - ev[r] * ev[q]);
+                    }
+                }
+                for (int x = 0; x < n; x++) {
+                    if (row[x] == 0) {
+                        continue;
+                    }
+                    for (int y = 0; y < n; y++) {
+                        if (row[y] != 0) {
+                            k.add(x, y, c.stiffness() * row[x] * row[y]);
+                        }
+                    }
                 }
             }
         }

@@ -92,6 +92,7 @@ class RandomTowerPropertyTest {
         StructuralModel model = StructuralModel.of(c.frame());
         Solution s = Solver.factor(model).solve(c.first());
         DenseReference ref = new DenseReference(c.frame(), DenseReference.constraintsOf(model.autoRestraints()),
+                model.continuityNodes(),
                 loadArray(c.frame(), c.first()));
 
         double maxU = 0;
