@@ -1,5 +1,7 @@
 package tetrapod.io;
 
+import tetrapod.common.Suggestions;
+
 import com.fasterxml.jackson.databind.JsonNode;
 import java.util.ArrayList;
 import java.util.Iterator;

@@ -1,5 +1,7 @@
 package tetrapod.section;
 
+import tetrapod.common.Suggestions;
+
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.Comparator;
@@ -94,7 +96,7 @@ public final class SectionCatalogue implements SectionLookup {
 
     @Override
     public List<String> nearest(String name, int count) {
-        return Suggestions.nearest(name, names(), count);
+        return Suggestions.closest(name, names(), count);
     }
 
     /** Every named section (tubes only when added as user sections), lightest first, then by name. */

@@ -1,5 +1,7 @@
 package tetrapod.section;
 
+import tetrapod.common.Suggestions;
+
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.LinkedHashMap;
@@ -93,7 +95,7 @@ public final class SteelGrades {
         if (found.isPresent()) {
             return found.get();
         }
-        List<String> near = Suggestions.nearest(name, names(), 3);
+        List<String> near = Suggestions.closest(name, names(), 3);
         throw BadInputException.at(path, "unknown steel grade '" + name + "'"
                 + (near.isEmpty() ? "" : "; did you mean " + String.join(", ", near) + "?")
                 + " (or give E, G, fy, fu in MPa)");

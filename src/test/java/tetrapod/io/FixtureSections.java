@@ -1,5 +1,7 @@
 package tetrapod.io;
 
+import tetrapod.common.Suggestions;
+
 import java.util.List;
 import java.util.Optional;
 import tetrapod.model.Section;

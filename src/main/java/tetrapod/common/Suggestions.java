@@ -1,4 +1,4 @@
-package tetrapod.io;
+package tetrapod.common;
 
 import java.util.ArrayList;
 import java.util.Collection;
@@ -10,12 +10,12 @@ import java.util.Locale;
  * Nearest names to a misspelt one, by edit distance (Levenshtein with adjacent transpositions
  * counted as one edit, the "optimal string alignment" distance), ignoring letter case.
  */
-final class Suggestions {
+public final class Suggestions {
 
     private Suggestions() { }
 
     /** Edit distance between two strings, letter case ignored. */
-    static int distance(String a, String b) {
+    public static int distance(String a, String b) {
         String s = a.toLowerCase(Locale.ROOT);
         String t = b.toLowerCase(Locale.ROOT);
         int n = s.length();
@@ -44,7 +44,7 @@ final class Suggestions {
      * The largest distance still worth suggesting for a name of this length: a third of its
      * letters, at least two (a slip of two keys is common; beyond that the guess is noise).
      */
-    static int tolerance(String name) {
+    public static int tolerance(String name) {
         return Math.max(2, name.length() / 3);
     }
 
@@ -52,7 +52,7 @@ final class Suggestions {
      * Up to {@code count} candidates within {@link #tolerance} of {@code name}, nearest first,
      * ties in the candidates' own order.
      */
-    static List<String> nearest(String name, Collection<String> candidates, int count) {
+    public static List<String> nearest(String name, Collection<String> candidates, int count) {
         record Scored(String candidate, int distance, int order) { }
         List<Scored> scored = new ArrayList<>();
         int order = 0;
@@ -69,8 +69,28 @@ final class Suggestions {
     }
 
     /** The single nearest candidate, or null when none is near enough. */
-    static String nearest(String name, Collection<String> candidates) {
+    public static String nearest(String name, Collection<String> candidates) {
         List<String> found = nearest(name, candidates, 1);
         return found.isEmpty() ? null : found.get(0);
+    }
+
+    /**
+     * Up to {@code count} of {@code known} ranked by distance to {@code query} however far, nearest
+     * first; equal distances in alphabetical order, so the answer never depends on the order of
+     * {@code known} ("nearest known: ..." lists of catalogues).
+     */
+    public static List<String> closest(String query, Collection<String> known, int count) {
+        if (count <= 0 || query == null) {
+            return List.of();
+        }
+        String q = query.trim();
+        record Scored(String name, int distance) { }
+        return known.stream()
+                .distinct()
+                .map(n -> new Scored(n, distance(q, n)))
+                .sorted(Comparator.comparingInt(Scored::distance).thenComparing(Scored::name))
+                .limit(count)
+                .map(Scored::name)
+                .toList();
     }
 }

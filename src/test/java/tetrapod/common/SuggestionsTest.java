@@ -1,4 +1,4 @@
-package tetrapod.io;
+package tetrapod.common;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
@@ -27,5 +27,17 @@ class SuggestionsTest {
         assertEquals("panels", Suggestions.nearest("pannels", keys));
         assertEquals(List.of("topWidthX", "topWidthY"), Suggestions.nearest("topWidth", keys, 3));
         assertNull(Suggestions.nearest("colour", keys));
+    }
+
+    @Test
+    void closestRanksEveryKnownNameNearestFirstThenAlphabetically() {
+        // kitten → sitting: two substitutions and one insertion (the usual textbook example)
+        assertEquals(3, Suggestions.distance("KITTEN", "SITTING"));
+        assertEquals(1, Suggestions.distance("L90X8", "L90X9"));
+        List<String> known = List.of("L90x8", "L75x8", "L100x10", "L90x10");
+        assertEquals(List.of("L75x8", "L90x8"), Suggestions.closest("l95x8", known, 2));
+        assertEquals(List.of("L75x8", "L90x8"),
+                Suggestions.closest("l95x8", List.of("L90x10", "L100x10", "L75x8", "L90x8"), 2));
+        assertEquals(List.of(), Suggestions.closest("L95x8", known, 0));
     }
 }
