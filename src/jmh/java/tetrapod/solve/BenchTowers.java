@@ -1,5 +1,6 @@
 package tetrapod.solve;
 
+import tetrapod.model.NodeForce;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;

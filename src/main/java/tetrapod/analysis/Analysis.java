@@ -21,12 +21,11 @@ import tetrapod.load.LoadBasis;
 import tetrapod.load.LoadCase;
 import tetrapod.load.LoadComponent;
 import tetrapod.load.TowerLoads;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.Support;
 import tetrapod.solve.BasisResponses;
 import tetrapod.solve.FactoredSystem;
 import tetrapod.solve.LoadVector;
-import tetrapod.solve.NodeForce;
 import tetrapod.solve.Solution;
 import tetrapod.solve.Solver;
 import tetrapod.solve.StructuralModel;
@@ -125,9 +124,9 @@ public final class Analysis {
         return new SolvedCase(loadCase.id(), loadCase.combination(), loadCase.azimuthDeg(), solution);
     }
 
-    static LoadVector vector(String name, List<NodalLoad> loads) {
+    static LoadVector vector(String name, List<NodeForce> loads) {
         List<NodeForce> forces = new ArrayList<>(loads.size());
-        for (NodalLoad l : loads) {
+        for (NodeForce l : loads) {
             forces.add(new NodeForce(l.node(), l.fx(), l.fy(), l.fz(), l.mx(), l.my(), l.mz()));
         }
         return new LoadVector(name, forces);

@@ -2,7 +2,7 @@ package tetrapod.analysis;
 
 import java.util.List;
 import tetrapod.model.Frame;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.Node;
 
 /**
@@ -13,11 +13,11 @@ final class LoadResultants {
 
     private final double[][] rows; // [k][Fx, Fy, Fz, Mx, My]
 
-    LoadResultants(Frame frame, List<List<NodalLoad>> basis) {
+    LoadResultants(Frame frame, List<List<NodeForce>> basis) {
         var index = frame.nodeIndex();
         rows = new double[basis.size()][5];
         for (int k = 0; k < basis.size(); k++) {
-            for (NodalLoad l : basis.get(k)) {
+            for (NodeForce l : basis.get(k)) {
                 Node n = frame.nodes().get(index.get(l.node()));
                 double[] r = rows[k];
                 r[0] += l.fx();

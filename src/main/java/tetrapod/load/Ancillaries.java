@@ -6,7 +6,7 @@ import tetrapod.common.Units;
 import tetrapod.generate.Panel;
 import tetrapod.generate.Tower;
 import tetrapod.model.Face;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.spec.AncillarySpec;
 
 /**
@@ -68,7 +68,7 @@ public final class Ancillaries {
     }
 
     /** The items' own weight, N (−z), merged by node in ascending node id. */
-    public List<NodalLoad> weights() {
+    public List<NodeForce> weights() {
         NodalLoads sum = new NodalLoads();
         for (Piece p : pieces()) {
             double w = p.spec instanceof AncillarySpec.Point pt ? pt.weight() * Units.KN
@@ -79,7 +79,7 @@ public final class Ancillaries {
     }
 
     /** The weight of the ice on the items, N (−z): ASCE 7 (10.4-2) on point items, (10.4-1) on linear ones. */
-    public List<NodalLoad> iceWeights(Asce7Ice ice) {
+    public List<NodeForce> iceWeights(Asce7Ice ice) {
         NodalLoads sum = new NodalLoads();
         if (ice.isNone()) {
             return List.of();

@@ -7,7 +7,7 @@ import java.util.TreeMap;
 import tetrapod.common.Units;
 import tetrapod.model.Frame;
 import tetrapod.model.Member;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.SectionShape;
 
 /**
@@ -91,7 +91,7 @@ public record Asce7Ice(double thickness, double density, boolean heightFactor) {
     }
 
     /** Ice weight on every member, half at each end, N (−z), in ascending node id. */
-    public List<NodalLoad> memberWeights(Frame frame) {
+    public List<NodeForce> memberWeights(Frame frame) {
         if (isNone()) {
             return List.of();
         }
@@ -106,8 +106,8 @@ public record Asce7Ice(double thickness, double density, boolean heightFactor) {
             down.merge(m.i(), w / 2, Double::sum);
             down.merge(m.j(), w / 2, Double::sum);
         }
-        List<NodalLoad> loads = new ArrayList<>(down.size());
-        down.forEach((node, w) -> loads.add(NodalLoad.force(node, 0, 0, -w)));
+        List<NodeForce> loads = new ArrayList<>(down.size());
+        down.forEach((node, w) -> loads.add(NodeForce.force(node, 0, 0, -w)));
         return loads;
     }
 }

@@ -1,7 +1,7 @@
 package tetrapod.load;
 
 import java.util.List;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 
 /**
  * One combination at one azimuth: the complete factored nodal load vector to solve.
@@ -11,7 +11,7 @@ import tetrapod.model.NodalLoad;
  * @param azimuthDeg  the wind's azimuth in degrees, or null for a combination without wind
  * @param loads       N and N·m, merged by node in ascending node id
  */
-public record LoadCase(String id, String combination, Double azimuthDeg, List<NodalLoad> loads) {
+public record LoadCase(String id, String combination, Double azimuthDeg, List<NodeForce> loads) {
     public LoadCase {
         loads = List.copyOf(loads);
     }

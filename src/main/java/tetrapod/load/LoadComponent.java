@@ -1,7 +1,7 @@
 package tetrapod.load;
 
 import java.util.List;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.spec.LoadAction;
 
 /**
@@ -12,7 +12,7 @@ import tetrapod.model.spec.LoadAction;
  * @param action the action it belongs to
  * @param loads  nodal loads in N and N·m, ascending node id
  */
-public record LoadComponent(String name, LoadAction action, List<NodalLoad> loads) {
+public record LoadComponent(String name, LoadAction action, List<NodeForce> loads) {
     public LoadComponent {
         loads = List.copyOf(loads);
     }

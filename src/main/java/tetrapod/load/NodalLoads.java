@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 
 /** Adds up forces node by node; gives them back in ascending node id. Mutable, local to one computation. */
 final class NodalLoads {
@@ -22,11 +22,11 @@ final class NodalLoads {
     }
 
     /** Adds {@code factor} × every load of {@code loads}. */
-    void add(List<NodalLoad> loads, double factor) {
+    void add(List<NodeForce> loads, double factor) {
         if (factor == 0) {
             return;
         }
-        for (NodalLoad l : loads) {
+        for (NodeForce l : loads) {
             double[] f = byNode.computeIfAbsent(l.node(), n -> new double[6]);
             f[0] += factor * l.fx();
             f[1] += factor * l.fy();
@@ -37,9 +37,9 @@ final class NodalLoads {
         }
     }
 
-    List<NodalLoad> toList() {
-        List<NodalLoad> out = new ArrayList<>(byNode.size());
-        byNode.forEach((node, f) -> out.add(new NodalLoad(node, f[0], f[1], f[2], f[3], f[4], f[5])));
+    List<NodeForce> toList() {
+        List<NodeForce> out = new ArrayList<>(byNode.size());
+        byNode.forEach((node, f) -> out.add(new NodeForce(node, f[0], f[1], f[2], f[3], f[4], f[5])));
         return List.copyOf(out);
     }
 }

@@ -7,7 +7,7 @@ import java.util.TreeMap;
 import tetrapod.common.Units;
 import tetrapod.model.Frame;
 import tetrapod.model.Member;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 
 /**
  * Self-weight of the steelwork: each member's mass per metre × length × g, increased by the
@@ -19,7 +19,7 @@ public final class SelfWeight {
     private SelfWeight() { }
 
     /** Nodal loads (N, −z) in ascending node id, one entry per loaded node. */
-    public static List<NodalLoad> of(Frame frame, double connectionAllowance) {
+    public static List<NodeForce> of(Frame frame, double connectionAllowance) {
         if (!(connectionAllowance >= 0)) {
             throw new IllegalArgumentException("connection allowance must be >= 0, was " + connectionAllowance);
         }
@@ -31,8 +31,8 @@ public final class SelfWeight {
             down.merge(m.i(), weight / 2, Double::sum);
             down.merge(m.j(), weight / 2, Double::sum);
         }
-        List<NodalLoad> loads = new ArrayList<>(down.size());
-        down.forEach((node, w) -> loads.add(NodalLoad.force(node, 0, 0, -w)));
+        List<NodeForce> loads = new ArrayList<>(down.size());
+        down.forEach((node, w) -> loads.add(NodeForce.force(node, 0, 0, -w)));
         return loads;
     }
 }

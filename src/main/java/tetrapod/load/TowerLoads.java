@@ -11,7 +11,7 @@ import tetrapod.common.BadInputException;
 import tetrapod.common.Problem;
 import tetrapod.common.Units;
 import tetrapod.generate.Tower;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.Node;
 import tetrapod.model.spec.AncillarySpec;
 import tetrapod.model.spec.CombinationSpec;
@@ -35,19 +35,19 @@ import tetrapod.model.spec.LoadsSpec;
 public final class TowerLoads {
 
     private final Tower tower;
-    private final List<NodalLoad> selfWeight;
-    private final List<NodalLoad> ancillaryWeight;
-    private final List<NodalLoad> dead;
-    private final List<NodalLoad> ice;
-    private final List<NodalLoad> nodal;
+    private final List<NodeForce> selfWeight;
+    private final List<NodeForce> ancillaryWeight;
+    private final List<NodeForce> dead;
+    private final List<NodeForce> ice;
+    private final List<NodeForce> nodal;
     private final WindLoads wind;
     private final WindLoads windOnIce;
     private final List<Combination> combinations;
     private final double sweepStep;
     private final LoadBasis basis;
 
-    private TowerLoads(Tower tower, List<NodalLoad> selfWeight, List<NodalLoad> ancillaryWeight, List<NodalLoad> ice,
-                       List<NodalLoad> nodal, WindLoads wind, WindLoads windOnIce, List<Combination> combinations,
+    private TowerLoads(Tower tower, List<NodeForce> selfWeight, List<NodeForce> ancillaryWeight, List<NodeForce> ice,
+                       List<NodeForce> nodal, WindLoads wind, WindLoads windOnIce, List<Combination> combinations,
                        double sweepStep) {
         this.tower = tower;
         this.selfWeight = List.copyOf(selfWeight);
@@ -88,17 +88,17 @@ public final class TowerLoads {
         if (!problems.isEmpty()) {
             throw new BadInputException(problems);
         }
-        List<NodalLoad> nodal = new ArrayList<>();
+        List<NodeForce> nodal = new ArrayList<>();
         for (LoadsSpec.NodalLoadSpec n : spec.nodal()) {
-            nodal.add(new NodalLoad(n.node(), n.fx() * Units.KN, n.fy() * Units.KN, n.fz() * Units.KN,
+            nodal.add(new NodeForce(n.node(), n.fx() * Units.KN, n.fy() * Units.KN, n.fz() * Units.KN,
                     n.mx() * Units.KNM, n.my() * Units.KNM, n.mz() * Units.KNM));
         }
         NodalLoads mergedNodal = new NodalLoads();
         mergedNodal.add(nodal, 1);
-        List<NodalLoad> selfWeight = SelfWeight.of(tower.frame(), tower.connectionAllowance());
+        List<NodeForce> selfWeight = SelfWeight.of(tower.frame(), tower.connectionAllowance());
         Asce7Ice ice = WindProfiles.ice(spec.ice());
-        List<NodalLoad> ancillaryWeight = List.of();
-        List<NodalLoad> iceWeight = List.of();
+        List<NodeForce> ancillaryWeight = List.of();
+        List<NodeForce> iceWeight = List.of();
         WindLoads wind = null;
         WindLoads windOnIce = null;
         if (tower.isGenerated()) {
@@ -194,27 +194,27 @@ public final class TowerLoads {
     }
 
     /** Self-weight of the steelwork with the connection allowance, N. */
-    public List<NodalLoad> selfWeight() {
+    public List<NodeForce> selfWeight() {
         return selfWeight;
     }
 
     /** Weight of the ancillaries, N. */
-    public List<NodalLoad> ancillaryWeight() {
+    public List<NodeForce> ancillaryWeight() {
         return ancillaryWeight;
     }
 
     /** The dead load: self-weight and ancillaries, N. */
-    public List<NodalLoad> dead() {
+    public List<NodeForce> dead() {
         return dead;
     }
 
     /** Weight of the ice on members and ancillaries, N; empty without ice. */
-    public List<NodalLoad> ice() {
+    public List<NodeForce> ice() {
         return ice;
     }
 
     /** The file's nodal loads, N and N·m, merged by node. */
-    public List<NodalLoad> nodal() {
+    public List<NodeForce> nodal() {
         return nodal;
     }
 

@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import tetrapod.generate.Tower;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 
 /**
  * The wind on a generated tower from any azimuth, by one {@link WindProfile}.
@@ -114,7 +114,7 @@ public final class WindLoads {
     }
 
     /** The complete wind load vector at θ, N, merged by node in ascending node id (computed directly, not from the basis). */
-    public List<NodalLoad> at(double azimuthDeg) {
+    public List<NodeForce> at(double azimuthDeg) {
         Direction dir = new Direction(azimuthDeg, profile.directionalFactor(azimuthDeg));
         NodalLoads sum = new NodalLoads();
         for (PanelState p : panels) {

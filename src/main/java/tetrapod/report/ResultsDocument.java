@@ -30,7 +30,7 @@ import tetrapod.solve.ContinuityNode;
 import tetrapod.solve.EndForces;
 import tetrapod.solve.MemberEndForces;
 import tetrapod.solve.NodeDisplacement;
-import tetrapod.solve.NodeForce;
+import tetrapod.model.NodeForce;
 import tetrapod.solve.Solution;
 import tetrapod.solve.StructuralModel;
 

@@ -1,5 +1,6 @@
 package tetrapod.solve;
 
+import tetrapod.model.NodeForce;
 import java.util.List;
 import tetrapod.model.Node;
 

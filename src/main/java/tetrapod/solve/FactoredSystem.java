@@ -1,5 +1,6 @@
 package tetrapod.solve;
 
+import tetrapod.model.NodeForce;
 import java.util.ArrayList;
 import java.util.List;
 import org.ejml.data.DMatrixSparseCSC;

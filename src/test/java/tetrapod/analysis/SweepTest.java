@@ -14,7 +14,7 @@ import tetrapod.load.Combination;
 import tetrapod.model.spec.LoadAction;
 import tetrapod.load.PanelForce;
 import tetrapod.model.Support;
-import tetrapod.solve.NodeForce;
+import tetrapod.model.NodeForce;
 
 /** The azimuth sweep: superposition against direct solves, equilibrium, symmetry (issue 4 item 7). */
 class SweepTest {

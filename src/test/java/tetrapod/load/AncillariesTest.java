@@ -9,7 +9,7 @@ import tetrapod.generate.Panel;
 import tetrapod.generate.Tower;
 import tetrapod.model.Face;
 import tetrapod.model.Idealisation;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.spec.AncillarySpec;
 import tetrapod.model.spec.BaseSpec;
 import tetrapod.model.spec.Bracing;
@@ -35,7 +35,7 @@ class AncillariesTest {
         // 2 kN at 4 m: panel 2 (3 to 6 m), a third of the way up: 2/3 to the 3 m level, 1/3 to the 6 m level
         Ancillaries items = Ancillaries.of(TOWER, List.of(new AncillarySpec.Point("lamp", 4, 2, 0.5, 1.2, 0, Face.NONE)));
         Panel p2 = TOWER.panels().get(1);
-        Map<Integer, NodalLoad> loads = OnePanelTowerTest.byNode(items.weights());
+        Map<Integer, NodeForce> loads = OnePanelTowerTest.byNode(items.weights());
         assertEquals(8, loads.size());
         for (int leg = 0; leg < 4; leg++) {
             assertEquals(-2000.0 * 2 / 3 / 4, loads.get(p2.bottomLegNodes().get(leg)).fz(), 1e-9);
@@ -48,7 +48,7 @@ class AncillariesTest {
         // on face +x: legs 1 and 2; at the top (6 m) all to the top level
         Ancillaries items = Ancillaries.of(TOWER, List.of(new AncillarySpec.Point("dish", 6, 1, 0.5, 1.2, 0, Face.X_PLUS)));
         Panel top = TOWER.panels().get(1);
-        Map<Integer, NodalLoad> loads = OnePanelTowerTest.byNode(items.weights());
+        Map<Integer, NodeForce> loads = OnePanelTowerTest.byNode(items.weights());
         assertEquals(2, loads.size());
         assertEquals(-500, loads.get(top.topLegNodes().get(1)).fz(), 1e-9);
         assertEquals(-500, loads.get(top.topLegNodes().get(2)).fz(), 1e-9);
@@ -60,10 +60,10 @@ class AncillariesTest {
         // (2.25 m: 3/4 up panel 1; 3.75 m: 1/4 up panel 2). Total 300 N.
         Ancillaries items = Ancillaries.of(TOWER,
                 List.of(new AncillarySpec.Linear("ladder", 1.5, 4.5, 0.1, 0.4, 1.5, 0.25, Face.Y_MINUS)));
-        List<NodalLoad> w = items.weights();
-        assertEquals(-300, w.stream().mapToDouble(NodalLoad::fz).sum(), 1e-9);
+        List<NodeForce> w = items.weights();
+        assertEquals(-300, w.stream().mapToDouble(NodeForce::fz).sum(), 1e-9);
         Panel p1 = TOWER.panels().get(0);
-        Map<Integer, NodalLoad> loads = OnePanelTowerTest.byNode(w);
+        Map<Integer, NodeForce> loads = OnePanelTowerTest.byNode(w);
         // the 3 m level takes 3/4 of 150 N from below and 3/4 of 150 N from above, over two legs
         assertEquals(-(0.75 * 150 + 0.75 * 150) / 2, loads.get(p1.topLegNodes().get(0)).fz(), 1e-9);
         assertEquals(-0.25 * 150 / 2, loads.get(p1.bottomLegNodes().get(1)).fz(), 1e-9);

@@ -6,7 +6,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import tetrapod.common.Units;
 import tetrapod.generate.Tower;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.SectionShape;
 
 /** Radial ice by ASCE 7-16 chapter 10 (equation numbers and the height factor recalled from memory). */
@@ -60,7 +60,7 @@ class Asce7IceTest {
         double expected = perMetre * (4 * 3 * (Math.hypot(0.1, 0.1) + 0.015)
                 + 8 * Math.sqrt(13) * (Math.hypot(0.07, 0.07) + 0.015)
                 + 8 * 2 * (Math.hypot(0.06, 0.06) + 0.015));
-        List<NodalLoad> loads = ice.memberWeights(tower.frame());
-        assertEquals(-expected, loads.stream().mapToDouble(NodalLoad::fz).sum(), 1e-9);
+        List<NodeForce> loads = ice.memberWeights(tower.frame());
+        assertEquals(-expected, loads.stream().mapToDouble(NodeForce::fz).sum(), 1e-9);
     }
 }

@@ -11,7 +11,7 @@ import org.junit.jupiter.params.provider.ValueSource;
 import tetrapod.generate.Tower;
 import tetrapod.generate.TowerGenerator;
 import tetrapod.io.SpecReader;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.spec.TowerSpec;
 import tetrapod.section.SectionCatalogue;
 import tetrapod.section.SteelGrades;
@@ -36,14 +36,14 @@ class ExampleModelLoadsTest {
             double[] w = basis.weights(key.combination(), key.azimuthDeg());
             Map<Integer, double[]> sum = new HashMap<>();
             for (int j = 0; j < basis.size(); j++) {
-                for (NodalLoad l : basis.components().get(j).loads()) {
+                for (NodeForce l : basis.components().get(j).loads()) {
                     double[] f = sum.computeIfAbsent(l.node(), n -> new double[3]);
                     f[0] += w[j] * l.fx();
                     f[1] += w[j] * l.fy();
                     f[2] += w[j] * l.fz();
                 }
             }
-            for (NodalLoad l : loads.loadCase(key).loads()) {
+            for (NodeForce l : loads.loadCase(key).loads()) {
                 double[] f = sum.get(l.node());
                 assertEquals(l.fx(), f[0], 1e-7, key.id());
                 assertEquals(l.fy(), f[1], 1e-7, key.id());

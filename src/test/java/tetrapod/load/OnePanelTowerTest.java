@@ -7,7 +7,7 @@ import java.util.Map;
 import java.util.stream.Collectors;
 import org.junit.jupiter.api.Test;
 import tetrapod.generate.Tower;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.spec.Asce7Edition;
 import tetrapod.model.spec.Exposure;
 import tetrapod.model.spec.TerrainCategory;
@@ -66,9 +66,9 @@ class OnePanelTowerTest {
         assertEquals(0, p.fy(), 1e-9);
 
         // the eight leg nodes (four at each level) take an eighth each
-        List<NodalLoad> loads = wind.at(0);
+        List<NodeForce> loads = wind.at(0);
         assertEquals(8, loads.size());
-        for (NodalLoad n : loads) {
+        for (NodeForce n : loads) {
             assertEquals(force / 8, n.fx(), 1e-9);
             assertEquals(0, n.fy(), 1e-9);
             assertEquals(0, n.fz(), 0);
@@ -117,11 +117,11 @@ class OnePanelTowerTest {
     }
 
     /** Σ of one force component (0 = x, 1 = y) over the loads. */
-    static double sum(List<NodalLoad> loads, int component) {
+    static double sum(List<NodeForce> loads, int component) {
         return loads.stream().mapToDouble(l -> component == 0 ? l.fx() : l.fy()).sum();
     }
 
-    static Map<Integer, NodalLoad> byNode(List<NodalLoad> loads) {
-        return loads.stream().collect(Collectors.toMap(NodalLoad::node, l -> l));
+    static Map<Integer, NodeForce> byNode(List<NodeForce> loads) {
+        return loads.stream().collect(Collectors.toMap(NodeForce::node, l -> l));
     }
 }

@@ -10,7 +10,7 @@ import tetrapod.model.Frame;
 import tetrapod.model.Idealisation;
 import tetrapod.model.Material;
 import tetrapod.model.Member;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.Node;
 import tetrapod.model.Role;
 import tetrapod.model.Section;
@@ -36,7 +36,7 @@ class SelfWeightTest {
                 List.of(member(1, 1, 2), member(2, 2, 3)),
                 List.of(new Support(1, Restraint.PINNED)));
 
-        List<NodalLoad> loads = SelfWeight.of(frame, 0.10);
+        List<NodeForce> loads = SelfWeight.of(frame, 0.10);
 
         // Worked by hand: w = 10 kg/m × 9.80665 m/s² × 1.10 = 107.87315 N/m.
         double w = 107.87315;

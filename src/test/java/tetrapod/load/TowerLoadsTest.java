@@ -14,7 +14,7 @@ import tetrapod.common.BadInputException;
 import tetrapod.common.Problem;
 import tetrapod.generate.Tower;
 import tetrapod.model.Face;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.spec.AncillarySpec;
 import tetrapod.model.spec.Asce7Edition;
 import tetrapod.model.spec.CombinationSpec;
@@ -95,7 +95,7 @@ class TowerLoadsTest {
                     double[] w = basis.weights(c, theta);
                     Map<Integer, double[]> sum = new HashMap<>();
                     for (int j = 0; j < basis.size(); j++) {
-                        for (NodalLoad l : basis.components().get(j).loads()) {
+                        for (NodeForce l : basis.components().get(j).loads()) {
                             double[] f = sum.computeIfAbsent(l.node(), n -> new double[6]);
                             f[0] += w[j] * l.fx();
                             f[1] += w[j] * l.fy();
@@ -104,7 +104,7 @@ class TowerLoadsTest {
                         }
                     }
                     LoadCase direct = loads.loadCase(c, theta);
-                    for (NodalLoad l : direct.loads()) {
+                    for (NodeForce l : direct.loads()) {
                         double[] f = sum.get(l.node());
                         String where = c.name() + " θ=" + theta + " node " + l.node();
                         assertEquals(l.fx(), f[0], 1e-8, where);
@@ -120,14 +120,14 @@ class TowerLoadsTest {
     @Test
     void deadLoadIsSelfWeightPlusAncillaries() throws BadInputException {
         TowerLoads loads = TowerLoads.build(TOWER, spec(EN, ICE, List.of(), 5));
-        double self = loads.selfWeight().stream().mapToDouble(NodalLoad::fz).sum();
-        double dead = loads.dead().stream().mapToDouble(NodalLoad::fz).sum();
+        double self = loads.selfWeight().stream().mapToDouble(NodeForce::fz).sum();
+        double dead = loads.dead().stream().mapToDouble(NodeForce::fz).sum();
         // 3 kN + 0.2 kN/m × 24 m = 7.8 kN of ancillaries
         assertEquals(-7800, dead - self, 1e-9);
         assertEquals(-TOWER.steelMassWithAllowance() * 9.80665, self, 1e-6);
-        assertTrue(loads.ice().stream().mapToDouble(NodalLoad::fz).sum() < 0);
+        assertTrue(loads.ice().stream().mapToDouble(NodeForce::fz).sum() < 0);
         // the nodal load in N and N·m
-        assertEquals(List.of(new NodalLoad(TOWER.frame().nodes().size(), 1000, 0, -2000, 0, 0, 500)), loads.nodal());
+        assertEquals(List.of(new NodeForce(TOWER.frame().nodes().size(), 1000, 0, -2000, 0, 0, 500)), loads.nodal());
     }
 
     /** A square tower meets the same total wind every 90° (the faces map onto each other). */

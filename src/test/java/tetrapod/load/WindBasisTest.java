@@ -10,7 +10,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 import tetrapod.generate.Tower;
 import tetrapod.model.Face;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.spec.AncillarySpec;
 import tetrapod.model.spec.Asce7Edition;
 import tetrapod.model.spec.Exposure;
@@ -49,16 +49,16 @@ class WindBasisTest {
                 Map<Integer, double[]> superposed = new HashMap<>();
                 double[] c = basis.coefficients(theta);
                 for (int k = 0; k < basis.size(); k++) {
-                    for (NodalLoad l : basis.vectors().get(k).loads()) {
+                    for (NodeForce l : basis.vectors().get(k).loads()) {
                         double[] f = superposed.computeIfAbsent(l.node(), n -> new double[3]);
                         f[0] += c[k] * l.fx();
                         f[1] += c[k] * l.fy();
                         f[2] += c[k] * l.fz();
                     }
                 }
-                List<NodalLoad> direct = wind.at(theta);
+                List<NodeForce> direct = wind.at(theta);
                 double scale = direct.stream().mapToDouble(l -> Math.hypot(l.fx(), l.fy())).max().orElse(1);
-                for (NodalLoad l : direct) {
+                for (NodeForce l : direct) {
                     double[] f = superposed.getOrDefault(l.node(), new double[3]);
                     assertEquals(l.fx(), f[0], 1e-12 * scale, "fx at node " + l.node() + ", θ = " + theta);
                     assertEquals(l.fy(), f[1], 1e-12 * scale, "fy at node " + l.node() + ", θ = " + theta);
@@ -80,7 +80,7 @@ class WindBasisTest {
                     + w.ancillaries().stream().mapToDouble(AncillaryForce::fx).sum();
             double fy = w.panels().stream().mapToDouble(PanelForce::fy).sum()
                     + w.ancillaries().stream().mapToDouble(AncillaryForce::fy).sum();
-            List<NodalLoad> loads = wind.at(theta);
+            List<NodeForce> loads = wind.at(theta);
             assertEquals(fx, OnePanelTowerTest.sum(loads, 0), 1e-9 * Math.max(1, Math.abs(fx)));
             assertEquals(fy, OnePanelTowerTest.sum(loads, 1), 1e-9 * Math.max(1, Math.abs(fy)));
         }

@@ -1,5 +1,6 @@
 package tetrapod.solve;
 
+import tetrapod.model.NodeForce;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;

@@ -1,10 +1,9 @@
-package tetrapod.solve;
+package tetrapod.model;
 
-import tetrapod.model.Vec3;
 
 /**
- * Forces (N) and moments (N·m) at a node, in tower axes. Used for applied loads, support
- * reactions and auto-restraint forces.
+ * Forces Fx, Fy, Fz (N) and moments Mx, My, Mz (N·m) at a node, in tower axes: an applied load,
+ * a support reaction or an auto-restraint force.
  */
 public record NodeForce(int node, double fx, double fy, double fz, double mx, double my, double mz) {
 
@@ -43,5 +42,13 @@ public record NodeForce(int node, double fx, double fy, double fz, double mx, do
 
     public NodeForce times(double s) {
         return new NodeForce(node, fx * s, fy * s, fz * s, mx * s, my * s, mz * s);
+    }
+
+    /** The sum of two forces at the same node. */
+    public NodeForce plus(NodeForce o) {
+        if (o.node != node) {
+            throw new IllegalArgumentException("cannot add forces at nodes " + node + " and " + o.node);
+        }
+        return new NodeForce(node, fx + o.fx, fy + o.fy, fz + o.fz, mx + o.mx, my + o.my, mz + o.mz);
     }
 }
