@@ -14,7 +14,7 @@ import tetrapod.model.SectionShape;
  * stresses are design stresses at factored loads (there is no separate resistance factor), so the
  * utilisation is the factored force over F_a A, F_t A_n and the bolt values. Clause numbers are
  * those of ASCE 10-97; the constants were recalled from memory and are listed in
- * docs/methods-checks.md to be checked against the printed standard.
+ * docs/methods.md (Checks) to be checked against the printed standard.
  */
 public final class Asce10MemberCheck implements MemberCheck {
 

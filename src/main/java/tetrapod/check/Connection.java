@@ -51,7 +51,7 @@ public record Connection(int bolts, double diameter, BoltGrade grade, double hol
 
     /**
      * The connection assumed for a member of {@code role} that the model file does not cover
-     * (common practice, stated in docs/methods-checks.md): bracing, plan and general members two
+     * (common practice, stated in docs/methods.md (Checks)): bracing, plan and general members two
      * M16 8.8 bolts, redundants one; legs two M20 holes in the section and splice bolts not
      * checked (a leg splice is assumed to be designed for the leg).
      */

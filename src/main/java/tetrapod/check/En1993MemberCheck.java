@@ -16,7 +16,7 @@ import tetrapod.model.spec.PartialFactors;
  * (flexural buckling) and 6.3.3 (buckling with bending), Annex BB.1.2 (angles as web members),
  * EN 1993-1-8 3.10.3 (angles connected by one leg) and Table 3.4 (bolts), EN 1993-3-1 H.2
  * (legs). Forces are design values of a factored load case; the partial factors are the user's.
- * See docs/methods-checks.md for every formula and what is assumed.
+ * See docs/methods.md (Checks) for every formula and what is assumed.
  */
 public final class En1993MemberCheck implements MemberCheck {
 

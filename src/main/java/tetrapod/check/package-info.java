@@ -12,6 +12,6 @@
  * Envelopes over load cases and azimuths are accumulated by the caller, case by case, in
  * {@link tetrapod.check.MemberEnvelope} and {@link tetrapod.check.FoundationEnvelope} (each keeps
  * the largest value with its case and azimuth; ties keep the earlier case).
- * SI units throughout. Formulas and sources: docs/methods-checks.md.
+ * SI units throughout. Formulas and sources: docs/methods.md (Checks).
  */
 package tetrapod.check;

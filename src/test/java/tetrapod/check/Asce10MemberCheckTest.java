@@ -13,7 +13,7 @@ import tetrapod.model.spec.ConnectedLeg;
 /**
  * ASCE 10: F_a, C_c, the effective slenderness curves, local buckling of angle legs, and a single
  * angle worked by hand. Formulas as ASCE 10-97 gives them (recalled from memory; see
- * docs/methods-checks.md); C_c against a published value. Stresses in ksi, E = 29 000 ksi.
+ * docs/methods.md (Checks)); C_c against a published value. Stresses in ksi, E = 29 000 ksi.
  */
 class Asce10MemberCheckTest {
 

@@ -68,7 +68,7 @@ public record ConnectionSpec(Role role, List<Integer> segments, int bolts, doubl
 
     /**
      * A connection of {@code bolts} bolts of diameter (mm) and grade with every other value assumed
-     * (common practice, stated in docs/methods-checks.md): clearance by EN 1090-2, e1 = e2 = 1.5 d0,
+     * (common practice, stated in docs/methods.md (Checks)): clearance by EN 1090-2, e1 = e2 = 1.5 d0,
      * p1 = 3 d0, one shear plane, threads in the shear plane, holes by role, the long leg connected.
      */
     public static ConnectionSpec assumed(Role role, List<Integer> segments, int bolts, double diameterMm,
