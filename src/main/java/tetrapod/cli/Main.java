@@ -55,7 +55,7 @@ public final class Main implements Runnable {
             return ExitCode.BAD_INPUT;
         }
         if (ex instanceof UnstableStructureException unstable) {
-            err.println("unstable structure: " + unstable.getMessage());
+            err.println("error: " + unstable.getMessage());
             return ExitCode.UNSTABLE;
         }
         err.println("internal error: " + ex);

@@ -1,0 +1,56 @@
+package tetrapod.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.junit.jupiter.params.provider.ValueSource;
+
+class AnalyzeCommandTest {
+
+    static Stream<Path> models() throws IOException {
+        return CommandLineTest.models();
+    }
+
+    @ParameterizedTest
+    @MethodSource("models")
+    void everyExampleIsAnalysedAndItsResultsWritten(Path model, @TempDir Path dir) throws IOException {
+        CliRun run = CliRun.of("analyze", model.toString(), "-o", dir.toString());
+        assertEquals(ExitCode.DONE, run.exitCode(), run.err());
+        String results = Files.readString(dir.resolve("results.json"));
+        assertTrue(results.contains("\"format\": \"tetrapod-results/1\""));
+        assertFalse(results.contains("NaN") || results.contains("Infinity"), "no NaN in the output");
+        assertTrue(run.out().contains("most utilised members"), run.out());
+        assertTrue(run.out().contains("qualified engineer"), "the caution is printed");
+        try (Stream<Path> files = Files.list(dir)) {
+            assertTrue(files.noneMatch(p -> p.getFileName().toString().startsWith(".")), "no temporary file left");
+        }
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"k-panel-without-horizontals.json", "tripod-on-one-support.json"})
+    void aMechanismExitsThreeNamingTheFreeNodes(String file, @TempDir Path dir) {
+        CliRun run = CliRun.of("analyze", "src/test/resources/mechanisms/" + file, "-o", dir.toString());
+        assertEquals(ExitCode.UNSTABLE, run.exitCode(), run.out() + run.err());
+        assertTrue(run.err().matches("(?s)error: unstable structure: free motion at node \\d+ \\(u[xyz].*likely cause: .*"),
+                run.err());
+        assertFalse(run.err().contains("Exception"), run.err());
+        assertFalse(Files.exists(dir.resolve("results.json")), "no results for a mechanism");
+    }
+
+    @Test
+    void strictTurnsOverstressIntoExitOne(@TempDir Path dir) {
+        // The invented hilltop mast's redundants exceed their slenderness limit (summary: OVERSTRESSED).
+        CliRun run = CliRun.of("analyze", "models/hilltop-relay-k.json", "-o", dir.toString(), "--strict");
+        assertTrue(run.out().contains("OVERSTRESSED"), run.out());
+        assertEquals(ExitCode.OVERSTRESS, run.exitCode());
+    }
+}
