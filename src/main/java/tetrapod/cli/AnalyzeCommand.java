@@ -12,7 +12,9 @@ import picocli.CommandLine.Model.CommandSpec;
 import tetrapod.analysis.Analysis;
 import tetrapod.analysis.AnalysisResult;
 import tetrapod.common.ProgressListener;
+import tetrapod.io.DefaultedKeys;
 import tetrapod.io.JsonOutput;
+import tetrapod.io.SpecWriter;
 import tetrapod.report.ResultsDocument;
 
 /** The main job: analyse a tower under its loads and write the results. */
@@ -48,7 +50,8 @@ final class AnalyzeCommand implements Callable<Integer> {
         watch.lap("analyse");
         Path folder = output != null ? output : OutputFolders.forModel(model);
         Path resultsFile = folder.resolve("results.json");
-        JsonOutput.write(resultsFile, ResultsDocument.build(loaded.spec(), result));
+        JsonOutput.write(resultsFile, ResultsDocument.build(loaded.spec(), result,
+                DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec()))));
         watch.lap("report");
 
         AnalysisSummary.print(out, result);
