@@ -13,7 +13,7 @@ import tetrapod.common.UnstableStructureException;
         description = "Analysis and checking of four-leg steel lattice towers.%n"
                 + "Results must be checked by a qualified engineer against the codes that apply locally.",
         subcommands = {AnalyzeCommand.class, ValidateCommand.class, NewCommand.class, GeometryCommand.class,
-                RenderCommand.class, ViewCommand.class,
+                RenderCommand.class, ViewCommand.class, ReportCommand.class,
                 CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
 
