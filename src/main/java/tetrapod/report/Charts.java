@@ -106,6 +106,8 @@ final class Charts {
             renderer.setSeriesPaint(k, ChartStyle.series(k));
         }
         renderer.setItemMargin(0.0);
+        plot.getDomainAxis().setMaximumCategoryLabelWidthRatio(1.6f);
+        plot.getDomainAxis().setCategoryLabelPositions(org.jfree.chart.axis.CategoryLabelPositions.UP_45);
         ((NumberAxis) plot.getRangeAxis()).setStandardTickUnits(NumberAxis.createIntegerTickUnits());
         return Figure.draw("fig-histogram", "Members by governing utilisation, stacked by role.", chart, WIDTH, HEIGHT);
     }

@@ -33,7 +33,7 @@ final class FoundationsSection implements Section {
         for (FootingRow f : footings) {
             for (FootingCheck c : f.checks()) {
                 t.row(Cell.num(Integer.toString(f.node())), Cell.of(c.name()), Cell.utilisation(c.utilisation(), ""),
-                        Cell.of(c.clause()), Cell.of(SummarySection.caseText(c.caseId())), Cell.of(c.note()));
+                        Cell.of(c.clause()), Cell.caseId((c.caseId())), Cell.of(c.note()));
             }
         }
         t.writeTo(out);

@@ -81,9 +81,9 @@ final class HandMethodSection implements Section {
         Double by = Tree.numOrNull(base, "widthY");
         if (bx != null && by != null && Math.abs(bx - by) > 1e-9) {
             out.add("Rectangular plan (" + InputTables.plain(bx) + " m × " + InputTables.plain(by) + " m): the hand "
-                    + "method splits an oblique moment over the two lever arms by a fixed rule; the frame finds its "
-                    + "own path, and the faces of the two widths take different shares of the shear, so the largest "
-                    + "differences come at oblique azimuths.");
+                    + "method takes fixed levers (2 bx, 2 by, and a linear split between them for oblique wind); in the "
+                    + "frame the two pairs of faces differ in width, bracing angle and stiffness and share the shear "
+                    + "and the moment by stiffness, not by that rule, so the two can differ even for wind along a face.");
         } else {
             out.add("Square plan: the hand method's levers are exact for wind normal to a face and along a diagonal; "
                     + "between them, the frame's distribution is not the hand method's linear split.");
@@ -95,10 +95,10 @@ final class HandMethodSection implements Section {
                         + "not loaded symmetrically; the hand method puts all load through the tower's centre."
                 : "Ancillaries (if any) are spread over the four legs, as the hand method assumes; an item on one face "
                         + "would load that face's legs more.");
-        out.add("Wind incidence: the analysis applies each panel's wind at the panel's own height and with the "
-                + "incidence factor of the azimuth, so the forces come into the legs panel by panel; the hand method "
-                + "uses only the resultant H at its height zH, which gives the same base moment but none of the "
-                + "local effects.");
+        out.add("Wind incidence: for oblique wind the hand method shares the moment between the two lever arms by "
+                + "the rule above, while in the frame the wind meets two faces at once and the shear flows through both "
+                + "pairs of faces' bracing; each panel's force also enters the legs at its own height, where the hand "
+                + "method knows only the resultant H at its height zH (the same base moment, none of the local effects).");
         if (worstAt != null) {
             out.add("Here the largest difference is " + Format.fixed(worstDiff, 1) + " % at " + Format.degrees(worstAt)
                     + "°. A large difference is a prompt to look at that azimuth, not in itself an error.");

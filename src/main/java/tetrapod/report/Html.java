@@ -3,6 +3,10 @@ package tetrapod.report;
 /** Writes HTML text: every piece of text escaped, tags closed by the caller in order. */
 final class Html {
 
+    /** Tags inside running text: no line break after them, which would show as a space. */
+    private static final java.util.Set<String> INLINE = java.util.Set.of("a", "span", "strong", "em", "code", "sub",
+            "sup");
+
     private final StringBuilder out = new StringBuilder(1 << 16);
 
     /** Text made safe for HTML content and attribute values. */
@@ -51,7 +55,10 @@ final class Html {
     }
 
     Html close(String tag) {
-        out.append("</").append(tag).append(">\n");
+        out.append("</").append(tag).append('>');
+        if (!INLINE.contains(tag)) {
+            out.append('\n');
+        }
         return this;
     }
 

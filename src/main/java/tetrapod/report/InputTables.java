@@ -33,20 +33,32 @@ final class InputTables {
     }
 
     private static void flatten(Object value, String path, String name, List<String[]> rows) {
+        flatten(value, Map.of(), path, name, rows);
+    }
+
+    private static void flatten(Object value, Map<?, ?> parent, String path, String name, List<String[]> rows) {
         if (value instanceof Map<?, ?> map && !map.isEmpty()) {
             for (Map.Entry<?, ?> e : map.entrySet()) {
                 String key = String.valueOf(e.getKey());
-                flatten(e.getValue(), path + "." + key, name.isEmpty() ? key : name + "." + key, rows);
+                flatten(e.getValue(), map, path + "." + key, name.isEmpty() ? key : name + "." + key, rows);
             }
         } else if (value instanceof List<?> list && !list.isEmpty() && !allScalars(list)) {
             for (int k = 0; k < list.size(); k++) {
-                flatten(list.get(k), path + "[" + k + "]", name + "[" + k + "]", rows);
+                flatten(list.get(k), parent, path + "[" + k + "]", name + "[" + k + "]", rows);
             }
         } else {
             String key = name.contains(".") ? name.substring(name.lastIndexOf('.') + 1) : name;
             key = key.replaceAll("\\[\\d+]$", "");
-            rows.add(new String[] {path, name, text(value), InputUnits.of(key)});
+            rows.add(new String[] {path, name, text(value), unit(key, parent)});
         }
+    }
+
+    /** The key's unit; an ancillary's weight is kN for a point item and kN/m for a linear one. */
+    private static String unit(String key, Map<?, ?> parent) {
+        if (key.equals("weight")) {
+            return "linear".equals(parent.get("kind")) ? "kN/m" : "kN";
+        }
+        return InputUnits.of(key);
     }
 
     private static boolean allScalars(List<?> list) {

@@ -17,7 +17,7 @@ final class InputUnits {
             Map.entry("allowableTension", "MPa"), Map.entry("allowableShear", "MPa"),
             Map.entry("concreteUnitWeight", "kN/m³"), Map.entry("soilUnitWeight", "kN/m³"),
             Map.entry("frustumHalfAngle", "degrees"), Map.entry("sweepStep", "degrees"),
-            Map.entry("weight", "kN or kN/m"), Map.entry("F", "kN, kN·m"));
+            Map.entry("F", "kN, kN·m"));
 
     private InputUnits() { }
 

@@ -32,7 +32,7 @@ final class MemberChecksSection implements Section {
                     Cell.num(Integer.toString(m.panel())), Cell.of(m.section()), Cell.num(Format.fixed(m.length(), 3)),
                     Cell.num(Format.kN(c.maxTension().value())), Cell.num(Format.kN(c.maxCompression().value())),
                     Cell.utilisation(c.utilisation(), ""), Cell.of(c.mode()), Cell.of(c.clause()),
-                    Cell.of(SummarySection.caseText(c.caseId())), Cell.of(c.note()));
+                    Cell.caseId((c.caseId())), Cell.of(c.note()));
         }
         out.open("div", "class=\"wide\"");
         t.writeTo(out);

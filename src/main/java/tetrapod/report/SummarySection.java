@@ -72,7 +72,7 @@ final class SummarySection implements Section {
             MemberRow m = r.member(c.member());
             t.row(Cell.num(Integer.toString(m.id())), Cell.of(m.role()), Cell.num(Integer.toString(m.segment())),
                     Cell.of(m.section()), Cell.utilisation(c.utilisation(), "top-" + (k + 1) + "-utilisation"),
-                    Cell.of(c.mode()), Cell.of(c.clause()), Cell.of(caseText(c.caseId())));
+                    Cell.of(c.mode()), Cell.of(c.clause()), Cell.caseId((c.caseId())));
         }
         return t;
     }
@@ -83,7 +83,7 @@ final class SummarySection implements Section {
         if (!top.isEmpty()) {
             CheckRow c = top.get(0);
             t.row(Cell.of("most utilised member (" + c.member() + ", " + c.mode() + ")"),
-                    Cell.num(Format.utilisation(c.utilisation())), Cell.of(caseText(c.caseId())),
+                    Cell.num(Format.utilisation(c.utilisation())), Cell.caseId((c.caseId())),
                     Cell.num(Format.azimuth(c.azimuthDeg())).withId("governing-member-azimuth"));
         }
         r.utilisationByAzimuth().stream().max(java.util.Comparator.comparingDouble(Rows.AzimuthPeak::utilisation))
@@ -105,7 +105,7 @@ final class SummarySection implements Section {
             }
         }
         worst.forEach((name, c) -> t.row(Cell.of("footing " + name + " (node " + where.get(name) + ")"),
-                Cell.num(Format.utilisation(c.utilisation())), Cell.of(caseText(c.caseId())),
+                Cell.num(Format.utilisation(c.utilisation())), Cell.caseId((c.caseId())),
                 Cell.num(Format.azimuth(c.azimuthDeg()))));
         return t;
     }
@@ -121,7 +121,7 @@ final class SummarySection implements Section {
         if (best != null) {
             Peak p = what.apply(best);
             t.row(Cell.of(label + " (node " + best.node() + ")"), Cell.num(Format.kN(p.value()) + " kN"),
-                    Cell.of(caseText(p.caseId())), Cell.num(Format.azimuth(p.azimuthDeg()))
+                    Cell.caseId((p.caseId())), Cell.num(Format.azimuth(p.azimuthDeg()))
                             .withId("governing-" + key + "-azimuth"));
         }
     }
@@ -137,7 +137,7 @@ final class SummarySection implements Section {
             for (int k = 0; k < 3; k++) {
                 row.add(Cell.num(peaks[k].occurs() ? Format.kN(peaks[k].value()) : "none")
                         .withId("reaction-" + l.node() + "-" + keys[k]));
-                row.add(Cell.of(caseText(peaks[k].caseId())));
+                row.add(Cell.caseId((peaks[k].caseId())));
             }
             t.row(row);
         }

@@ -16,6 +16,11 @@ final class Table {
             return new Cell(text, "num", "");
         }
 
+        /** A load case id, kept on one line. */
+        static Cell caseId(String caseId) {
+            return new Cell(SummarySection.caseText(caseId), "case", "");
+        }
+
         /** A utilisation: right-aligned, marked when above 1. */
         static Cell utilisation(double u, String id) {
             return new Cell(Format.utilisation(u), u > 1.0 ? "num over" : "num", id);
