@@ -72,7 +72,7 @@ final class ResultViews {
         scalars.put(Colouring.UTILISATION, MemberScalars.of(utilisation));
         scalars.put(Colouring.AZIMUTH, MemberScalars.of(azimuth));
         scalars.put(Colouring.AXIAL, MemberScalars.of(axial));
-        return new ViewCase("envelope over " + result.caseCount() + " cases", OptionalDouble.empty(), scalars,
+        return new ViewCase("envelope over " + result.caseCount() + (result.caseCount() == 1 ? " case" : " cases"), OptionalDouble.empty(), scalars,
                 List.of(), List.of(), notes);
     }
 

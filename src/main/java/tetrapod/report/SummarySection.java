@@ -38,11 +38,12 @@ final class SummarySection implements Section {
                 .element("span", "id=\"max-utilisation\"", Format.utilisation(max))
                 .text(over ? " (above 1.000)." : " (at most 1.000).")
                 .close("div");
-        out.p(String.format(java.util.Locale.ROOT, "%s: %s model, %d nodes, %d members; %d load cases solved in "
+        boolean swept = !r.legSweeps().isEmpty();
+        out.p(String.format(java.util.Locale.ROOT, "%s: %s model, %d nodes, %d members; %d load case%s solved in "
                         + "full (largest equilibrium residual %.1e)%s.", r.name(), r.idealisation(), r.nodeCount(),
-                r.members().size(), r.caseCountInFull(), r.worstEquilibriumError(),
-                r.sweepStepDeg().map(s -> ", every combination with wind swept round the tower in steps of "
-                        + Format.degrees(s) + "°").orElse("")));
+                r.members().size(), r.caseCountInFull(), r.caseCountInFull() == 1 ? "" : "s", r.worstEquilibriumError(),
+                swept ? r.sweepStepDeg().map(s -> "; every combination with wind swept round the tower in steps of "
+                        + Format.degrees(s) + "°").orElse("") : "; no wind"));
 
         input.towerPng().ifPresent(png -> out.open("figure", "class=\"picture\" id=\"fig-tower\"")
                 .raw("<img alt=\"3D view of the tower, members coloured by governing utilisation\" src=\"data:image/png;base64,")
