@@ -30,6 +30,10 @@ public final class Main implements Runnable {
     }
 
     public static void main(String[] args) {
+        // charts and pictures are drawn off screen: never ask AWT for a display
+        if (System.getProperty("java.awt.headless") == null) {
+            System.setProperty("java.awt.headless", "true");
+        }
         System.exit(commandLine().execute(args));
     }
 
