@@ -15,7 +15,7 @@ final class ChartStyle {
 
     /**
      * Series colours: the eight-colour palette of Okabe and Ito ("Color Universal Design", 2002),
-     * black left out and blue first.
+     * blue first (hex values recalled from memory).
      */
     static final Color[] SERIES = {
         new Color(0x0072B2), new Color(0xD55E00), new Color(0x009E73), new Color(0xCC79A7),
