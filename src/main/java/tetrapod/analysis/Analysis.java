@@ -108,7 +108,7 @@ public final class Analysis {
         List<AzimuthWind> wind = new ArrayList<>();
         loads.wind().ifPresent(w -> REPORTED_AZIMUTHS.forEach(a -> wind.add(w.azimuth(a))));
         return new AnalysisResult(tower, loads, model, cases, wind, sweep.legBaseSweeps(), legBases, members,
-                foundations, sweep.handComparisons(), responses, (int) total);
+                foundations, sweep.handComparisons(), responses, (int) total, sweep.utilisationByAzimuth());
     }
 
     /** Adds the case where {@code e} occurred to the reported cases (after those already there). */

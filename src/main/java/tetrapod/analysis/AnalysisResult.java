@@ -23,11 +23,14 @@ import tetrapod.solve.StructuralModel;
  * @param hand        the hand method beside the analysis, per wind combination and azimuth
  * @param responses   the superposable responses, for further cases
  * @param caseCount   number of load cases covered (combinations × azimuths)
+ * @param utilisationByAzimuth the largest member utilisation at each azimuth of the sweep over every
+ *                    combination with wind, by ascending azimuth (empty without wind)
  */
 public record AnalysisResult(Tower tower, TowerLoads loads, StructuralModel model, List<SolvedCase> cases,
                              List<AzimuthWind> wind, List<LegBaseSweep> sweep, List<LegBaseExtremes> legBases,
                              List<MemberEnvelope> members, List<FoundationEnvelope> foundations,
-                             List<HandComparison> hand, BasisResponses responses, int caseCount) {
+                             List<HandComparison> hand, BasisResponses responses, int caseCount,
+                             List<AzimuthUtilisation> utilisationByAzimuth) {
     public AnalysisResult {
         cases = List.copyOf(cases);
         wind = List.copyOf(wind);
@@ -36,6 +39,7 @@ public record AnalysisResult(Tower tower, TowerLoads loads, StructuralModel mode
         members = List.copyOf(members);
         foundations = List.copyOf(foundations);
         hand = List.copyOf(hand);
+        utilisationByAzimuth = List.copyOf(utilisationByAzimuth);
     }
 
     /** The largest utilisation of any member or footing. */

@@ -9,6 +9,7 @@ import tetrapod.check.FoundationCheck;
 import tetrapod.check.FoundationEnvelope;
 import tetrapod.check.HandMethod;
 import tetrapod.check.LegBaseForces;
+import tetrapod.check.MemberCheckResult;
 import tetrapod.check.MemberChecker;
 import tetrapod.check.MemberEnvelope;
 import tetrapod.check.MemberForces;
@@ -21,7 +22,8 @@ import tetrapod.solve.BasisResponses;
 /**
  * Takes the cases one by one (formed by superposition) and keeps what the report needs: each leg
  * base's reaction against azimuth, the extremes of the reactions, every member's check envelope,
- * every footing's check envelope, and the hand method beside the analysis. Keeps envelopes, not
+ * every footing's check envelope, the largest member utilisation at each azimuth, and the hand
+ * method beside the analysis. Keeps envelopes, not
  * every case's results.
  */
 final class Sweep {
@@ -46,6 +48,7 @@ final class Sweep {
     private final MemberEnvelope[] members;
     private final FoundationEnvelope[] foundations;
     private final List<HandComparison> hand = new ArrayList<>();
+    private final Map<Double, AzimuthUtilisation> byAzimuth = new java.util.TreeMap<>();
 
     /**
      * @param footing    the footing check, or null when the model gives no foundation
@@ -118,11 +121,23 @@ final class Sweep {
             }
         }
         responses.axialForces(weights, axial);
+        double worst = -1;
+        int worstMember = 0;
         for (int m = 0; m < axial.length; m++) {
             Member member = frame.members().get(m);
             MemberForces forces = memberForces(m, member, weights);
-            members[m] = members[m].with(checker.check(member.id(), forces, id -> axial[memberIndex.get(id)]),
-                    forces, caseId, azimuthDeg);
+            MemberCheckResult checked = checker.check(member.id(), forces, id -> axial[memberIndex.get(id)]);
+            members[m] = members[m].with(checked, forces, caseId, azimuthDeg);
+            if (checked.governing().utilisation() > worst) {
+                worst = checked.governing().utilisation();
+                worstMember = member.id();
+            }
+        }
+        if (azimuthDeg != null && worst >= 0) {
+            AzimuthUtilisation old = byAzimuth.get(azimuthDeg);
+            if (old == null || worst > old.utilisation()) {
+                byAzimuth.put(azimuthDeg, new AzimuthUtilisation(azimuthDeg, worst, worstMember, combination.name()));
+            }
         }
         if (azimuthDeg != null && !Double.isNaN(baseWidthX)) {
             hand.add(handComparison(combination.name(), azimuthDeg, weights, feCompression, feTension));
@@ -185,6 +200,11 @@ final class Sweep {
 
     List<FoundationEnvelope> foundationEnvelopes() {
         return List.of(foundations);
+    }
+
+    /** The largest member utilisation at each azimuth over every combination with wind, by ascending azimuth. */
+    List<AzimuthUtilisation> utilisationByAzimuth() {
+        return List.copyOf(byAzimuth.values());
     }
 
     List<HandComparison> handComparisons() {

@@ -3,6 +3,7 @@ package tetrapod.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -11,16 +12,28 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 import tetrapod.analysis.Analysis;
 import tetrapod.analysis.AnalysisResult;
-import tetrapod.common.ProgressListener;
+import tetrapod.io.DefaultedKeys;
 import tetrapod.io.JsonOutput;
+import tetrapod.io.ResultsReader;
+import tetrapod.io.SpecWriter;
+import tetrapod.report.CsvTables;
+import tetrapod.report.ReportHtml;
+import tetrapod.report.Results;
 import tetrapod.report.ResultsDocument;
+import tetrapod.view.RenderRequest;
+import tetrapod.view.ViewData;
 
 /** The main job: analyse a tower under its loads and write the results. */
 @Command(name = "analyze", mixinStandardHelpOptions = true,
         description = "Analyse a tower: self-weight, ancillaries, ice and wind from every azimuth of the sweep, "
-                + "every combination; writes results.json into the output folder and prints a summary.%n"
+                + "every combination; writes results.json, members.csv, reactions.csv, wind.csv, tower.png and "
+                + "report.html into the output folder and prints a summary.%n"
                 + "Results must be checked by a qualified engineer against the codes that apply locally.")
 final class AnalyzeCommand implements Callable<Integer> {
+
+    /** Size of tower.png, px. */
+    static final int PICTURE_WIDTH = 1600;
+    static final int PICTURE_HEIGHT = 1200;
 
     @Parameters(paramLabel = "MODEL.json", description = "The tower spec.")
     Path model;
@@ -35,6 +48,10 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Option(names = "--timings", description = "Print the wall time of each stage and the DOF and case counts.")
     boolean timings;
 
+    @Option(names = {"-q", "--quiet"},
+            description = "No progress bar (there is none anyway when the output is not a terminal).")
+    boolean quiet;
+
     @Spec
     CommandSpec spec;
 
@@ -44,15 +61,30 @@ final class AnalyzeCommand implements Callable<Integer> {
         Stopwatch watch = new Stopwatch();
         LoadedModel loaded = LoadedModel.read(model);
         watch.lap("read+generate+loads");
-        AnalysisResult result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(), ProgressListener.NONE);
+        AnalysisResult result;
+        try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
+            result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(), progress);
+        }
         watch.lap("analyse");
         Path folder = output != null ? output : OutputFolders.forModel(model);
         Path resultsFile = folder.resolve("results.json");
-        JsonOutput.write(resultsFile, ResultsDocument.build(loaded.spec(), result));
+        JsonOutput.write(resultsFile, ResultsDocument.build(loaded.spec(), result,
+                DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec()))));
+        // everything else is built from the file just written, as 'tetrapod report' builds it
+        Results results = new Results(ResultsReader.read(resultsFile));
+        CsvTables.writeAll(results, folder);
+        watch.lap("report");
+        ViewData view = ResultViews.of(result);
+        Path picture = folder.resolve("tower.png");
+        String route = RenderCommand.write(view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
+        watch.lap("picture");
+        ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(java.nio.file.Files.readAllBytes(picture)));
         watch.lap("report");
 
         AnalysisSummary.print(out, result);
-        out.println("results written to " + folder);
+        out.println("tower.png " + route.replaceFirst("^render: ", "drawn by "));
+        out.println("results written to " + folder + ": results.json, " + CsvTables.MEMBERS + ", "
+                + CsvTables.REACTIONS + ", " + CsvTables.WIND + ", tower.png, " + ReportHtml.FILE);
         if (timings) {
             out.printf(Locale.ROOT, "timings (%d DOF, %d load cases, %d basis vectors):%n",
                     result.model().freeDofCount(), result.caseCount(), result.responses().size());
@@ -60,5 +92,4 @@ final class AnalyzeCommand implements Callable<Integer> {
         }
         return strict && result.maxUtilisation() > 1.0 ? ExitCode.OVERSTRESS : ExitCode.DONE;
     }
-
 }

@@ -13,7 +13,7 @@ import tetrapod.common.UnstableStructureException;
         description = "Analysis and checking of four-leg steel lattice towers.%n"
                 + "Results must be checked by a qualified engineer against the codes that apply locally.",
         subcommands = {AnalyzeCommand.class, ValidateCommand.class, NewCommand.class, GeometryCommand.class,
-                RenderCommand.class, ViewCommand.class,
+                RenderCommand.class, ViewCommand.class, ReportCommand.class,
                 CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
 
@@ -30,6 +30,10 @@ public final class Main implements Runnable {
     }
 
     public static void main(String[] args) {
+        // charts and pictures are drawn off screen: never ask AWT for a display
+        if (System.getProperty("java.awt.headless") == null) {
+            System.setProperty("java.awt.headless", "true");
+        }
         System.exit(commandLine().execute(args));
     }
 

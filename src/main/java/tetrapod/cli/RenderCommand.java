@@ -38,7 +38,9 @@ final class RenderCommand implements Callable<Integer> {
     String size;
 
     @Option(names = "--colour", paramLabel = "KIND",
-            description = "Colour members by role, axial, utilisation or azimuth (default: role until results exist).")
+            description = "Colour members by role (the default: no analysis), or by axial, utilisation or azimuth "
+                    + "(the model is analysed first; the envelope over every case is drawn unless --azimuth "
+                    + "picks a case).")
     String colour;
 
     @Spec
@@ -52,7 +54,7 @@ final class RenderCommand implements Callable<Integer> {
         // the OpenGL context comes up on its own thread while the model is read
         try (PictureRenderer renderer = PictureRenderer.start(RenderRequest.ALL_ROUTES)) {
             LoadedModel loaded = LoadedModel.read(model);
-            ViewData data = ViewInputs.data(loaded, az);
+            ViewData data = ViewInputs.data(loaded, az, ViewInputs.needsResults(colour));
             SceneOptions options = ViewInputs.options(data, az, colour);
             Picture picture = renderer.draw(data, new RenderRequest(wh[0], wh[1], options, RenderRequest.ALL_ROUTES));
             ViewInputs.writePng(picture.image(), target);

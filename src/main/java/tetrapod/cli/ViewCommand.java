@@ -31,7 +31,7 @@ final class ViewCommand implements Callable<Integer> {
     @Option(names = "--azimuth", paramLabel = "DEG", description = "Start with the case with wind from this azimuth.")
     Double azimuth;
 
-    @Option(names = "--colour", paramLabel = "KIND", description = "Start coloured by role, axial, utilisation or azimuth.")
+    @Option(names = "--colour", paramLabel = "KIND", description = "Start coloured by role, or by axial, utilisation or azimuth (the model is analysed first and the window steps through the envelope and every case solved in full).")
     String colour;
 
     @Option(names = "--size", paramLabel = "WxH", defaultValue = "1280x960",
@@ -49,7 +49,7 @@ final class ViewCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         LoadedModel loaded = LoadedModel.read(model);
         OptionalDouble az = azimuth == null ? OptionalDouble.empty() : OptionalDouble.of(azimuth);
-        ViewData data = ViewInputs.data(loaded, az);
+        ViewData data = ViewInputs.data(loaded, az, ViewInputs.needsResults(colour));
         int[] wh = ViewInputs.size(size, "--size");
         SceneOptions options = ViewInputs.options(data, az, colour);
         PrintWriter out = spec.commandLine().getOut();

@@ -10,7 +10,11 @@ import java.util.OptionalInt;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import javax.imageio.ImageIO;
+import tetrapod.analysis.Analysis;
+import tetrapod.analysis.AnalysisResult;
 import tetrapod.common.BadInputException;
+import tetrapod.common.ProgressListener;
+import tetrapod.common.UnstableStructureException;
 import tetrapod.io.AtomicFiles;
 import tetrapod.view.Colouring;
 import tetrapod.view.RenderRequest;
@@ -25,12 +29,23 @@ final class ViewInputs {
     private ViewInputs() { }
 
     /**
-     * What is drawn of a loaded model. Until analysis results exist this is the geometry, coloured
-     * by role, with the wind direction when an azimuth is given; the analysis will build a
-     * {@link ViewData} with its cases (forces, utilisations, reactions per azimuth) instead.
+     * What is drawn of a loaded model: the geometry coloured by role (with the wind direction when
+     * an azimuth is given), or, when {@code withResults}, the model analysed: the envelope over every
+     * case and each case solved in full ({@link ResultViews}).
      */
-    static ViewData data(LoadedModel loaded, OptionalDouble azimuthDeg) {
-        return ViewData.geometryOnly(loaded.tower().frame(), azimuthDeg);
+    static ViewData data(LoadedModel loaded, OptionalDouble azimuthDeg, boolean withResults)
+            throws UnstableStructureException {
+        if (!withResults) {
+            return ViewData.geometryOnly(loaded.tower().frame(), azimuthDeg);
+        }
+        AnalysisResult result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
+                ProgressListener.NONE);
+        return ResultViews.of(result);
+    }
+
+    /** Whether the colouring asked for ({@code --colour}, may be null) needs analysis results. */
+    static boolean needsResults(String colour) {
+        return colour != null && Colouring.fromOptionName(colour).filter(c -> c != Colouring.ROLE).isPresent();
     }
 
     /** {@code WxH} in px, each side within what {@link RenderRequest} accepts. */
@@ -67,8 +82,8 @@ final class ViewInputs {
             if (c.isEmpty()) {
                 problems.add("--colour: unknown value '" + colour + "'; expected one of role, axial, utilisation, azimuth");
             } else if (!data.cases().get(options.caseIndex()).offers(c.get())) {
-                problems.add("--colour: no " + c.get().optionName() + " values to colour by (this command draws the "
-                        + "geometry; results come with the analysis); available: "
+                problems.add("--colour: no " + c.get().optionName() + " values to colour by in case '"
+                        + data.cases().get(options.caseIndex()).name() + "'; available: "
                         + names(data.colourings(options.caseIndex())));
             } else {
                 options = options.withColouring(c.get());

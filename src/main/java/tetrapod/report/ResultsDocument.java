@@ -6,6 +6,13 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import tetrapod.analysis.AnalysisResult;
+import tetrapod.analysis.AzimuthUtilisation;
+import tetrapod.generate.SteelMass;
+import tetrapod.generate.Tower;
+import tetrapod.io.ResultsReader;
+import tetrapod.load.Combination;
+import tetrapod.model.Material;
+import tetrapod.model.spec.LoadAction;
 import tetrapod.analysis.HandComparison;
 import tetrapod.analysis.LegBaseExtremes;
 import tetrapod.check.Extreme;
@@ -41,11 +48,17 @@ import tetrapod.solve.StructuralModel;
  */
 public final class ResultsDocument {
 
-    public static final String FORMAT = "tetrapod-results/1";
+    public static final String FORMAT = ResultsReader.FORMAT;
 
     private ResultsDocument() { }
 
-    public static Map<String, Object> build(TowerSpec spec, AnalysisResult result) {
+    /**
+     * The document for {@code result} of {@code spec}.
+     *
+     * @param defaulted JSON paths of the spec's values that the model file did not give and Tetrapod
+     *                  filled in (see {@link tetrapod.io.DefaultedKeys}), listed as {@code defaults}
+     */
+    public static Map<String, Object> build(TowerSpec spec, AnalysisResult result, List<String> defaulted) {
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("format", FORMAT);
         doc.put("input", SpecWriter.toMap(spec));
@@ -57,7 +70,55 @@ public final class ResultsDocument {
         doc.put("foundations", result.foundations().stream().map(ResultsDocument::foundation).toList());
         doc.put("legBases", result.legBases().stream().map(ResultsDocument::legBase).toList());
         doc.put("handMethod", result.hand().stream().map(ResultsDocument::hand).toList());
+        doc.put("combinations", result.loads().combinations().stream().map(ResultsDocument::combination).toList());
+        doc.put("material", material(result.tower().frame().material()));
+        doc.put("steel", steel(result.tower()));
+        doc.put("defaults", List.copyOf(defaulted));
         return doc;
+    }
+
+    private static Map<String, Object> combination(Combination c) {
+        Map<String, Object> factors = new LinkedHashMap<>();
+        for (LoadAction a : LoadAction.values()) {
+            if (c.factor(a) != 0) {
+                factors.put(a.jsonName(), c.factor(a));
+            }
+        }
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("name", c.name());
+        m.put("factors", factors);
+        m.put("wind", c.hasWind());
+        return m;
+    }
+
+    private static Map<String, Object> material(Material material) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("name", material.name());
+        m.put("E", material.e());
+        m.put("G", material.g());
+        m.put("density", material.density());
+        List<Map<String, Object>> bands = new ArrayList<>();
+        for (Material.StrengthBand b : material.bands()) {
+            Map<String, Object> band = new LinkedHashMap<>();
+            band.put("maxThickness", Double.isFinite(b.maxThickness()) ? b.maxThickness() : null);
+            band.put("fy", b.fy());
+            band.put("fu", b.fu());
+            bands.add(band);
+        }
+        m.put("strengths", bands);
+        m.put("source", material.source());
+        return m;
+    }
+
+    private static Map<String, Object> steel(Tower tower) {
+        Map<String, Object> byRole = new LinkedHashMap<>();
+        SteelMass.byRole(tower.frame()).forEach((role, kg) -> byRole.put(role.jsonName(), kg));
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("bareMass", tower.steelMass());
+        m.put("connectionAllowance", tower.connectionAllowance());
+        m.put("massWithAllowance", tower.steelMassWithAllowance());
+        m.put("byRole", byRole);
+        return m;
     }
 
     private static Map<String, Object> memberCheck(MemberEnvelope e) {
@@ -166,6 +227,13 @@ public final class ResultsDocument {
             bases.add(b);
         }
         m.put("legBases", bases);
+        Map<String, Object> worst = new LinkedHashMap<>();
+        List<AzimuthUtilisation> rows = result.utilisationByAzimuth();
+        worst.put("azimuthDeg", rows.stream().map(AzimuthUtilisation::azimuthDeg).toList());
+        worst.put("utilisation", rows.stream().map(AzimuthUtilisation::utilisation).toList());
+        worst.put("member", rows.stream().map(AzimuthUtilisation::member).toList());
+        worst.put("combination", rows.stream().map(AzimuthUtilisation::combination).toList());
+        m.put("maxUtilisation", worst);
         return m;
     }
 

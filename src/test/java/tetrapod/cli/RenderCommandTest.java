@@ -37,12 +37,26 @@ class RenderCommandTest {
         CliRun colour = CliRun.of("render", "models/hilltop-relay-k.json", "-o", png.toString(), "--colour", "rainbow");
         assertEquals(ExitCode.BAD_INPUT, colour.exitCode());
         assertTrue(colour.err().contains("error: --colour: unknown value 'rainbow'"), colour.err());
-        CliRun noResults = CliRun.of("render", "models/hilltop-relay-k.json", "-o", png.toString(), "--colour",
-                "utilisation");
-        assertEquals(ExitCode.BAD_INPUT, noResults.exitCode());
-        assertTrue(noResults.err().contains("error: --colour: no utilisation values"), noResults.err());
+        CliRun noUtilisation = CliRun.of("render", "models/harbour-beacon-rectangular.json", "-o", png.toString(),
+                "--azimuth", "45", "--colour", "utilisation");
+        assertEquals(ExitCode.BAD_INPUT, noUtilisation.exitCode());
+        assertTrue(noUtilisation.err().contains("error: --colour: no utilisation values to colour by in case"),
+                noUtilisation.err());
         assertFalse(Files.exists(png), "nothing is written on bad input");
         assertFalse(colour.err().contains("Exception"), colour.err());
+    }
+
+    @Test
+    void renderColouredByUtilisationAnalysesTheModelFirst(@TempDir Path dir) throws IOException {
+        Path png = dir.resolve("utilisation.png");
+        CliRun run = CliRun.of("render", "models/harbour-beacon-rectangular.json", "-o", png.toString(), "--size",
+                "400x300", "--colour", "utilisation");
+        assertEquals(ExitCode.DONE, run.exitCode(), run.err());
+        BufferedImage image = ImageIO.read(png.toFile());
+        assertEquals(400, image.getWidth());
+        CliRun axial = CliRun.of("render", "models/harbour-beacon-rectangular.json", "-o", png.toString(), "--size",
+                "400x300", "--colour", "axial", "--azimuth", "90");
+        assertEquals(ExitCode.DONE, axial.exitCode(), axial.err());
     }
 
     @Test

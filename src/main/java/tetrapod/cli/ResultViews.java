@@ -1,0 +1,101 @@
+package tetrapod.cli;
+
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.OptionalDouble;
+import tetrapod.analysis.AnalysisResult;
+import tetrapod.analysis.SolvedCase;
+import tetrapod.check.MemberEnvelope;
+import tetrapod.model.Frame;
+import tetrapod.model.Member;
+import tetrapod.model.Vec3;
+import tetrapod.solve.MemberEndForces;
+import tetrapod.solve.NodeDisplacement;
+import tetrapod.solve.NodeForce;
+import tetrapod.view.Colouring;
+import tetrapod.view.MemberScalars;
+import tetrapod.view.NodeVector;
+import tetrapod.view.ViewCase;
+import tetrapod.view.ViewData;
+
+/**
+ * The view's data from analysis results: first the envelope over every case (governing
+ * utilisation, governing azimuth, the larger of the largest tension and compression), then each
+ * case solved in full (axial forces, displacements, reactions), in the order of the results.
+ */
+final class ResultViews {
+
+    private ResultViews() { }
+
+    /** Everything to show of {@code result}, starting with the envelope coloured by utilisation. */
+    static ViewData of(AnalysisResult result) {
+        Frame frame = result.tower().frame();
+        List<ViewCase> cases = new ArrayList<>();
+        cases.add(envelope(frame, result));
+        for (SolvedCase c : result.cases()) {
+            cases.add(solved(frame, c));
+        }
+        return new ViewData(frame, cases, Colouring.UTILISATION);
+    }
+
+    private static ViewCase envelope(Frame frame, AnalysisResult result) {
+        Map<Integer, MemberEnvelope> byId = new HashMap<>();
+        result.members().forEach(e -> byId.put(e.member(), e));
+        int n = frame.members().size();
+        double[] utilisation = new double[n];
+        double[] azimuth = new double[n];
+        double[] axial = new double[n];
+        List<String> notes = new ArrayList<>(n);
+        for (int k = 0; k < n; k++) {
+            MemberEnvelope e = byId.get(frame.members().get(k).id());
+            if (e == null || e.governing() == null) {
+                utilisation[k] = Double.NaN;
+                azimuth[k] = Double.NaN;
+                axial[k] = Double.NaN;
+                notes.add("");
+                continue;
+            }
+            utilisation[k] = e.governing().utilisation();
+            Double az = e.governingWhere().azimuthDeg();
+            azimuth[k] = az == null ? Double.NaN : az;
+            double t = e.maxTension().value();
+            double c = e.maxCompression().value();
+            axial[k] = t >= c ? t : -c;
+            notes.add(String.format(Locale.ROOT, "%s %.3f, %s; case %s", e.governing().mode().jsonName(),
+                    e.governing().utilisation(), e.governing().clause(), e.governingWhere().caseId()));
+        }
+        Map<Colouring, MemberScalars> scalars = new EnumMap<>(Colouring.class);
+        scalars.put(Colouring.UTILISATION, MemberScalars.of(utilisation));
+        scalars.put(Colouring.AZIMUTH, MemberScalars.of(azimuth));
+        scalars.put(Colouring.AXIAL, MemberScalars.of(axial));
+        return new ViewCase("envelope over " + result.caseCount() + (result.caseCount() == 1 ? " case" : " cases"), OptionalDouble.empty(), scalars,
+                List.of(), List.of(), notes);
+    }
+
+    private static ViewCase solved(Frame frame, SolvedCase c) {
+        Map<Integer, Double> forces = new HashMap<>();
+        for (MemberEndForces f : c.solution().memberForces()) {
+            forces.put(f.member(), f.axial());
+        }
+        List<Member> members = frame.members();
+        double[] axial = new double[members.size()];
+        for (int k = 0; k < axial.length; k++) {
+            axial[k] = forces.getOrDefault(members.get(k).id(), Double.NaN);
+        }
+        List<NodeVector> displacements = new ArrayList<>();
+        for (NodeDisplacement d : c.solution().displacements()) {
+            displacements.add(new NodeVector(d.node(), new Vec3(d.ux(), d.uy(), d.uz())));
+        }
+        List<NodeVector> reactions = new ArrayList<>();
+        for (NodeForce r : c.solution().reactions()) {
+            reactions.add(new NodeVector(r.node(), new Vec3(r.component(0), r.component(1), r.component(2))));
+        }
+        OptionalDouble az = c.azimuthDeg() == null ? OptionalDouble.empty() : OptionalDouble.of(c.azimuthDeg());
+        return new ViewCase(c.id(), az, Map.of(Colouring.AXIAL, MemberScalars.of(axial)), displacements, reactions,
+                List.of());
+    }
+}

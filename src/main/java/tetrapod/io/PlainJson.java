@@ -1,0 +1,54 @@
+package tetrapod.io;
+
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import tetrapod.common.BadInputException;
+import tetrapod.common.Problem;
+
+/**
+ * Reads JSON into the plain values {@link JsonOutput} writes: {@code LinkedHashMap} (key order
+ * kept), {@code ArrayList}, {@code String}, {@code Integer}/{@code Long} for whole numbers written
+ * without a point, {@code Double} otherwise, {@code Boolean} and {@code null}. Other packages read
+ * JSON through it, so that none of them needs a JSON library.
+ */
+public final class PlainJson {
+
+    private static final ObjectMapper MAPPER = new ObjectMapper()
+            .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+            .disable(DeserializationFeature.USE_BIG_DECIMAL_FOR_FLOATS)
+            .disable(DeserializationFeature.USE_BIG_INTEGER_FOR_INTS);
+
+    private PlainJson() { }
+
+    /** The file's JSON as plain values; a file that is missing, not UTF-8 or not JSON is bad input. */
+    public static Object read(Path file) throws BadInputException {
+        String text;
+        try {
+            text = Files.readString(file, StandardCharsets.UTF_8);
+        } catch (NoSuchFileException e) {
+            throw new BadInputException(Problem.at("$", "cannot read " + file + ": no such file"));
+        } catch (CharacterCodingException e) {
+            throw new BadInputException(Problem.at("$", "cannot read " + file + ": it is not UTF-8 text"));
+        } catch (IOException e) {
+            throw new BadInputException(Problem.at("$", "cannot read " + file + ": " + e.getMessage()));
+        }
+        return parse(text);
+    }
+
+    /** The JSON text as plain values. */
+    public static Object parse(String json) throws BadInputException {
+        try {
+            return MAPPER.readValue(json, Object.class);
+        } catch (JsonProcessingException e) {
+            throw new BadInputException(Problem.at("$", MalformedJson.describe(e.getOriginalMessage())));
+        }
+    }
+}

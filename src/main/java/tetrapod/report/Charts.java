@@ -1,0 +1,186 @@
+package tetrapod.report;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.jfree.chart.ChartFactory;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.axis.NumberTickUnit;
+import org.jfree.chart.plot.CategoryPlot;
+import org.jfree.chart.plot.PlotOrientation;
+import org.jfree.chart.plot.ValueMarker;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.category.BarRenderer;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.data.category.DefaultCategoryDataset;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+import tetrapod.report.ChartData.Point;
+import tetrapod.report.Rows.AzimuthPeak;
+import tetrapod.report.Rows.HandRow;
+
+/**
+ * The report's line and bar charts, drawn by JFreeChart and kept as SVG. Every axis names its
+ * quantity and unit; forces are shown in kN, pressures in kPa, heights in m, azimuths in degrees.
+ * A chart whose data the results do not have (no wind, an explicit frame) is empty.
+ */
+final class Charts {
+
+    static final int WIDTH = 720;
+    static final int HEIGHT = 430;
+
+    private Charts() { }
+
+    /** Velocity pressure against height, a staircase over each panel, per distinct azimuth profile. */
+    static Optional<Figure> pressureProfile(Results r) {
+        Map<Double, List<Point>> profiles = ChartData.pressureProfiles(r.wind());
+        if (profiles.isEmpty()) {
+            return Optional.empty();
+        }
+        XYSeriesCollection data = new XYSeriesCollection();
+        profiles.forEach((az, line) -> data.addSeries(series(profiles.size() == 1 ? "every azimuth"
+                : "wind " + Format.degrees(az) + "°", line, 1e-3, 1)));
+        JFreeChart chart = ChartFactory.createXYLineChart(null, "velocity pressure q at the panel's reference height, kPa",
+                "height z, m", data, PlotOrientation.VERTICAL, profiles.size() > 1, false, false);
+        style(chart);
+        ((NumberAxis) chart.getXYPlot().getDomainAxis()).setAutoRangeIncludesZero(true);
+        return Optional.of(Figure.draw("fig-pressure", "Velocity pressure against height: each panel's q (directional "
+                + "factor included) drawn over the panel's height.", chart, WIDTH, HEIGHT));
+    }
+
+    /** The largest member utilisation at each azimuth of the sweep, with the limit 1.0. */
+    static Optional<Figure> utilisationByAzimuth(Results r) {
+        List<AzimuthPeak> peaks = r.utilisationByAzimuth();
+        if (peaks.isEmpty()) {
+            return Optional.empty();
+        }
+        XYSeries s = new XYSeries("largest member utilisation", false, true);
+        peaks.forEach(p -> s.add(p.azimuthDeg(), p.utilisation()));
+        JFreeChart chart = ChartFactory.createXYLineChart(null, "wind azimuth, degrees (0 = towards +x, 90 = towards +y)",
+                "utilisation (demand / resistance)", new XYSeriesCollection(s), PlotOrientation.VERTICAL, false, false,
+                false);
+        style(chart);
+        XYPlot plot = chart.getXYPlot();
+        azimuthAxis((NumberAxis) plot.getDomainAxis());
+        NumberAxis range = (NumberAxis) plot.getRangeAxis();
+        range.setAutoRangeIncludesZero(true);
+        double top = peaks.stream().mapToDouble(AzimuthPeak::utilisation).max().orElse(1);
+        range.setRange(0, Math.max(1.1, top * 1.08));
+        limit(plot, 1.0, "limit 1.0");
+        return Optional.of(Figure.draw("fig-utilisation-azimuth", "The largest utilisation of any member at each "
+                + "azimuth of the sweep, over every combination.", chart, WIDTH, HEIGHT));
+    }
+
+    /** Largest tension and compression of the legs against height. */
+    static Optional<Figure> legAxialEnvelope(Results r) {
+        List<List<Point>> lines = ChartData.legAxialEnvelope(r);
+        if (lines.get(0).isEmpty()) {
+            return Optional.empty();
+        }
+        XYSeriesCollection data = new XYSeriesCollection();
+        data.addSeries(series("largest tension", lines.get(0), 1e-3, 1));
+        data.addSeries(series("largest compression", lines.get(1), 1e-3, 1));
+        JFreeChart chart = ChartFactory.createXYLineChart(null, "leg axial force N, kN (tension positive)",
+                "height z, m", data, PlotOrientation.VERTICAL, true, false, false);
+        style(chart);
+        chart.getXYPlot().addDomainMarker(new ValueMarker(0, ChartStyle.TEXT, new java.awt.BasicStroke(1f)));
+        return Optional.of(Figure.draw("fig-leg-envelope", "Leg axial force envelope: the largest tension and "
+                + "compression of any leg over every case, panel by panel up the tower.", chart, WIDTH, HEIGHT));
+    }
+
+    /** How many members of each role fall into each utilisation band. */
+    static Figure utilisationHistogram(Results r) {
+        DefaultCategoryDataset data = new DefaultCategoryDataset();
+        ChartData.histogram(r).forEach((role, counts) -> {
+            for (int k = 0; k < counts.length; k++) {
+                data.addValue(counts[k], role, ChartData.binLabel(k));
+            }
+        });
+        JFreeChart chart = ChartFactory.createStackedBarChart(null, "governing utilisation (demand / resistance)",
+                "number of members", data, PlotOrientation.VERTICAL, true, false, false);
+        ChartStyle.apply(chart);
+        CategoryPlot plot = chart.getCategoryPlot();
+        BarRenderer renderer = (BarRenderer) plot.getRenderer();
+        for (int k = 0; k < data.getRowCount(); k++) {
+            renderer.setSeriesPaint(k, ChartStyle.series(k));
+        }
+        renderer.setItemMargin(0.0);
+        plot.getDomainAxis().setMaximumCategoryLabelWidthRatio(1.6f);
+        plot.getDomainAxis().setCategoryLabelPositions(org.jfree.chart.axis.CategoryLabelPositions.UP_45);
+        ((NumberAxis) plot.getRangeAxis()).setStandardTickUnits(NumberAxis.createIntegerTickUnits());
+        return Figure.draw("fig-histogram", "Members by governing utilisation, stacked by role.", chart, WIDTH, HEIGHT);
+    }
+
+    /** Hand method and analysis leg forces against azimuth for one combination. */
+    static Optional<Figure> handComparison(Results r) {
+        String combination = ChartData.handCombination(r.hand());
+        if (combination == null) {
+            return Optional.empty();
+        }
+        XYSeries handC = new XYSeries("compression, hand method", false, true);
+        XYSeries feC = new XYSeries("compression, analysis", false, true);
+        XYSeries handT = new XYSeries("uplift, hand method", false, true);
+        XYSeries feT = new XYSeries("uplift, analysis", false, true);
+        for (HandRow h : r.hand()) {
+            if (h.combination().equals(combination)) {
+                handC.add(h.azimuthDeg(), h.handCompression() / 1e3);
+                feC.add(h.azimuthDeg(), h.feCompression() / 1e3);
+                handT.add(h.azimuthDeg(), h.handUplift() / 1e3);
+                feT.add(h.azimuthDeg(), h.feUplift() / 1e3);
+            }
+        }
+        XYSeriesCollection data = new XYSeriesCollection();
+        data.addSeries(handC);
+        data.addSeries(feC);
+        data.addSeries(handT);
+        data.addSeries(feT);
+        JFreeChart chart = ChartFactory.createXYLineChart(null, "wind azimuth, degrees (0 = towards +x, 90 = towards +y)",
+                "largest leg base force, kN (uplift < 0: no leg lifts)", data, PlotOrientation.VERTICAL, true, false,
+                false);
+        style(chart);
+        XYPlot plot = chart.getXYPlot();
+        azimuthAxis((NumberAxis) plot.getDomainAxis());
+        XYLineAndShapeRenderer renderer = (XYLineAndShapeRenderer) plot.getRenderer();
+        renderer.setSeriesPaint(0, ChartStyle.series(0));
+        renderer.setSeriesPaint(1, ChartStyle.series(0));
+        renderer.setSeriesPaint(2, ChartStyle.series(1));
+        renderer.setSeriesPaint(3, ChartStyle.series(1));
+        renderer.setSeriesStroke(0, ChartStyle.DASHED);
+        renderer.setSeriesStroke(2, ChartStyle.DASHED);
+        return Optional.of(Figure.draw("fig-hand", "Leg base forces against azimuth, " + combination
+                + ": the hand method (dashed) beside the analysis (solid).", chart, WIDTH, HEIGHT));
+    }
+
+    private static XYSeries series(String name, List<Point> points, double xScale, double yScale) {
+        XYSeries s = new XYSeries(name, false, true);
+        for (Point p : points) {
+            s.add(p.x() * xScale, p.y() * yScale);
+        }
+        return s;
+    }
+
+    private static void style(JFreeChart chart) {
+        ChartStyle.apply(chart);
+        XYPlot plot = chart.getXYPlot();
+        XYLineAndShapeRenderer renderer = (XYLineAndShapeRenderer) plot.getRenderer();
+        for (int k = 0; k < plot.getDataset().getSeriesCount(); k++) {
+            renderer.setSeriesPaint(k, ChartStyle.series(k));
+            renderer.setSeriesStroke(k, ChartStyle.LINE);
+        }
+    }
+
+    private static void azimuthAxis(NumberAxis axis) {
+        axis.setRange(0, 360);
+        axis.setTickUnit(new NumberTickUnit(45));
+    }
+
+    private static void limit(XYPlot plot, double value, String label) {
+        ValueMarker marker = new ValueMarker(value, ChartStyle.LIMIT, ChartStyle.DASHED);
+        marker.setLabel(label);
+        marker.setLabelPaint(ChartStyle.LIMIT);
+        marker.setLabelAnchor(org.jfree.chart.ui.RectangleAnchor.TOP_LEFT);
+        marker.setLabelTextAnchor(org.jfree.chart.ui.TextAnchor.BOTTOM_LEFT);
+        plot.addRangeMarker(marker);
+    }
+}

@@ -1,0 +1,113 @@
+package tetrapod.report;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+import tetrapod.io.AtomicFiles;
+import tetrapod.report.Rows.CheckRow;
+import tetrapod.report.Rows.LegBaseRow;
+import tetrapod.report.Rows.MemberRow;
+import tetrapod.report.Rows.PanelRow;
+import tetrapod.report.Rows.Peak;
+import tetrapod.report.Rows.WindRow;
+
+/**
+ * The tables for spreadsheets: members.csv, reactions.csv and wind.csv. One header row whose
+ * names carry the unit ({@code N_max_kN}), RFC 4180 quoting and CRLF line ends, numbers with a
+ * point and no thousands separator, empty cells where a value does not apply.
+ */
+public final class CsvTables {
+
+    public static final String MEMBERS = "members.csv";
+    public static final String REACTIONS = "reactions.csv";
+    public static final String WIND = "wind.csv";
+
+    static final List<String> MEMBER_HEADER = List.of("member", "role", "segment", "panel", "face", "section",
+            "length_m", "N_max_kN", "N_max_case", "N_min_kN", "N_min_case", "utilisation", "mode", "clause",
+            "governing_combination", "governing_azimuth_deg", "governing_case", "note");
+    static final List<String> REACTION_HEADER = List.of("node", "x_m", "y_m",
+            "compression_max_kN", "compression_combination", "compression_azimuth_deg",
+            "uplift_max_kN", "uplift_combination", "uplift_azimuth_deg",
+            "shear_max_kN", "shear_combination", "shear_azimuth_deg");
+    static final List<String> WIND_HEADER = List.of("azimuth_deg", "panel", "z_bottom_m", "z_top_m", "z_ref_m",
+            "q_kPa", "solidity", "cf", "area_m2", "Fx_kN", "Fy_kN", "F_kN");
+
+    private static final CSVFormat FORMAT = CSVFormat.RFC4180;
+
+    private CsvTables() { }
+
+    /** Writes the three tables into {@code folder}, each atomically. */
+    public static void writeAll(Results results, Path folder) throws IOException {
+        AtomicFiles.writeText(folder.resolve(MEMBERS), out -> members(results, out));
+        AtomicFiles.writeText(folder.resolve(REACTIONS), out -> reactions(results, out));
+        AtomicFiles.writeText(folder.resolve(WIND), out -> wind(results, out));
+    }
+
+    /**
+     * One row per member: its place and section, its largest tension (N_max, ≥ 0) and compression
+     * (N_min, ≤ 0, tension positive) with the cases, and its governing check.
+     */
+    public static void members(Results results, Appendable out) throws IOException {
+        CSVPrinter csv = new CSVPrinter(out, FORMAT);
+        csv.printRecord(MEMBER_HEADER);
+        for (CheckRow c : results.checks()) {
+            MemberRow m = results.member(c.member());
+            csv.printRecord(m.id(), m.role(), m.segment(), m.panel(), m.face(), m.section(), fixed(m.length(), 4),
+                    kN(c.maxTension().value()), orEmpty(c.maxTension().caseId()),
+                    kN(-c.maxCompression().value()), orEmpty(c.maxCompression().caseId()),
+                    fixed(c.utilisation(), 4), c.mode(), c.clause(), orEmpty(results.combinationOf(c.caseId())),
+                    deg(c.azimuthDeg()), orEmpty(c.caseId()), c.note());
+        }
+        csv.flush(); // not closed: the caller owns the stream
+    }
+
+    /** One row per leg base: the largest compression, uplift and horizontal shear, each with its case. */
+    public static void reactions(Results results, Appendable out) throws IOException {
+        CSVPrinter csv = new CSVPrinter(out, FORMAT);
+        csv.printRecord(REACTION_HEADER);
+        for (LegBaseRow l : results.legBases()) {
+            List<Object> row = new ArrayList<>(List.of(l.node(), fixed(l.x(), 4), fixed(l.y(), 4)));
+            for (Peak p : List.of(l.compression(), l.uplift(), l.shear())) {
+                row.add(p.occurs() ? kN(p.value()) : "");
+                row.add(orEmpty(results.combinationOf(p.caseId())));
+                row.add(p.occurs() ? deg(p.azimuthDeg()) : "");
+            }
+            csv.printRecord(row);
+        }
+        csv.flush(); // not closed: the caller owns the stream
+    }
+
+    /** One row per panel at each azimuth reported in full. */
+    public static void wind(Results results, Appendable out) throws IOException {
+        CSVPrinter csv = new CSVPrinter(out, FORMAT);
+        csv.printRecord(WIND_HEADER);
+        for (WindRow w : results.wind()) {
+            for (PanelRow p : w.panels()) {
+                csv.printRecord(deg(w.azimuthDeg()), p.panel(), fixed(p.zBottom(), 4), fixed(p.zTop(), 4),
+                        fixed(p.zRef(), 4), fixed(p.q() / 1e3, 5), fixed(p.solidity(), 5), fixed(p.cf(), 5),
+                        fixed(p.area(), 5), kN(p.fx()), kN(p.fy()), kN(p.force()));
+            }
+        }
+        csv.flush(); // not closed: the caller owns the stream
+    }
+
+    /** N as kN to 1 N. */
+    private static String kN(double newtons) {
+        return fixed(newtons / 1e3, 3);
+    }
+
+    private static String deg(Double azimuthDeg) {
+        return azimuthDeg == null ? "" : Format.degrees(azimuthDeg);
+    }
+
+    private static String fixed(double v, int decimals) {
+        return Format.fixed(v, decimals);
+    }
+
+    private static String orEmpty(String s) {
+        return s == null ? "" : s;
+    }
+}

@@ -1,0 +1,91 @@
+package tetrapod.report;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import tetrapod.io.AtomicFiles;
+
+/**
+ * report.html: one self-contained page (styles inline, charts as inline SVG, the 3D picture as a
+ * data: URI, no script and no external address) that reads as a calculation and prints to PDF
+ * with sensible page breaks. Built from a results document alone.
+ */
+public final class ReportHtml {
+
+    public static final String FILE = "report.html";
+
+    /** The sections, in order. */
+    static final List<Section> SECTIONS = List.of(new SummarySection(), new InputSection(), new WindSection(),
+            new ResultsSection(), new MemberChecksSection(), new FoundationsSection(), new HandMethodSection(),
+            new MethodNotesSection(), new CautionsSection());
+
+    private ReportHtml() { }
+
+    /**
+     * The page for {@code results}.
+     *
+     * @param towerPng the 3D picture as PNG bytes, or empty (the summary then has no picture)
+     */
+    public static String build(Results results, Optional<byte[]> towerPng) {
+        ReportInput input = new ReportInput(results, towerPng);
+        Html out = new Html();
+        String title = "Tower calculation: " + results.name();
+        out.raw("<!DOCTYPE html>\n").open("html", "lang=\"en\"").raw("\n").open("head").raw("\n")
+                .raw("<meta charset=\"utf-8\">\n")
+                .raw("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")
+                .element("title", title)
+                .open("style").raw("\n").raw(style()).close("style")
+                .close("head").open("body").raw("\n");
+        out.open("header").element("h1", title);
+        Object description = results.input().get("description");
+        if (description != null && !description.toString().isBlank()) {
+            out.element("p", "class=\"description\"", description.toString());
+        }
+        out.element("p", "class=\"caution-line\"", "For checking by a qualified engineer against the codes that "
+                + "apply locally. Tetrapod does not certify compliance.");
+        out.open("nav", "aria-label=\"Contents\"").open("ol");
+        for (Section s : SECTIONS) {
+            out.open("li").raw("<a href=\"#" + s.id() + "\">").text(s.title()).raw("</a>").close("li");
+        }
+        out.close("ol").close("nav").close("header");
+        int number = 1;
+        for (Section s : SECTIONS) {
+            out.open("section", Html.attr("id", s.id()));
+            out.element("h2", number++ + " " + s.title());
+            s.write(out, input);
+            out.close("section");
+        }
+        out.open("footer").element("p", "Written by Tetrapod from " + "results.json (format "
+                + Tree.str(results.document(), "format") + "). The files beside this report: results.json (every "
+                + "number, SI units), members.csv, reactions.csv, wind.csv, tower.png.").close("footer");
+        out.close("body").close("html");
+        return out.toString();
+    }
+
+    /** Writes the page to {@code file} atomically. */
+    public static void write(Path file, Results results, Optional<byte[]> towerPng) throws IOException {
+        String html = build(results, towerPng);
+        AtomicFiles.writeString(file, html);
+    }
+
+    /** A chart as a figure with its caption. */
+    static void figure(Html out, Figure f) {
+        out.open("figure", "class=\"chart\" " + Html.attr("id", f.id())).raw(f.svg()).raw("\n")
+                .element("figcaption", f.caption()).close("figure");
+    }
+
+    private static String style() {
+        try (InputStream in = ReportHtml.class.getResourceAsStream("report.css")) {
+            if (in == null) {
+                throw new IllegalStateException("report.css is missing from the class path");
+            }
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}

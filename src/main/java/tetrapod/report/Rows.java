@@ -1,0 +1,88 @@
+package tetrapod.report;
+
+import java.util.List;
+
+/**
+ * The rows of a results document the report and the CSV tables read, as typed values. SI units as
+ * in results.json: N, m, Pa, degrees for azimuths.
+ */
+public final class Rows {
+
+    private Rows() { }
+
+    /** The largest value of something over the load cases, N, and where (case null when it never occurs). */
+    public record Peak(double value, String caseId, Double azimuthDeg) {
+        public boolean occurs() {
+            return caseId != null;
+        }
+    }
+
+    /** A member of the model with its geometry: length and the heights of its ends, m. */
+    public record MemberRow(int id, int i, int j, String role, int segment, int panel, String face, String section,
+                            double area, double iy, double iz, double length, double zLow, double zHigh) {
+        public double zMid() {
+            return (zLow + zHigh) / 2;
+        }
+    }
+
+    /** A member's governing check over every case, and its largest tension and compression (both ≥ 0, N). */
+    public record CheckRow(int member, double utilisation, String mode, String clause, String note, String caseId,
+                           Double azimuthDeg, Peak maxTension, Peak maxCompression) { }
+
+    /** One footing check of a leg base. */
+    public record FootingCheck(String name, double utilisation, String clause, String note, String caseId,
+                               Double azimuthDeg) { }
+
+    /** A leg base's footing checks; concrete volume in m³. */
+    public record FootingRow(int node, List<FootingCheck> checks, double concreteVolumeRequired) {
+        public FootingRow {
+            checks = List.copyOf(checks);
+        }
+    }
+
+    /** A leg base at (x, y) (m) with its governing compression, uplift and shear, N. */
+    public record LegBaseRow(int node, double x, double y, Peak compression, Peak uplift, Peak shear) { }
+
+    /** The wind on one panel at one azimuth: heights m, q Pa, area m², forces N. */
+    public record PanelRow(int panel, double zBottom, double zTop, double zRef, double q, double solidity, double cf,
+                           double area, double fx, double fy) {
+        public double force() {
+            return Math.hypot(fx, fy);
+        }
+    }
+
+    /** The panels' wind at one reported azimuth. */
+    public record WindRow(double azimuthDeg, List<PanelRow> panels) {
+        public WindRow {
+            panels = List.copyOf(panels);
+        }
+    }
+
+    /** A leg base's vertical and horizontal reaction against azimuth for one combination, N. */
+    public record LegSweep(int node, String combination, List<Double> azimuthDeg, List<Double> fz, List<Double> fh) {
+        public LegSweep {
+            azimuthDeg = List.copyOf(azimuthDeg);
+            fz = List.copyOf(fz);
+            fh = List.copyOf(fh);
+        }
+    }
+
+    /** The largest member utilisation at one azimuth of the sweep. */
+    public record AzimuthPeak(double azimuthDeg, double utilisation, int member, String combination) { }
+
+    /**
+     * The hand method beside the analysis in one case: total vertical load N (N), horizontal
+     * resultant H (N) at height zH (m), moment M (N·m), base diagonal d (m); hand and analysis leg
+     * compression and uplift (N).
+     */
+    public record HandRow(String combination, double azimuthDeg, double n, double h, double zH, double m, double d,
+                          double handCompression, double handUplift, double feCompression, double feUplift,
+                          double compressionDiffPct, double upliftDiffPct) { }
+
+    /** A load combination and its factors by action name. */
+    public record CombinationRow(String name, java.util.Map<String, Double> factors, boolean wind) {
+        public CombinationRow {
+            factors = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(factors));
+        }
+    }
+}

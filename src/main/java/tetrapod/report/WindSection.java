@@ -1,0 +1,84 @@
+package tetrapod.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import tetrapod.report.Rows.PanelRow;
+import tetrapod.report.Rows.WindRow;
+import tetrapod.report.Table.Cell;
+
+/** The wind: the pressure profile against height and the wind on each panel. */
+final class WindSection implements Section {
+
+    @Override
+    public String id() {
+        return "wind";
+    }
+
+    @Override
+    public String title() {
+        return "Wind";
+    }
+
+    @Override
+    public void write(Html out, ReportInput ri) {
+        Results r = ri.results();
+        List<WindRow> wind = r.wind();
+        if (wind.isEmpty()) {
+            out.p("The model has no wind (an explicit frame, or no loads.wind): nothing to show here.");
+            return;
+        }
+        Map<String, Object> w = Tree.mapOrEmpty(Tree.mapOrEmpty(r.input(), "loads"), "wind");
+        out.p("Method: " + methodName(Tree.str(w, "method")) + ". Each panel takes the velocity pressure q at its "
+                + "reference height (the centroid of its projected member area); its force is the response factor × q "
+                + "× the force coefficient cf × the projected member area, along the wind, shared among the eight leg "
+                + "nodes of the panel. Ancillaries carry their own wind (not in this table).");
+        Charts.pressureProfile(r).ifPresent(f -> ReportHtml.figure(out, f));
+
+        WindRow first = wind.get(0);
+        List<String> header = new ArrayList<>(List.of("panel", "z bottom, m", "z top, m", "z ref, m",
+                "q at " + Format.degrees(first.azimuthDeg()) + "°, kPa", "solidity", "cf", "area, m²"));
+        for (WindRow row : wind) {
+            header.add("F at " + Format.degrees(row.azimuthDeg()) + "°, kN");
+        }
+        Table t = new Table("wind-panels", "Panel geometry, pressure and coefficient for wind at "
+                + Format.degrees(first.azimuthDeg()) + "°; the force on each panel at each azimuth reported in full "
+                + "(wind.csv gives every value at every one of them).", header);
+        for (int k = 0; k < first.panels().size(); k++) {
+            PanelRow p = first.panels().get(k);
+            List<Cell> cells = new ArrayList<>(List.of(Cell.num(Integer.toString(p.panel())),
+                    Cell.num(Format.metres(p.zBottom())), Cell.num(Format.metres(p.zTop())),
+                    Cell.num(Format.metres(p.zRef())), Cell.num(Format.kPa(p.q())), Cell.num(Format.fixed(p.solidity(), 3)),
+                    Cell.num(Format.fixed(p.cf(), 3)), Cell.num(Format.fixed(p.area(), 3))));
+            for (WindRow row : wind) {
+                cells.add(Cell.num(Format.fixed(row.panels().get(k).force() / 1e3, 2)));
+            }
+            t.row(cells);
+        }
+        List<Cell> total = new ArrayList<>(List.of(Cell.of("total"), Cell.of(""), Cell.of(""), Cell.of(""), Cell.of(""),
+                Cell.of(""), Cell.of(""), Cell.of("")));
+        for (WindRow row : wind) {
+            double fx = 0;
+            double fy = 0;
+            for (PanelRow p : row.panels()) {
+                fx += p.fx();
+                fy += p.fy();
+            }
+            total.add(Cell.num(Format.fixed(Math.hypot(fx, fy) / 1e3, 2)));
+        }
+        t.row(total);
+        t.writeTo(out);
+    }
+
+    static String methodName(String method) {
+        if (method == null) {
+            return "none";
+        }
+        return switch (method) {
+            case "en1991" -> "EN 1991-1-4 velocity pressure with the force coefficients of EN 1993-3-1 Annex B";
+            case "asce7" -> "ASCE 7 velocity pressure (chapter 26) with the trussed-tower force coefficients (chapter 29)";
+            case "uniform" -> "a uniform pressure on the projected member area (for hand calculations)";
+            default -> method;
+        };
+    }
+}

@@ -1,0 +1,93 @@
+package tetrapod.report;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * The numbers report.html shows (the largest utilisation, the governing azimuths, the leg base
+ * reactions) are those of results.json, found here from the JSON with Jackson and rounded as the
+ * report rounds them.
+ */
+class ReportNumbersTest {
+
+    static Stream<Path> models() throws IOException {
+        return ExampleRuns.models();
+    }
+
+    private static String byId(String html, String id) {
+        Matcher m = Pattern.compile("id=\"" + Pattern.quote(id) + "\"[^>]*>([^<]*)<").matcher(html);
+        assertTrue(m.find(), "no element " + id);
+        return m.group(1).strip();
+    }
+
+    private static String azimuthText(JsonNode azimuthDeg) {
+        if (azimuthDeg.isNull()) {
+            return "no wind";
+        }
+        double a = azimuthDeg.asDouble();
+        return (a == Math.rint(a) ? Long.toString((long) a) : Double.toString(a)) + "°";
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("models")
+    void theReportShowsTheNumbersOfResultsJson(Path model) throws IOException {
+        JsonNode results = ExampleRuns.results(model);
+        String html = Files.readString(ExampleRuns.folder(model).resolve("report.html"));
+
+        double max = 0;
+        JsonNode top = null;
+        for (JsonNode c : results.get("checks")) {
+            double u = c.get("utilisation").asDouble();
+            if (top == null || u > top.get("utilisation").asDouble()) {
+                top = c; // ties keep the lower member id: checks are in member order
+            }
+            max = Math.max(max, u);
+        }
+        for (JsonNode f : results.get("foundations")) {
+            for (JsonNode c : f.get("checks")) {
+                max = Math.max(max, c.get("utilisation").asDouble());
+            }
+        }
+        assertEquals(String.format(Locale.ROOT, "%.3f", max), byId(html, "max-utilisation"), "largest utilisation");
+        Matcher verdict = Pattern.compile("class=\"verdict (over|pass)\" id=\"verdict\"><strong>([^<]*)<").matcher(html);
+        assertTrue(verdict.find(), "no verdict");
+        assertEquals(max > 1.0 ? "over" : "pass", verdict.group(1));
+        assertEquals(max > 1.0 ? "OVERSTRESSED" : "All checks pass", verdict.group(2));
+        assertEquals(String.format(Locale.ROOT, "%.3f", top.get("utilisation").asDouble()),
+                byId(html, "top-1-utilisation"), "most utilised member");
+        assertEquals(azimuthText(top.get("azimuthDeg")), byId(html, "governing-member-azimuth"),
+                "governing azimuth of the most utilised member");
+
+        JsonNode worstCompression = null;
+        for (JsonNode leg : results.get("legBases")) {
+            int node = leg.get("node").asInt();
+            for (String[] q : new String[][] {{"maxCompression", "compression"}, {"maxUplift", "uplift"},
+                    {"maxShear", "shear"}}) {
+                JsonNode peak = leg.get(q[0]);
+                String expected = peak.get("case").isNull() ? "none"
+                        : String.format(Locale.ROOT, "%.1f", peak.get("value").asDouble() / 1e3);
+                assertEquals(expected, byId(html, "reaction-" + node + "-" + q[1]), model + " node " + node + " " + q[1]);
+            }
+            JsonNode c = leg.get("maxCompression");
+            if (!c.get("case").isNull() && (worstCompression == null
+                    || c.get("value").asDouble() > worstCompression.get("value").asDouble())) {
+                worstCompression = c;
+            }
+        }
+        if (worstCompression != null) {
+            assertEquals(azimuthText(worstCompression.get("azimuthDeg")), byId(html, "governing-compression-azimuth"),
+                    "governing azimuth of the largest leg base compression");
+        }
+    }
+}
