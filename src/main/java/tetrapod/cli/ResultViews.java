@@ -15,7 +15,7 @@ import tetrapod.model.Member;
 import tetrapod.model.Vec3;
 import tetrapod.solve.MemberEndForces;
 import tetrapod.solve.NodeDisplacement;
-import tetrapod.solve.NodeForce;
+import tetrapod.model.NodeForce;
 import tetrapod.view.Colouring;
 import tetrapod.view.MemberScalars;
 import tetrapod.view.NodeVector;
