@@ -4,11 +4,6 @@ import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.IOException;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import tetrapod.common.BadInputException;
 import tetrapod.common.Problem;
@@ -30,16 +25,7 @@ public final class PlainJson {
 
     /** The file's JSON as plain values; a file that is missing, not UTF-8 or not JSON is bad input. */
     public static Object read(Path file) throws BadInputException {
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new BadInputException(Problem.at("$", "cannot read " + file + ": no such file"));
-        } catch (CharacterCodingException e) {
-            throw new BadInputException(Problem.at("$", "cannot read " + file + ": it is not UTF-8 text"));
-        } catch (IOException e) {
-            throw new BadInputException(Problem.at("$", "cannot read " + file + ": " + e.getMessage()));
-        }
+        String text = TextFiles.readUtf8(file);
         return parse(text);
     }
 

@@ -1,11 +1,6 @@
 package tetrapod.io;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import java.io.IOException;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
@@ -42,16 +37,7 @@ public final class SpecReader {
 
     /** Reads the model file at {@code file} (UTF-8). A file that cannot be read is bad input too. */
     public static TowerSpec read(Path file, SectionLookup catalogue) throws BadInputException {
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new BadInputException(Problem.at("$", "cannot read " + file + ": no such file"));
-        } catch (CharacterCodingException e) {
-            throw new BadInputException(Problem.at("$", "cannot read " + file + ": it is not UTF-8 text"));
-        } catch (IOException e) {
-            throw new BadInputException(Problem.at("$", "cannot read " + file + ": " + e.getMessage()));
-        }
+        String text = TextFiles.readUtf8(file);
         return read(text, catalogue);
     }
 
