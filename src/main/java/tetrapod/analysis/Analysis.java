@@ -72,7 +72,7 @@ public final class Analysis {
         long done = 0;
         double[] weights = new double[basis.size()];
         for (Combination c : loads.combinations()) {
-            for (Double azimuth : c.hasWind() ? azimuths : java.util.Collections.<Double>singletonList(null)) {
+            for (Double azimuth : azimuthsOf(c, azimuths)) {
                 CaseKey key = new CaseKey(c, azimuth);
                 keys.put(key.id(), key);
                 sweep.add(c, azimuth, basis.weights(c, azimuth, weights));
@@ -82,7 +82,7 @@ public final class Analysis {
 
         Map<String, CaseKey> reported = new LinkedHashMap<>();
         for (Combination c : loads.combinations()) {
-            for (Double azimuth : c.hasWind() ? REPORTED_AZIMUTHS : java.util.Collections.<Double>singletonList(null)) {
+            for (Double azimuth : azimuthsOf(c, REPORTED_AZIMUTHS)) {
                 CaseKey key = new CaseKey(c, azimuth);
                 reported.put(key.id(), key);
             }
@@ -125,11 +125,12 @@ public final class Analysis {
     }
 
     static LoadVector vector(String name, List<NodeForce> loads) {
-        List<NodeForce> forces = new ArrayList<>(loads.size());
-        for (NodeForce l : loads) {
-            forces.add(new NodeForce(l.node(), l.fx(), l.fy(), l.fz(), l.mx(), l.my(), l.mz()));
-        }
-        return new LoadVector(name, forces);
+        return new LoadVector(name, loads);
+    }
+
+    /** The azimuths a combination is taken at: {@code azimuths} with wind, one null without. */
+    private static List<Double> azimuthsOf(Combination c, List<Double> azimuths) {
+        return c.hasWind() ? azimuths : java.util.Collections.singletonList(null);
     }
 
     static List<Integer> supportNodes(List<Support> supports) {
