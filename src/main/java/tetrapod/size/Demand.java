@@ -13,11 +13,13 @@ import tetrapod.model.Member;
  * @param member   the member as analysed (its section is replaced when another is tried)
  * @param buckling its buckling lengths in the case
  * @param forces   its forces in the case, N and N·m
+ * @param caseId   the case
  */
-public record Demand(Member member, BucklingLength buckling, MemberForces forces) {
+public record Demand(Member member, BucklingLength buckling, MemberForces forces, String caseId) {
 
     public Demand {
         Objects.requireNonNull(member, "member");
+        Objects.requireNonNull(caseId, "caseId");
         Objects.requireNonNull(buckling, "buckling");
         Objects.requireNonNull(forces, "forces");
     }

@@ -209,7 +209,7 @@ public final class FastEnvelope {
                 BucklingLength lengths = maskable[m] ? lengths(m, mask)
                         : buckling.forCase(member.id(), id -> axial[index.get(id)]);
                 envelopes[m] = envelopes[m].with(check(member, lengths, forces), forces, caseId, azimuth);
-                demands.get(m).add(new Demand(member, lengths, forces));
+                demands.get(m).add(new Demand(member, lengths, forces, caseId));
             }
         }
 
@@ -224,7 +224,8 @@ public final class FastEnvelope {
                 forceOf[2 * s] = cc.firstAxial(s);
                 chosen[2 * s + 1] = new long[] {cc.extremeCase(s), cc.mask(s), 2 * s + 1};
                 forceOf[2 * s + 1] = cc.extremeAxial(s);
-                demands.get(m).add(new Demand(member, lengths(m, cc.mask(s)), MemberForces.axial(cc.extremeAxial(s))));
+                demands.get(m).add(new Demand(member, lengths(m, cc.mask(s)), MemberForces.axial(cc.extremeAxial(s)),
+                        caseIds.get(cc.extremeCase(s))));
             }
             Arrays.sort(chosen, (a, b) -> Long.compare(a[0], b[0]));
             long last = -1;
