@@ -101,6 +101,7 @@ final class SizeCommand implements Callable<Integer> {
                 result.groups().size(), options.target(), allowed.isEmpty() ? "equal angles of the catalogue"
                         : "sections " + String.join(", ", allowed));
         history(out, result);
+        out.flush();
         if (result.outcome() == Outcome.INFEASIBLE) {
             err.println("infeasible: " + result.outcome().explanation() + "; no sized spec written");
             for (Shortfall s : result.shortfalls()) {
