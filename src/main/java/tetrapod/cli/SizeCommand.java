@@ -54,6 +54,10 @@ final class SizeCommand implements Callable<Integer> {
                     + "folder that 'analyze SPEC_OUT' writes to (out/<SPEC_OUT name>/).")
     Path output;
 
+    @Option(names = "--history-dir", paramLabel = "DIR",
+            description = "Folder for size-history.json (default: out/<SPEC_OUT name>/, where 'analyze SPEC_OUT' writes).")
+    Path historyDir;
+
     @Option(names = "--target", paramLabel = "U", description = "Largest utilisation allowed (default: ${DEFAULT-VALUE}).",
             defaultValue = "1.0")
     double target;
@@ -130,7 +134,7 @@ final class SizeCommand implements Callable<Integer> {
 
         Path sizedFile = output != null ? output : defaultOutput(model);
         SpecWriter.write(sizedFile, result.sizedSpec().get());
-        Path historyFile = OutputFolders.forModel(sizedFile).resolve("size-history.json");
+        Path historyFile = (historyDir != null ? historyDir : OutputFolders.forModel(sizedFile)).resolve("size-history.json");
         JsonOutput.write(historyFile, SizingHistory.document(sizingModel.spec().name(), result));
         out.println("sized spec written to " + sizedFile);
         out.println("history written to " + historyFile);
