@@ -31,10 +31,43 @@ class FastEnvelopeTest {
         }
     }
 
+    /** Frame idealisation (beam-column legs) with crossing diagonals, by each method. Invented test data. */
+    static Stream<String> frameTowers() {
+        String tower = """
+            { "name": "frame test tower %1$s",
+              "idealisation": "frame",
+              "base": { "widthX": 5.0, "widthY": 4.0 },
+              "segments": [
+                { "height": 9.0, "topWidthX": 3.5, "topWidthY": 3.0, "panels": 3, "bracing": "x", "horizontals": "ends",
+                  "redundants": 1,
+                  "sections": { "leg": "L100x10", "diagonal": "L60x6", "horizontal": "L60x6", "redundant": "L45x4.5",
+                                "plan": "L50x5" } },
+                { "height": 6.0, "topWidthX": 2.0, "topWidthY": 2.0, "panels": 2, "bracing": "k", "horizontals": "all",
+                  "sections": { "leg": "L80x8", "diagonal": "L50x5", "horizontal": "L50x5" } } ],
+              "supports": "fixed",
+              "planBracingLevels": [9.0],
+              "loads": { "wind": { "method": "uniform", "pressure": 1.1, "forceCoefficient": 2.6 },
+                         "ancillaries": [ { "kind": "point", "name": "lamp", "height": 15.0, "weight": 3.0, "area": 1.5,
+                                            "forceCoefficient": 1.2, "face": "+x" } ],
+                         "sweepStep": 15.0 },
+              "checks": { "method": "%1$s" } }
+            """;
+        return Stream.of("en1993", "asce10").map(tower::formatted);
+    }
+
+    @ParameterizedTest(name = "{index}")
+    @MethodSource("frameTowers")
+    void sameEnvelopeOnFrameTowersWithCrossingDiagonals(String json) throws Exception {
+        sameEnvelope(TestModels.parse(json));
+    }
+
     @ParameterizedTest(name = "{0}")
     @MethodSource("models")
     void sameEnvelopeAsTheFullSweepWithFewerChecks(Path file) throws Exception {
-        SizingModel model = TestModels.read(file);
+        sameEnvelope(TestModels.read(file));
+    }
+
+    private static void sameEnvelope(SizingModel model) throws Exception {
         AnalysisResult full = Analysis.run(model.tower(), model.loads(), model.spec().checks(), ProgressListener.NONE);
         Evaluation fast = FastEnvelope.evaluate(model.tower(), model.loads(), model.spec().checks());
 
