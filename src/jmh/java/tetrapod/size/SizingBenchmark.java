@@ -34,18 +34,22 @@ import tetrapod.section.SectionCatalogue;
 @State(Scope.Benchmark)
 public class SizingBenchmark {
 
-    @Param({"models/hilltop-relay-k.json"})
+    @Param({"models/hilltop-relay-k.json", "models/harbour-beacon-rectangular.json"})
     public String model;
+
+    /** Where sizing starts: the spec's sections, or the heaviest allowed (more iterations). */
+    @Param({"SPEC", "HEAVIEST"})
+    public SizingOptions.Start start;
 
     private SizingModel sizing;
 
     @Setup(Level.Trial)
     public void setUp() throws Exception {
         sizing = SizingModel.of(SpecReader.read(Path.of(model), SectionCatalogue.standard()));
-        SizingResult r = Sizer.size(sizing, SizingOptions.DEFAULT, ProgressListener.NONE);
+        SizingResult r = Sizer.size(sizing, SizingOptions.DEFAULT.withStart(start), ProgressListener.NONE);
         Evaluation e = FastEnvelope.evaluate(sizing.tower(), sizing.loads(), sizing.spec().checks());
-        System.out.printf("%n[setup] %s: %d members, %d cases; sizing %s in %d iterations, %.0f kg -> %.0f kg;"
-                        + " fast envelope %d member checks instead of %d%n", sizing.spec().name(),
+        System.out.printf("%n[setup] %s, start %s: %d members, %d cases; sizing %s in %d iterations, %.0f kg -> %.0f kg;"
+                        + " fast envelope %d member checks instead of %d%n", sizing.spec().name(), start,
                 sizing.tower().frame().members().size(), e.caseCount(), r.outcome().jsonName(), r.history().size(),
                 r.massBefore(), r.massAfter(), e.checkCount(),
                 (long) e.caseCount() * sizing.tower().frame().members().size());
@@ -54,7 +58,7 @@ public class SizingBenchmark {
     /** The whole sizing run: every iteration (rebuild, loads, factorise, solve the basis, envelope, choice). */
     @Benchmark
     public SizingResult size() throws Exception {
-        return Sizer.size(sizing, SizingOptions.DEFAULT, ProgressListener.NONE);
+        return Sizer.size(sizing, SizingOptions.DEFAULT.withStart(start), ProgressListener.NONE);
     }
 
     /** One design's member envelopes, checking only the cases that can govern. */

@@ -179,12 +179,13 @@ public final class Sizer {
                 }
                 Analysed a = new Analysed(design, current.tower().steelMass(), eval.maxUtilisation(), states(eval, design));
                 SectionChooser.Step step = chooser.choose(eval, design, floors);
-                int seenAt = indexOf(analysed, step.next());
-                if (!step.next().equals(design) && seenAt >= 0) {
+                List<Map<SizingGroup, Section>> designs = new ArrayList<>();
+                analysed.forEach(x -> designs.add(x.design()));
+                designs.add(design);
+                var raised = Cycles.raisedFloors(designs, step.next(), floors);
+                if (raised.isPresent()) {
                     cycled = true;
-                    List<Analysed> cycle = new ArrayList<>(analysed.subList(seenAt, analysed.size()));
-                    cycle.add(a);
-                    floors = heaviest(cycle, floors);
+                    floors = raised.get();
                     step = chooser.choose(eval, design, floors);
                 }
                 analysed.add(a);
@@ -235,24 +236,6 @@ public final class Sizer {
                         worst.member(), worst.governing(), worst.governingWhere()));
             }
             return states;
-        }
-
-        private static int indexOf(List<Analysed> analysed, Map<SizingGroup, Section> design) {
-            for (int k = 0; k < analysed.size(); k++) {
-                if (analysed.get(k).design().equals(design)) {
-                    return k;
-                }
-            }
-            return -1;
-        }
-
-        /** Per group the heaviest section of the cycle's designs (and no lighter than the floor already set). */
-        private static Map<SizingGroup, Section> heaviest(List<Analysed> cycle, Map<SizingGroup, Section> floors) {
-            Map<SizingGroup, Section> out = new TreeMap<>(floors);
-            for (Analysed a : cycle) {
-                a.design().forEach((g, s) -> out.merge(g, s, (x, y) -> y.massPerMetre() > x.massPerMetre() ? y : x));
-            }
-            return out;
         }
 
         private static int changed(Map<SizingGroup, Section> from, Map<SizingGroup, Section> to) {

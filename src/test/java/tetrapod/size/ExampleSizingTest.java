@@ -69,6 +69,20 @@ class ExampleSizingTest {
         assertEquals(JsonOutput.toJson(SizingHistory.document("x", a)), JsonOutput.toJson(SizingHistory.document("x", b)));
     }
 
+    @ParameterizedTest(name = "{0}")
+    @ValueSource(strings = {RIDGE, HILLTOP})
+    void atTheIterationLimitTheLightestPassingDesignAnalysedIsReturnedIfAny(String file) throws Exception {
+        SizingModel model = TestModels.read(Path.of(file));
+        SizingResult r = Sizer.size(model, SizingOptions.DEFAULT.withMaxIterations(1), ProgressListener.NONE);
+        assertEquals(Outcome.ITERATION_LIMIT, r.outcome());
+        assertEquals(1, r.history().size());
+        boolean specPasses = r.history().get(0).maxUtilisation() <= 1.0;
+        // ridge passes as given (0.893), hilltop does not (1.509): only the ridge spec comes back, unchanged
+        assertEquals(file.equals(RIDGE), specPasses);
+        assertEquals(specPasses, r.sizedSpec().isPresent());
+        r.sizedSpec().ifPresent(s -> assertEquals(SpecWriter.write(model.spec()), SpecWriter.write(s)));
+    }
+
     @SuppressWarnings("unchecked")
     private static Map<String, Object> withoutSections(TowerSpec spec) {
         Map<String, Object> map = SpecWriter.toMap(spec);
