@@ -213,31 +213,27 @@ public final class FastEnvelope {
             }
         }
 
+        /** A case chosen for checking: its number, its partner state and the member's axial force in it. */
+        private record Pick(int caseIndex, long mask, double axial) { }
+
         /** Checks the chosen cases of an axial-only member in case order, and keeps each class's worst as a demand. */
         private void finishClasses(int m, List<String> caseIds, List<Double> azimuths) {
             CaseClasses cc = classes[m];
             Member member = members.get(m);
-            long[][] chosen = new long[2 * cc.size()][];
-            double[] forceOf = new double[2 * cc.size()];
+            List<Pick> picks = new ArrayList<>(2 * cc.size());
             for (int s = 0; s < cc.size(); s++) {
-                chosen[2 * s] = new long[] {cc.firstCase(s), cc.mask(s), 2 * s};
-                forceOf[2 * s] = cc.firstAxial(s);
-                chosen[2 * s + 1] = new long[] {cc.extremeCase(s), cc.mask(s), 2 * s + 1};
-                forceOf[2 * s + 1] = cc.extremeAxial(s);
+                picks.add(new Pick(cc.firstCase(s), cc.mask(s), cc.firstAxial(s)));
+                if (cc.extremeCase(s) != cc.firstCase(s)) {
+                    picks.add(new Pick(cc.extremeCase(s), cc.mask(s), cc.extremeAxial(s)));
+                }
                 demands.get(m).add(new Demand(member, lengths(m, cc.mask(s)), MemberForces.axial(cc.extremeAxial(s)),
                         caseIds.get(cc.extremeCase(s))));
             }
-            Arrays.sort(chosen, (a, b) -> Long.compare(a[0], b[0]));
-            long last = -1;
-            for (long[] pick : chosen) {
-                if (pick[0] == last) {
-                    continue; // the first case of a class is also its largest
-                }
-                last = pick[0];
-                int caseIndex = (int) pick[0];
-                MemberForces forces = MemberForces.axial(forceOf[(int) pick[2]]);
-                envelopes[m] = envelopes[m].with(check(member, lengths(m, pick[1]), forces), forces,
-                        caseIds.get(caseIndex), azimuths.get(caseIndex));
+            picks.sort(java.util.Comparator.comparingInt(Pick::caseIndex)); // each case is in one class only
+            for (Pick p : picks) {
+                MemberForces forces = MemberForces.axial(p.axial());
+                envelopes[m] = envelopes[m].with(check(member, lengths(m, p.mask()), forces), forces,
+                        caseIds.get(p.caseIndex()), azimuths.get(p.caseIndex()));
             }
         }
 

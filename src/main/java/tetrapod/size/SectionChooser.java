@@ -1,6 +1,7 @@
 package tetrapod.size;
 
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -20,7 +21,7 @@ final class SectionChooser {
     /** The next design and the groups that no allowed section carries. */
     record Step(Map<SizingGroup, Section> next, List<Shortfall> shortfalls) {
         Step {
-            next = java.util.Collections.unmodifiableMap(new TreeMap<>(next));
+            next = Collections.unmodifiableMap(new TreeMap<>(next));
             shortfalls = List.copyOf(shortfalls);
         }
     }
