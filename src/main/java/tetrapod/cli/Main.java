@@ -12,8 +12,8 @@ import tetrapod.common.UnstableStructureException;
 @Command(name = "tetrapod", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Analysis and checking of four-leg steel lattice towers.%n"
                 + "Results must be checked by a qualified engineer against the codes that apply locally.",
-        subcommands = {AnalyzeCommand.class, ValidateCommand.class, NewCommand.class, GeometryCommand.class,
-                RenderCommand.class, ViewCommand.class, ReportCommand.class,
+        subcommands = {AnalyzeCommand.class, SizeCommand.class, ValidateCommand.class, NewCommand.class,
+                GeometryCommand.class, RenderCommand.class, ViewCommand.class, ReportCommand.class,
                 CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
 
