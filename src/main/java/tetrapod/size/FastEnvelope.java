@@ -24,12 +24,12 @@ import tetrapod.load.LoadComponent;
 import tetrapod.load.TowerLoads;
 import tetrapod.model.Frame;
 import tetrapod.model.Member;
-import tetrapod.model.NodalLoad;
+import tetrapod.model.NodeForce;
 import tetrapod.model.spec.ChecksSpec;
 import tetrapod.solve.BasisResponses;
 import tetrapod.solve.FactoredSystem;
 import tetrapod.solve.LoadVector;
-import tetrapod.solve.NodeForce;
+import tetrapod.model.NodeForce;
 import tetrapod.solve.Solver;
 import tetrapod.solve.StructuralModel;
 
@@ -91,9 +91,9 @@ public final class FastEnvelope {
         return new Sweep(frame, loads, responses, checker).run();
     }
 
-    private static LoadVector vector(String name, List<NodalLoad> loads) {
+    private static LoadVector vector(String name, List<NodeForce> loads) {
         List<NodeForce> forces = new ArrayList<>(loads.size());
-        for (NodalLoad l : loads) {
+        for (NodeForce l : loads) {
             forces.add(new NodeForce(l.node(), l.fx(), l.fy(), l.fz(), l.mx(), l.my(), l.mz()));
         }
         return new LoadVector(name, forces);
