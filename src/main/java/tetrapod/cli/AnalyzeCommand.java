@@ -18,6 +18,7 @@ import tetrapod.io.ResultsReader;
 import tetrapod.io.SpecWriter;
 import tetrapod.report.CsvTables;
 import tetrapod.report.ReportHtml;
+import tetrapod.report.SizingHistoryFile;
 import tetrapod.report.Results;
 import tetrapod.report.ResultsDocument;
 import tetrapod.view.RenderRequest;
@@ -78,7 +79,8 @@ final class AnalyzeCommand implements Callable<Integer> {
         Path picture = folder.resolve("tower.png");
         String route = RenderCommand.write(view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
         watch.lap("picture");
-        ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(java.nio.file.Files.readAllBytes(picture)));
+        ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(java.nio.file.Files.readAllBytes(picture)),
+                SizingHistoryFile.matching(folder, results));
         watch.lap("report");
 
         AnalysisSummary.print(out, result);

@@ -14,6 +14,7 @@ import tetrapod.common.BadInputException;
 import tetrapod.common.Problem;
 import tetrapod.io.ResultsReader;
 import tetrapod.report.ReportHtml;
+import tetrapod.report.SizingHistoryFile;
 import tetrapod.report.Results;
 
 /** Rebuilds report.html from a results file. */
@@ -46,7 +47,7 @@ final class ReportCommand implements Callable<Integer> {
         }
         Optional<byte[]> bytes = Files.isRegularFile(png) ? Optional.of(Files.readAllBytes(png)) : Optional.empty();
         Path target = output != null ? output : folder.resolve(ReportHtml.FILE);
-        ReportHtml.write(target, results, bytes);
+        ReportHtml.write(target, results, bytes, SizingHistoryFile.matching(folder, results));
         PrintWriter out = spec.commandLine().getOut();
         if (bytes.isEmpty()) {
             out.println("no tower.png beside " + resultsFile + ": the report has no 3D picture "

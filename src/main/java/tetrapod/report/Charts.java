@@ -152,6 +152,42 @@ final class Charts {
                 + ": the hand method (dashed) beside the analysis (solid).", chart, WIDTH, HEIGHT));
     }
 
+    /** Steel mass and largest utilisation at each iteration of tetrapod size (two range axes). */
+    static Optional<Figure> sizingHistory(Map<String, Object> history) {
+        List<Map<String, Object>> iterations = Tree.maps(history, "iterations");
+        if (iterations.isEmpty()) {
+            return Optional.empty();
+        }
+        XYSeries mass = new XYSeries("bare steel mass", false, true);
+        XYSeries utilisation = new XYSeries("largest utilisation", false, true);
+        for (Map<String, Object> it : iterations) {
+            mass.add(Tree.integer(it, "iteration"), Tree.num(it, "steelMass"));
+            utilisation.add(Tree.integer(it, "iteration"), Tree.num(it, "maxUtilisation"));
+        }
+        JFreeChart chart = ChartFactory.createXYLineChart(null, "iteration (analysis) of the sizing",
+                "bare steel mass, kg", new XYSeriesCollection(mass), PlotOrientation.VERTICAL, true, false, false);
+        style(chart);
+        XYPlot plot = chart.getXYPlot();
+        NumberAxis iterationAxis = (NumberAxis) plot.getDomainAxis();
+        iterationAxis.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
+        ((NumberAxis) plot.getRangeAxis()).setAutoRangeIncludesZero(true);
+        NumberAxis utilisationAxis = new NumberAxis("largest utilisation (demand / resistance)");
+        utilisationAxis.setRange(0, Math.max(1.1, utilisation.getMaxY() * 1.08));
+        utilisationAxis.setLabelFont(plot.getRangeAxis().getLabelFont());
+        utilisationAxis.setTickLabelFont(plot.getRangeAxis().getTickLabelFont());
+        plot.setRangeAxis(1, utilisationAxis);
+        plot.setDataset(1, new XYSeriesCollection(utilisation));
+        plot.mapDatasetToRangeAxis(1, 1);
+        XYLineAndShapeRenderer second = new XYLineAndShapeRenderer(true, true);
+        second.setSeriesPaint(0, ChartStyle.series(1));
+        second.setSeriesStroke(0, ChartStyle.DASHED);
+        plot.setRenderer(1, second);
+        ((XYLineAndShapeRenderer) plot.getRenderer()).setDefaultShapesVisible(true);
+        return Optional.of(Figure.draw("fig-sizing", "Sizing history: the bare steel mass (solid, left axis) and the "
+                + "largest member utilisation (dashed, right axis) at each analysis of tetrapod size.", chart, WIDTH,
+                HEIGHT));
+    }
+
     private static XYSeries series(String name, List<Point> points, double xScale, double yScale) {
         XYSeries s = new XYSeries(name, false, true);
         for (Point p : points) {

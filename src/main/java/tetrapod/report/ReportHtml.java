@@ -6,6 +6,7 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import tetrapod.io.AtomicFiles;
 
@@ -31,7 +32,16 @@ public final class ReportHtml {
      * @param towerPng the 3D picture as PNG bytes, or empty (the summary then has no picture)
      */
     public static String build(Results results, Optional<byte[]> towerPng) {
-        ReportInput input = new ReportInput(results, towerPng);
+        return build(results, towerPng, Optional.empty());
+    }
+
+    /**
+     * The page for {@code results}, with a sizing-history section when {@code sizingHistory}
+     * (size-history.json as plain values) is given.
+     */
+    public static String build(Results results, Optional<byte[]> towerPng, Optional<Map<String, Object>> sizingHistory) {
+        ReportInput input = new ReportInput(results, towerPng, sizingHistory);
+        List<Section> sections = sections(sizingHistory.isPresent());
         Html out = new Html();
         String title = "Tower calculation: " + results.name();
         out.raw("<!DOCTYPE html>\n").open("html", "lang=\"en\"").raw("\n").open("head").raw("\n")
@@ -48,12 +58,12 @@ public final class ReportHtml {
         out.element("p", "class=\"caution-line\"", "For checking by a qualified engineer against the codes that "
                 + "apply locally. Tetrapod does not certify compliance.");
         out.open("nav", "aria-label=\"Contents\"").open("ol");
-        for (Section s : SECTIONS) {
+        for (Section s : sections) {
             out.open("li").raw("<a href=\"#" + s.id() + "\">").text(s.title()).raw("</a>").close("li");
         }
         out.close("ol").close("nav").close("header");
         int number = 1;
-        for (Section s : SECTIONS) {
+        for (Section s : sections) {
             out.open("section", Html.attr("id", s.id()));
             out.element("h2", number++ + " " + s.title());
             s.write(out, input);
@@ -68,8 +78,24 @@ public final class ReportHtml {
 
     /** Writes the page to {@code file} atomically. */
     public static void write(Path file, Results results, Optional<byte[]> towerPng) throws IOException {
-        String html = build(results, towerPng);
-        AtomicFiles.writeString(file, html);
+        write(file, results, towerPng, Optional.empty());
+    }
+
+    /** Writes the page, with its sizing history when given, to {@code file} atomically. */
+    public static void write(Path file, Results results, Optional<byte[]> towerPng,
+                             Optional<Map<String, Object>> sizingHistory) throws IOException {
+        AtomicFiles.writeString(file, build(results, towerPng, sizingHistory));
+    }
+
+    /** The sections in order; the sizing history after the foundations when there is one. */
+    private static List<Section> sections(boolean sized) {
+        if (!sized) {
+            return SECTIONS;
+        }
+        List<Section> all = new java.util.ArrayList<>(SECTIONS);
+        all.add(all.indexOf(SECTIONS.stream().filter(s -> s instanceof FoundationsSection).findFirst().orElseThrow()) + 1,
+                new SizingSection());
+        return List.copyOf(all);
     }
 
     /** A chart as a figure with its caption. */
