@@ -47,13 +47,14 @@ public final class Analysis {
     public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, ProgressListener progress)
             throws UnstableStructureException {
         StructuralModel model = StructuralModel.of(tower.frame());
+        progress.progress("prepare model", 1, 1);
         FactoredSystem system = Solver.factor(model, progress);
         LoadBasis basis = loads.basis();
         List<LoadVector> vectors = new ArrayList<>(basis.size());
         for (LoadComponent c : basis.components()) {
             vectors.add(vector(c.name(), c.loads()));
         }
-        BasisResponses responses = BasisResponses.of(system, vectors);
+        BasisResponses responses = BasisResponses.of(system, vectors, progress);
 
         FoundationCheck footing = checks.foundationSpec()
                 .map(f -> new FoundationCheck(f, checks.partialFactors())).orElse(null);
@@ -76,7 +77,7 @@ public final class Analysis {
                 CaseKey key = new CaseKey(c, azimuth);
                 keys.put(key.id(), key);
                 sweep.add(c, azimuth, basis.weights(c, azimuth, weights));
-                progress.progress("sweep", ++done, total);
+                progress.progress("sweep and checks", ++done, total);
             }
         }
 
@@ -102,8 +103,10 @@ public final class Analysis {
             f.checks().values().forEach(g -> addGoverning(reported, keys, g.where()));
         }
         List<SolvedCase> cases = new ArrayList<>(reported.size());
+        int solved = 0;
         for (CaseKey key : reported.values()) {
             cases.add(solveCase(system, loads.loadCase(key)));
+            progress.progress("cases in full", ++solved, reported.size());
         }
         List<AzimuthWind> wind = new ArrayList<>();
         loads.wind().ifPresent(w -> REPORTED_AZIMUTHS.forEach(a -> wind.add(w.azimuth(a))));

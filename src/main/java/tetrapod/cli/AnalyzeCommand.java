@@ -59,14 +59,14 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        Stopwatch watch = new Stopwatch();
+        StageTimes watch = new StageTimes();
         LoadedModel loaded = LoadedModel.read(model);
-        watch.lap("read+generate+loads");
+        watch.end("read, generate, loads");
         AnalysisResult result;
         try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
-            result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(), progress);
+            result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
+                    StageTimes.both(progress, watch));
         }
-        watch.lap("analyse");
         Path folder = output != null ? output : OutputFolders.forModel(model);
         Path resultsFile = folder.resolve("results.json");
         JsonOutput.write(resultsFile, ResultsDocument.build(loaded.spec(), result,
@@ -74,14 +74,14 @@ final class AnalyzeCommand implements Callable<Integer> {
         // everything else is built from the file just written, as 'tetrapod report' builds it
         Results results = new Results(ResultsReader.read(resultsFile));
         CsvTables.writeAll(results, folder);
-        watch.lap("report");
+        watch.end("results.json, CSV");
         ViewData view = ResultViews.of(result);
         Path picture = folder.resolve("tower.png");
         String route = RenderCommand.write(view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
-        watch.lap("picture");
+        watch.end("picture");
         ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(java.nio.file.Files.readAllBytes(picture)),
                 SizingHistoryFile.matching(folder, results));
-        watch.lap("report");
+        watch.end("report");
 
         AnalysisSummary.print(out, result);
         out.println("tower.png " + route.replaceFirst("^render: ", "drawn by "));

@@ -3,6 +3,7 @@ package tetrapod.solve;
 import tetrapod.model.NodeForce;
 import java.util.Arrays;
 import java.util.List;
+import tetrapod.common.ProgressListener;
 import tetrapod.common.UnstableStructureException;
 
 /**
@@ -33,7 +34,13 @@ public final class BasisResponses {
      * @throws UnstableStructureException as {@link FactoredSystem#solveAll}
      */
     public static BasisResponses of(FactoredSystem system, List<LoadVector> basis) throws UnstableStructureException {
-        List<Solution> solutions = system.solveAll(basis);
+        return of(system, basis, ProgressListener.NONE);
+    }
+
+    /** As {@link #of(FactoredSystem, List)}, telling {@code progress} of each vector solved ("solve"). */
+    public static BasisResponses of(FactoredSystem system, List<LoadVector> basis, ProgressListener progress)
+            throws UnstableStructureException {
+        List<Solution> solutions = system.solveAll(basis, progress);
         int supports = system.model().frame().supports().size();
         int members = system.model().frame().members().size();
         double[][] reactions = new double[basis.size()][supports * 6];
