@@ -3,6 +3,7 @@ package tetrapod.check;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import tetrapod.model.Member;
 import tetrapod.model.Role;
 import tetrapod.model.Section;
@@ -182,18 +183,12 @@ public final class Asce10MemberCheck implements MemberCheck {
     private static CheckResult bending(MemberCheckInput in, Slenderness s, double fy, double e) {
         Section section = in.member().section();
         SectionProperties p = section.properties();
-        double sx;
-        double sy;
-        if (section.shape() instanceof SectionShape.Angle angle) {
-            AngleGeometry g = new AngleGeometry(angle, p);
-            sx = g.elasticModulusU();
-            sy = g.elasticModulusV();
-        } else if (section.shape() instanceof SectionShape.Tube tube) {
-            sx = p.iu() / (tube.d() / 2);
-            sy = p.iv() / (tube.d() / 2);
-        } else {
+        Optional<ElasticModuli> moduli = ElasticModuli.of(section);
+        if (moduli.isEmpty()) {
             return null;
         }
+        double sx = moduli.get().u();
+        double sy = moduli.get().v();
         MemberForces f = in.forces();
         double max = fy * sx;
         double may = fy * sy;

@@ -3,6 +3,7 @@ package tetrapod.check;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import tetrapod.model.Member;
 import tetrapod.model.Role;
 import tetrapod.model.Section;
@@ -235,18 +236,12 @@ public final class En1993MemberCheck implements MemberCheck {
         Member member = in.member();
         Section section = member.section();
         SectionProperties p = section.properties();
-        double wy;
-        double wz;
-        if (section.shape() instanceof SectionShape.Angle angle) {
-            AngleGeometry g = new AngleGeometry(angle, p);
-            wy = g.elasticModulusU();
-            wz = g.elasticModulusV();
-        } else if (section.shape() instanceof SectionShape.Tube tube) {
-            wy = p.iu() / (tube.d() / 2);
-            wz = p.iv() / (tube.d() / 2);
-        } else {
+        Optional<ElasticModuli> moduli = ElasticModuli.of(section);
+        if (moduli.isEmpty()) {
             return List.of();
         }
+        double wy = moduli.get().u();
+        double wz = moduli.get().v();
         // class 4: the moduli reduced in proportion to the area (an approximation of W_eff)
         double reduce = cls.effectiveArea() / p.area();
         wy *= reduce;
