@@ -77,7 +77,7 @@ public class SweepBenchmark {
         FactoredSystem system = Solver.factor(model);
         LoadBasis basis = loads.basis();
         List<LoadVector> vectors = basis.components().stream()
-                .map((LoadComponent c) -> Analysis.vector(c.name(), c.loads())).toList();
+                .map((LoadComponent c) -> new LoadVector(c.name(), c.loads())).toList();
         responses = BasisResponses.of(system, vectors);
         weights = new double[basis.size()];
         reactions = new double[6 * tower.frame().supports().size()];

@@ -3,17 +3,16 @@ package tetrapod.analysis;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
-import java.util.Map;
 import java.util.List;
-import tetrapod.common.ProgressListener;
-import tetrapod.common.UnstableStructureException;
+import java.util.Map;
 import tetrapod.check.Extreme;
 import tetrapod.check.FoundationCheck;
 import tetrapod.check.FoundationEnvelope;
 import tetrapod.check.MemberChecker;
 import tetrapod.check.MemberEnvelope;
+import tetrapod.common.ProgressListener;
+import tetrapod.common.UnstableStructureException;
 import tetrapod.generate.Tower;
-import tetrapod.model.spec.ChecksSpec;
 import tetrapod.load.AzimuthWind;
 import tetrapod.load.CaseKey;
 import tetrapod.load.Combination;
@@ -21,8 +20,7 @@ import tetrapod.load.LoadBasis;
 import tetrapod.load.LoadCase;
 import tetrapod.load.LoadComponent;
 import tetrapod.load.TowerLoads;
-import tetrapod.model.NodeForce;
-import tetrapod.model.Support;
+import tetrapod.model.spec.ChecksSpec;
 import tetrapod.solve.BasisResponses;
 import tetrapod.solve.FactoredSystem;
 import tetrapod.solve.LoadVector;
@@ -52,7 +50,7 @@ public final class Analysis {
         LoadBasis basis = loads.basis();
         List<LoadVector> vectors = new ArrayList<>(basis.size());
         for (LoadComponent c : basis.components()) {
-            vectors.add(vector(c.name(), c.loads()));
+            vectors.add(new LoadVector(c.name(), c.loads()));
         }
         BasisResponses responses = BasisResponses.of(system, vectors, progress);
 
@@ -62,8 +60,7 @@ public final class Analysis {
                 basis.components().stream().map(LoadComponent::loads).toList());
         double baseX = tower.isGenerated() ? tower.levels().get(0).widthX() : Double.NaN;
         double baseY = tower.isGenerated() ? tower.levels().get(0).widthY() : Double.NaN;
-        Sweep sweep = new Sweep(tower.frame(), responses, MemberChecker.of(tower, checks), footing, resultants,
-                baseX, baseY);
+        Sweep sweep = new Sweep(model, responses, MemberChecker.of(tower, checks), footing, resultants, baseX, baseY);
         Map<String, CaseKey> keys = new HashMap<>();
         List<Double> azimuths = loads.azimuths();
         long total = 0;
@@ -76,7 +73,7 @@ public final class Analysis {
             for (Double azimuth : azimuthsOf(c, azimuths)) {
                 CaseKey key = new CaseKey(c, azimuth);
                 keys.put(key.id(), key);
-                sweep.add(c, azimuth, basis.weights(c, azimuth, weights));
+                sweep.add(key, basis.weights(c, azimuth, weights));
                 progress.progress("sweep and checks", ++done, total);
             }
         }
@@ -123,12 +120,8 @@ public final class Analysis {
 
     /** Solves one load case directly (not by superposition), for a full report of it. */
     public static SolvedCase solveCase(FactoredSystem system, LoadCase loadCase) throws UnstableStructureException {
-        Solution solution = system.solve(vector(loadCase.id(), loadCase.loads()));
+        Solution solution = system.solve(new LoadVector(loadCase.id(), loadCase.loads()));
         return new SolvedCase(loadCase.id(), loadCase.combination(), loadCase.azimuthDeg(), solution);
-    }
-
-    static LoadVector vector(String name, List<NodeForce> loads) {
-        return new LoadVector(name, loads);
     }
 
     /** The azimuths a combination is taken at: {@code azimuths} with wind, one null without. */
@@ -136,7 +129,4 @@ public final class Analysis {
         return c.hasWind() ? azimuths : java.util.Collections.singletonList(null);
     }
 
-    static List<Integer> supportNodes(List<Support> supports) {
-        return supports.stream().map(Support::node).toList();
-    }
 }

@@ -17,7 +17,9 @@ import tetrapod.load.CaseKey;
 import tetrapod.load.Combination;
 import tetrapod.model.Frame;
 import tetrapod.model.Member;
+import tetrapod.model.Support;
 import tetrapod.solve.BasisResponses;
+import tetrapod.solve.StructuralModel;
 
 /**
  * Takes the cases one by one (formed by superposition) and keeps what the report needs: each leg
@@ -28,7 +30,7 @@ import tetrapod.solve.BasisResponses;
  */
 final class Sweep {
 
-    private final Frame frame;
+    private final StructuralModel model;
     private final BasisResponses responses;
     private final MemberChecker checker;
     private final FoundationCheck footing;
@@ -40,7 +42,6 @@ final class Sweep {
     private final double[] axial;
     private final double[] ends = new double[12];
     private final double[] totals = new double[5];
-    private final Map<Integer, Integer> memberIndex;
     private final Map<String, List<double[]>> perCombination = new LinkedHashMap<>();
     private final Extreme[] compression;
     private final Extreme[] uplift;
@@ -54,22 +55,19 @@ final class Sweep {
      * @param footing    the footing check, or null when the model gives no foundation
      * @param baseWidthX leg spacing along x at the base, m; NaN for an explicit frame (no hand method)
      */
-    Sweep(Frame frame, BasisResponses responses, MemberChecker checker, FoundationCheck footing,
+    Sweep(StructuralModel model, BasisResponses responses, MemberChecker checker, FoundationCheck footing,
           LoadResultants resultants, double baseWidthX, double baseWidthY) {
-        this.frame = frame;
+        this.model = model;
+        Frame frame = model.frame();
         this.responses = responses;
         this.checker = checker;
         this.footing = footing;
         this.resultants = resultants;
         this.baseWidthX = baseWidthX;
         this.baseWidthY = baseWidthY;
-        this.supportNodes = Analysis.supportNodes(frame.supports());
+        this.supportNodes = frame.supports().stream().map(Support::node).toList();
         this.reactions = new double[6 * supportNodes.size()];
         this.axial = new double[frame.members().size()];
-        this.memberIndex = new java.util.HashMap<>();
-        for (int m = 0; m < frame.members().size(); m++) {
-            memberIndex.put(frame.members().get(m).id(), m);
-        }
         int s = supportNodes.size();
         this.compression = filled(s);
         this.uplift = filled(s);
@@ -90,9 +88,11 @@ final class Sweep {
         return e;
     }
 
-    /** One case: its combination, its azimuth (null without wind) and the basis weights (input). */
-    void add(Combination combination, Double azimuthDeg, double[] weights) {
-        String caseId = new CaseKey(combination, azimuthDeg).id();
+    /** One case and its basis weights (input). */
+    void add(CaseKey key, double[] weights) {
+        Combination combination = key.combination();
+        Double azimuthDeg = key.azimuthDeg();
+        String caseId = key.id();
         responses.reactions(weights, reactions);
         List<double[]> rows = azimuthDeg == null ? null
                 : perCombination.computeIfAbsent(combination.name(), k -> new ArrayList<>());
@@ -124,9 +124,9 @@ final class Sweep {
         double worst = -1;
         int worstMember = 0;
         for (int m = 0; m < axial.length; m++) {
-            Member member = frame.members().get(m);
+            Member member = model.frame().members().get(m);
             MemberForces forces = memberForces(m, member, weights);
-            MemberCheckResult checked = checker.check(member.id(), forces, id -> axial[memberIndex.get(id)]);
+            MemberCheckResult checked = checker.check(member.id(), forces, id -> axial[model.memberIndex(id)]);
             members[m] = members[m].with(checked, forces, caseId, azimuthDeg);
             if (checked.governing().utilisation() > worst) {
                 worst = checked.governing().utilisation();
