@@ -108,7 +108,8 @@ public final class Analysis {
         List<AzimuthWind> wind = new ArrayList<>();
         loads.wind().ifPresent(w -> REPORTED_AZIMUTHS.forEach(a -> wind.add(w.azimuth(a))));
         return new AnalysisResult(tower, loads, model, cases, wind, sweep.legBaseSweeps(), legBases, members,
-                foundations, sweep.handComparisons(), responses, (int) total, sweep.utilisationByAzimuth());
+                foundations, sweep.handComparisons(), responses, (int) total, sweep.utilisationByAzimuth(),
+                sweep.autoRestraintPeaks());
     }
 
     /** Adds the case where {@code e} occurred to the reported cases (after those already there). */
@@ -118,9 +119,15 @@ public final class Analysis {
         }
     }
 
-    /** Solves one load case directly (not by superposition), for a full report of it. */
+    /**
+     * Solves one load case directly (not by superposition), for a full report of it.
+     *
+     * @throws UnstableStructureException when the structure is a mechanism or an auto-restraint
+     *         would carry part of the case's load
+     */
     public static SolvedCase solveCase(FactoredSystem system, LoadCase loadCase) throws UnstableStructureException {
         Solution solution = system.solve(new LoadVector(loadCase.id(), loadCase.loads()));
+        solution.requireLoadCarried(loadCase.id());
         return new SolvedCase(loadCase.id(), loadCase.combination(), loadCase.azimuthDeg(), solution);
     }
 

@@ -25,12 +25,15 @@ import tetrapod.solve.StructuralModel;
  * @param caseCount   number of load cases covered (combinations × azimuths)
  * @param utilisationByAzimuth the largest member utilisation at each azimuth of the sweep over every
  *                    combination with wind, by ascending azimuth (empty without wind)
+ * @param autoRestraints every auto-restraint of the model with the largest force it carried over
+ *                    the sweep (each below the limit of {@code solve.LoadPath}, or the run would
+ *                    have stopped)
  */
 public record AnalysisResult(Tower tower, TowerLoads loads, StructuralModel model, List<SolvedCase> cases,
                              List<AzimuthWind> wind, List<LegBaseSweep> sweep, List<LegBaseExtremes> legBases,
                              List<MemberEnvelope> members, List<FoundationEnvelope> foundations,
                              List<HandComparison> hand, BasisResponses responses, int caseCount,
-                             List<AzimuthUtilisation> utilisationByAzimuth) {
+                             List<AzimuthUtilisation> utilisationByAzimuth, List<AutoRestraintPeak> autoRestraints) {
     public AnalysisResult {
         cases = List.copyOf(cases);
         wind = List.copyOf(wind);
@@ -40,6 +43,7 @@ public record AnalysisResult(Tower tower, TowerLoads loads, StructuralModel mode
         foundations = List.copyOf(foundations);
         hand = List.copyOf(hand);
         utilisationByAzimuth = List.copyOf(utilisationByAzimuth);
+        autoRestraints = List.copyOf(autoRestraints);
     }
 
     /** The largest utilisation of any member or footing. */

@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import tetrapod.check.Extreme;
+import tetrapod.common.UnstableStructureException;
 import tetrapod.check.FoundationCheck;
 import tetrapod.check.FoundationEnvelope;
 import tetrapod.check.HandMethod;
@@ -50,6 +51,9 @@ final class Sweep {
     private final FoundationEnvelope[] foundations;
     private final List<HandComparison> hand = new ArrayList<>();
     private final Map<Double, AzimuthUtilisation> byAzimuth = new java.util.TreeMap<>();
+    private final double[] restraintForces;
+    private final double[] restraintPeak;
+    private final String[] restraintPeakCase;
 
     /**
      * @param footing    the footing check, or null when the model gives no foundation
@@ -76,6 +80,10 @@ final class Sweep {
         for (int m = 0; m < members.length; m++) {
             members[m] = MemberEnvelope.empty(frame.members().get(m).id());
         }
+        int autos = model.autoRestraints().size();
+        this.restraintForces = new double[autos];
+        this.restraintPeak = new double[autos];
+        this.restraintPeakCase = new String[autos];
         this.foundations = new FoundationEnvelope[footing == null ? 0 : s];
         for (int k = 0; k < foundations.length; k++) {
             foundations[k] = FoundationEnvelope.empty(supportNodes.get(k));
@@ -88,11 +96,22 @@ final class Sweep {
         return e;
     }
 
-    /** One case and its basis weights (input). */
-    void add(CaseKey key, double[] weights) {
+    /**
+     * One case and its basis weights (input).
+     *
+     * @throws UnstableStructureException when an auto-restraint carries load in this case
+     */
+    void add(CaseKey key, double[] weights) throws UnstableStructureException {
         Combination combination = key.combination();
         Double azimuthDeg = key.azimuthDeg();
         String caseId = key.id();
+        responses.requireLoadCarried(caseId, weights, restraintForces);
+        for (int a = 0; a < restraintForces.length; a++) {
+            if (restraintPeakCase[a] == null || Math.abs(restraintForces[a]) > restraintPeak[a]) {
+                restraintPeak[a] = Math.abs(restraintForces[a]);
+                restraintPeakCase[a] = caseId;
+            }
+        }
         responses.reactions(weights, reactions);
         List<double[]> rows = azimuthDeg == null ? null
                 : perCombination.computeIfAbsent(combination.name(), k -> new ArrayList<>());
@@ -205,6 +224,15 @@ final class Sweep {
     /** The largest member utilisation at each azimuth over every combination with wind, by ascending azimuth. */
     List<AzimuthUtilisation> utilisationByAzimuth() {
         return List.copyOf(byAzimuth.values());
+    }
+
+    /** Every auto-restraint with the largest force it carried over the sweep, in the model's order. */
+    List<AutoRestraintPeak> autoRestraintPeaks() {
+        List<AutoRestraintPeak> out = new ArrayList<>(restraintPeak.length);
+        for (int a = 0; a < restraintPeak.length; a++) {
+            out.add(new AutoRestraintPeak(model.autoRestraints().get(a), restraintPeak[a], restraintPeakCase[a]));
+        }
+        return out;
     }
 
     List<HandComparison> handComparisons() {

@@ -60,8 +60,8 @@ final class NewCommand implements Callable<Integer> {
     @Option(names = "--bracing", description = "x, k or single (default: ${DEFAULT-VALUE}).", defaultValue = "x")
     String bracing;
 
-    @Option(names = "--idealisation", description = "truss or frame (default: ${DEFAULT-VALUE}).",
-            defaultValue = "truss")
+    @Option(names = "--idealisation", description = "continuous-legs, truss or frame (default: ${DEFAULT-VALUE}).",
+            defaultValue = "continuous-legs")
     String idealisation;
 
     @Option(names = "--material", description = "Steel grade (default: ${DEFAULT-VALUE}).", defaultValue = "S355")
@@ -114,14 +114,13 @@ final class NewCommand implements Callable<Integer> {
     }
 
     private static <E extends Enum<E>> E parse(Class<E> type, String text, String option, List<Problem> problems) {
-        for (E e : type.getEnumConstants()) {
-            if (e.name().equalsIgnoreCase(text)) {
-                return e;
-            }
-        }
         List<String> names = new ArrayList<>();
         for (E e : type.getEnumConstants()) {
-            names.add(e.name().toLowerCase(java.util.Locale.ROOT));
+            String name = e.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-');
+            if (name.equalsIgnoreCase(text)) {
+                return e;
+            }
+            names.add(name);
         }
         problems.add(Problem.at(option, "unknown value '" + text + "'; expected one of " + String.join(", ", names)));
         return null;

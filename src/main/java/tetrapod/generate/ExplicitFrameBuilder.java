@@ -65,7 +65,7 @@ public final class ExplicitFrameBuilder {
         Objects.requireNonNull(frame, "frame");
         int before = problems.size();
         if (idealisation == null) {
-            problems.add(Problem.at("idealisation", "is required: \"truss\" or \"frame\""));
+            problems.add(Problem.at("idealisation", "is required: \"continuous-legs\", \"truss\" or \"frame\""));
         }
         Map<Integer, Node> nodes = nodes(frame.nodes(), problems);
         List<Member> members = new ArrayList<>();
@@ -130,7 +130,11 @@ public final class ExplicitFrameBuilder {
             return Optional.empty();
         }
         Role role = spec.role() == null ? Role.GENERAL : spec.role();
-        boolean axialOnly = idealisation != Idealisation.FRAME || !spec.continuous();
+        boolean axialOnly = switch (idealisation) {
+            case TRUSS -> true;
+            case CONTINUOUS_LEGS -> role != Role.LEG && !spec.continuous();
+            case FRAME -> !spec.continuous();
+        };
         return Optional.of(new Member(spec.id(), spec.i(), spec.j(), role, 0, 0, Face.NONE, section.get(), axialOnly,
                 orientation.get()));
     }

@@ -74,7 +74,11 @@ final class FrameAssembler {
         RawMember s = k.source();
         boolean leg = s.role() == Role.LEG;
         Vec3 orientation = leg ? Orientations.leg(from, to) : Orientations.standard(from, to);
-        boolean axialOnly = idealisation == Idealisation.TRUSS || !leg;
+        boolean axialOnly = switch (idealisation) {
+            case TRUSS -> true;
+            case CONTINUOUS_LEGS -> !leg;
+            case FRAME -> false;
+        };
         return new Member(id, k.i(), k.j(), s.role(), s.segment(), s.panel(), s.face(), s.section(), axialOnly,
                 orientation);
     }

@@ -17,7 +17,7 @@ final class GeometryChecks {
     static List<Problem> check(TowerSpec spec) {
         List<Problem> problems = new ArrayList<>();
         if (spec.idealisation() == null) {
-            problems.add(Problem.at("idealisation", "is required: \"truss\" or \"frame\""));
+            problems.add(Problem.at("idealisation", "is required: \"continuous-legs\", \"truss\" or \"frame\""));
         }
         if (spec.supports() == null) {
             problems.add(Problem.at("supports", "is required: \"pinned\" or \"fixed\""));

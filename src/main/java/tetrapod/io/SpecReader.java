@@ -62,7 +62,7 @@ public final class SpecReader {
             root.allowOnly(TOP_KEYS);
             String name = root.requiredText("name");
             String description = root.optionalText("description", "");
-            Idealisation idealisation = Choices.IDEALISATION.optional(root, "idealisation", Idealisation.TRUSS);
+            Idealisation idealisation = Choices.IDEALISATION.optional(root, "idealisation", Idealisation.CONTINUOUS_LEGS);
             MaterialSpec material = root.has("material")
                     ? MaterialReader.read(root.get("material"), root.path("material"), problems)
                     : MaterialSpec.grade(MaterialReader.DEFAULT_GRADE);

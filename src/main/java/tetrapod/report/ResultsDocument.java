@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import tetrapod.analysis.AnalysisResult;
+import tetrapod.analysis.AutoRestraintPeak;
 import tetrapod.analysis.AzimuthUtilisation;
 import tetrapod.generate.SteelMass;
 import tetrapod.generate.Tower;
@@ -62,7 +63,7 @@ public final class ResultsDocument {
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("format", FORMAT);
         doc.put("input", SpecWriter.toMap(spec));
-        doc.put("model", model(result.model()));
+        doc.put("model", model(result.model(), result.autoRestraints()));
         doc.put("cases", result.cases().stream().map(ResultsDocument::solvedCase).toList());
         doc.put("wind", result.wind().stream().map(ResultsDocument::wind).toList());
         doc.put("sweep", sweep(result));
@@ -237,7 +238,7 @@ public final class ResultsDocument {
         return m;
     }
 
-    private static Map<String, Object> model(StructuralModel model) {
+    private static Map<String, Object> model(StructuralModel model, List<AutoRestraintPeak> autoRestraints) {
         Frame frame = model.frame();
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("name", frame.name());
@@ -245,7 +246,7 @@ public final class ResultsDocument {
         m.put("nodes", frame.nodes().stream().map(ResultsDocument::node).toList());
         m.put("members", frame.members().stream().map(member -> member(member, frame)).toList());
         m.put("supports", frame.supports().stream().map(ResultsDocument::support).toList());
-        m.put("autoRestraints", model.autoRestraints().stream().map(ResultsDocument::autoRestraint).toList());
+        m.put("autoRestraints", autoRestraints.stream().map(ResultsDocument::autoRestraint).toList());
         m.put("continuityNodes", model.continuityNodes().stream().map(ResultsDocument::continuity).toList());
         return m;
     }
@@ -293,12 +294,15 @@ public final class ResultsDocument {
         return m;
     }
 
-    private static Map<String, Object> autoRestraint(AutoRestraint r) {
+    private static Map<String, Object> autoRestraint(AutoRestraintPeak peak) {
+        AutoRestraint r = peak.restraint();
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("node", r.node());
         m.put("dof", r.dof());
         m.put("direction", vector(r.direction()));
         m.put("reason", r.reason());
+        m.put("largestForce", clean(peak.force()));
+        m.put("largestForceCase", peak.caseId());
         return m;
     }
 

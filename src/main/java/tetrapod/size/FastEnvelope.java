@@ -87,7 +87,8 @@ public final class FastEnvelope {
      * @param responses the responses to {@code loads.basis()}, in its order (input)
      * @param checker   the member checks of {@code frame}
      */
-    public static Evaluation evaluate(Frame frame, TowerLoads loads, BasisResponses responses, MemberChecker checker) {
+    public static Evaluation evaluate(Frame frame, TowerLoads loads, BasisResponses responses, MemberChecker checker)
+            throws UnstableStructureException {
         return new Sweep(frame, loads, responses, checker).run();
     }
 
@@ -162,7 +163,8 @@ public final class FastEnvelope {
             }
         }
 
-        Evaluation run() {
+        Evaluation run() throws UnstableStructureException {
+            double[] restraintForces = new double[frame.nodes().size() * 6];
             List<String> caseIds = new ArrayList<>();
             List<Double> azimuths = new ArrayList<>();
             double[] weights = new double[loads.basis().size()];
@@ -174,6 +176,7 @@ public final class FastEnvelope {
                     caseIds.add(caseId);
                     azimuths.add(azimuth);
                     loads.basis().weights(combination, azimuth, weights);
+                    responses.requireLoadCarried(caseId, weights, restraintForces);
                     addCase(c++, caseId, azimuth, weights);
                 }
             }

@@ -19,13 +19,20 @@ public final class BasisResponses {
     private final double[][] reactions; // [k][support * 6 + c], frame support order
     private final double[][] endForces; // [k][member * 12 + c]: atI fx..mz then atJ fx..mz
     private final double[][] axial;     // [k][member], N positive in tension
+    private final double[][] restraintForces; // [k][auto-restraint], N or N·m along its direction
+    private final double[][] applied;   // [k][node * 6 + c], the basis load vectors, tower axes
+    private final StructuralModel model;
 
-    private BasisResponses(int supports, int members, double[][] reactions, double[][] endForces, double[][] axial) {
-        this.supports = supports;
-        this.members = members;
+    private BasisResponses(StructuralModel model, double[][] reactions, double[][] endForces, double[][] axial,
+                           double[][] restraintForces, double[][] applied) {
+        this.model = model;
+        this.supports = model.frame().supports().size();
+        this.members = model.frame().members().size();
         this.reactions = reactions;
         this.endForces = endForces;
         this.axial = axial;
+        this.restraintForces = restraintForces;
+        this.applied = applied;
     }
 
     /**
@@ -46,8 +53,15 @@ public final class BasisResponses {
         double[][] reactions = new double[basis.size()][supports * 6];
         double[][] endForces = new double[basis.size()][members * 12];
         double[][] axial = new double[basis.size()][members];
+        int autos = system.model().autoRestraints().size();
+        double[][] restraintForces = new double[basis.size()][autos];
+        double[][] applied = new double[basis.size()][];
         for (int k = 0; k < solutions.size(); k++) {
             Solution s = solutions.get(k);
+            applied[k] = system.nodalLoads(basis.get(k));
+            for (int a = 0; a < autos; a++) {
+                restraintForces[k][a] = s.autoRestraintForce(a);
+            }
             List<NodeForce> r = s.reactions();
             for (int n = 0; n < supports; n++) {
                 for (int c = 0; c < 6; c++) {
@@ -64,7 +78,7 @@ public final class BasisResponses {
                 axial[k][m] = e.axial();
             }
         }
-        return new BasisResponses(supports, members, reactions, endForces, axial);
+        return new BasisResponses(system.model(), reactions, endForces, axial, restraintForces, applied);
     }
 
     /** Number of basis vectors. */
@@ -112,6 +126,26 @@ public final class BasisResponses {
             }
         }
         return out;
+    }
+
+    /**
+     * Refuses the case of {@code weights} (input) when its auto-restraints carry load, as
+     * {@link Solution#requireLoadCarried} does for a case solved in full.
+     *
+     * @param forces output, length ≥ the auto-restraint count: the force (N) or moment (N·m) each
+     *               auto-restraint exerts along its direction in this case
+     * @throws UnstableStructureException see {@link LoadPath#requireCarried}
+     */
+    public void requireLoadCarried(String caseName, double[] weights, double[] forces) throws UnstableStructureException {
+        int autos = model.autoRestraints().size();
+        superpose(restraintForces, weights, forces, autos);
+        for (int a = 0; a < autos; a++) {
+            if (forces[a] != 0) {
+                double[] load = superpose(applied, weights, new double[applied[0].length], applied[0].length);
+                LoadPath.requireCarried(model, caseName, forces, LoadPath.totalLoad(load, model.size()));
+                return;
+            }
+        }
     }
 
     private static double[] superpose(double[][] basis, double[] weights, double[] out, int length) {

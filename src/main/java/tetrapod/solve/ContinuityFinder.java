@@ -9,8 +9,8 @@ import tetrapod.model.Role;
 import tetrapod.model.Vec3;
 
 /**
- * Finds, in a truss, the bracing members that run straight through a node: two collinear members
- * of the same bracing role on opposite sides of a node that no leg reaches (a diagonal split where
+ * Finds the pin-ended bracing members that run straight through a node: two collinear axial-only
+ * members of the same bracing role on opposite sides of a node that no leg reaches (a diagonal split where
  * redundants join it or where it crosses the other diagonal, a horizontal split at a K-node, plan
  * diagonals at their centre). Each such line gets a {@link ContinuityElement}: the real member is
  * continuous there and holds the node across its line by bending, where the pin-jointed model has
@@ -25,15 +25,19 @@ final class ContinuityFinder {
 
     private ContinuityFinder() { }
 
-    static List<ContinuityElement> find(Frame frame, Map<Integer, Integer> nodeIndex) {
+    /** @param memberIsBeam per member index, true for a beam-column (its own bending holds the node) */
+    static List<ContinuityElement> find(Frame frame, Map<Integer, Integer> nodeIndex, boolean[] memberIsBeam) {
         int nodes = frame.nodes().size();
         List<List<Member>> atNode = new ArrayList<>(nodes);
         for (int n = 0; n < nodes; n++) {
             atNode.add(new ArrayList<>());
         }
-        for (Member m : frame.members()) {
-            atNode.get(nodeIndex.get(m.i())).add(m);
-            atNode.get(nodeIndex.get(m.j())).add(m);
+        for (int k = 0; k < frame.members().size(); k++) {
+            Member m = frame.members().get(k);
+            if (!memberIsBeam[k] || m.role() == Role.LEG) { // a beam leg still marks its nodes as leg nodes
+                atNode.get(nodeIndex.get(m.i())).add(m);
+                atNode.get(nodeIndex.get(m.j())).add(m);
+            }
         }
         List<ContinuityElement> out = new ArrayList<>();
         for (int n = 0; n < nodes; n++) {

@@ -4,19 +4,23 @@ import tetrapod.model.NodeForce;
 import java.util.List;
 import tetrapod.model.Node;
 
-/** The global equilibrium check of a solution: loads + reactions + auto-restraint forces = 0. */
+/**
+ * The global equilibrium check of a solution as the user reads it: applied loads against the
+ * support reactions alone. Auto-restraint forces never count as supports: a load that went into
+ * one shows here as a residual (and is refused by {@link LoadPath} before that).
+ */
 final class Equilibrium {
 
     private Equilibrium() { }
 
     /**
-     * max(|ΣF|, |ΣM₀|/L) / Σ_loads(|F| + |M|/L), where the sums run over loads, support reactions
-     * and auto-restraint forces, M₀ are moments about the origin (r × F + M) and L the structure
-     * size; 0 when there is no load.
+     * max(|ΣF|, |ΣM₀|/L) / Σ_loads(|F| + |M|/L), where the sums run over loads and support
+     * reactions, M₀ are moments about the origin (r × F + M) and L the structure size; 0 when
+     * there is no load.
      *
      * @param applied nodes × 6 load components, tower axes (input)
      */
-    static double error(StructuralModel model, double[] applied, List<NodeForce> reactions, List<NodeForce> autoForces) {
+    static double error(StructuralModel model, double[] applied, List<NodeForce> reactions) {
         List<Node> nodes = model.frame().nodes();
         double length = model.size();
         double[] sum = new double[6];
@@ -30,9 +34,6 @@ final class Equilibrium {
         }
         for (NodeForce r : reactions) {
             accumulate(sum, nodes.get(model.nodeIndex(r.node())), components(r));
-        }
-        for (NodeForce a : autoForces) {
-            accumulate(sum, nodes.get(model.nodeIndex(a.node())), components(a));
         }
         if (scale == 0) {
             return 0;

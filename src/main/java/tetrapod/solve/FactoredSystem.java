@@ -124,10 +124,12 @@ public final class FactoredSystem {
             uf = refined;
             response = better;
         }
-        return new Solution(model, load, response.displacement, response.reactions, response.autoForces, response.error);
+        return new Solution(model, load, response.displacement, response.reactions, response.autoForces,
+                response.alongRestraints, LoadPath.totalLoad(applied, model.size()), response.error);
     }
 
-    private record Response(double[] displacement, List<NodeForce> reactions, List<NodeForce> autoForces, double error) { }
+    private record Response(double[] displacement, List<NodeForce> reactions, List<NodeForce> autoForces,
+                            double[] alongRestraints, double error) { }
 
     private Response respond(LoadVector load, double[] applied, double[] uf, double[] fr) throws UnstableStructureException {
         DofNumbering numbering = model.numbering();
@@ -169,12 +171,17 @@ public final class FactoredSystem {
                 autoForces.add(nodeForce(nodes.get(n).id(), constraints.toGlobal(n, auto[n])));
             }
         }
-        double error = Equilibrium.error(model, applied, reactions, autoForces);
-        return new Response(displacement, reactions, autoForces, error);
+        int[] rows = model.autoRestraintRows();
+        double[] alongRestraints = new double[rows.length];
+        for (int a = 0; a < rows.length; a++) {
+            alongRestraints[a] = restrainedForce[rows[a]] - fr[rows[a]];
+        }
+        double error = Equilibrium.error(model, applied, reactions);
+        return new Response(displacement, reactions, autoForces, alongRestraints, error);
     }
 
     /** Sums the load vector into a nodes × 6 array in tower axes. */
-    private double[] nodalLoads(LoadVector load) {
+    double[] nodalLoads(LoadVector load) {
         double[] applied = new double[model.frame().nodes().size() * 6];
         boolean truss = model.frame().idealisation() == Idealisation.TRUSS;
         for (NodeForce f : load.loads()) {

@@ -11,7 +11,6 @@ import org.ejml.dense.row.SingularOps_DDRM;
 import tetrapod.common.UnstableStructureException;
 import tetrapod.common.UnstableStructureException.FreeDof;
 import tetrapod.model.Frame;
-import tetrapod.model.Idealisation;
 import tetrapod.model.Node;
 import tetrapod.model.Support;
 
@@ -210,7 +209,7 @@ final class MechanismDiagnosis {
      */
     static boolean supportsStopRigidMotion(StructuralModel model) {
         Frame frame = model.frame();
-        boolean isFrame = frame.idealisation() == Idealisation.FRAME;
+        boolean isFrame = frame.idealisation().hasRotations();
         double[] c = new double[3];
         for (Node n : frame.nodes()) {
             c[0] += n.x() / frame.nodes().size();

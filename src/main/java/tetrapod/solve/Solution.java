@@ -4,6 +4,7 @@ import tetrapod.model.NodeForce;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
+import tetrapod.common.UnstableStructureException;
 import tetrapod.model.Node;
 
 /**
@@ -32,16 +33,43 @@ public final class Solution {
     private final double[] displacement; // nodes × 6, global
     private final List<NodeForce> reactions;
     private final List<NodeForce> autoRestraintForces;
+    private final double[] alongRestraints; // per model.autoRestraints(), N or N·m along its direction
+    private final double totalLoad;
     private final double equilibriumError;
 
     Solution(StructuralModel model, LoadVector loads, double[] displacement, List<NodeForce> reactions,
-             List<NodeForce> autoRestraintForces, double equilibriumError) {
+             List<NodeForce> autoRestraintForces, double[] alongRestraints, double totalLoad, double equilibriumError) {
         this.model = model;
         this.loads = loads;
         this.displacement = displacement;
         this.reactions = List.copyOf(reactions);
         this.autoRestraintForces = List.copyOf(autoRestraintForces);
+        this.alongRestraints = alongRestraints;
+        this.totalLoad = totalLoad;
         this.equilibriumError = equilibriumError;
+    }
+
+    /**
+     * The force (N) or moment (N·m) that auto-restraint {@code index} (in the order of
+     * {@link StructuralModel#autoRestraints()}) exerts along its direction.
+     */
+    public double autoRestraintForce(int index) {
+        return alongRestraints[index];
+    }
+
+    /** The applied load's size Σ|F| + Σ|M|/L over nodes and directions ({@link LoadPath#totalLoad}), N. */
+    public double totalLoad() {
+        return totalLoad;
+    }
+
+    /**
+     * Refuses this solution when an auto-restraint carries load (see {@link LoadPath}).
+     *
+     * @param caseName the case, for the message
+     * @throws UnstableStructureException naming the node, direction, force and the fix
+     */
+    public void requireLoadCarried(String caseName) throws UnstableStructureException {
+        LoadPath.requireCarried(model, caseName, alongRestraints, totalLoad);
     }
 
     /** The load vector this solution answers. */
@@ -123,7 +151,7 @@ public final class Solution {
     }
 
     /**
-     * Global equilibrium residual of loads, support reactions and auto-restraint forces:
+     * Global equilibrium residual of the loads against the support reactions alone:
      * max(|ΣF|, |ΣM₀|/L) / Σ(|F| + |M|/L) over the loads, where M₀ are moments about the origin and
      * L is the structure size ({@link StructuralModel#size()}); 0 when there is no load.
      */

@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import tetrapod.model.Frame;
-import tetrapod.model.Idealisation;
 import tetrapod.model.Member;
 import tetrapod.model.Restraint;
 import tetrapod.model.Support;
@@ -18,9 +17,9 @@ import tetrapod.model.Vec3;
  *     redundant, a K-node) has no stiffness normal to that plane: that translation is eliminated;
  * <li>such a node whose members all lie on one line (a node splitting a straight leg) has no
  *     stiffness across the line: both perpendicular translations are eliminated;
- * <li>in the frame idealisation, a node where only pin-ended members meet has no rotational
+ * <li>with six DOFs per node, a node where only pin-ended members meet has no rotational
  *     stiffness: rx, ry and rz are eliminated;
- * <li>in the frame idealisation, a straight chain of beam-columns (a leg between kinks) joined
+ * <li>with six DOFs per node, a straight chain of beam-columns (a leg between kinks) joined
  *     only by pin-ended members and pinned supports can spin about its own axis without
  *     resistance (torsion stiffness GJ only links the chain's nodes to each other): the rotation
  *     about the axis is eliminated at one node of the chain (its supported node if it has one).
@@ -60,7 +59,7 @@ final class StabilityInspector {
     static NodeConstraints inspect(Frame frame, Map<Integer, Integer> nodeIndex, boolean[] memberIsBeam,
                                    boolean[] held) {
         int nodes = frame.nodes().size();
-        boolean isFrame = frame.idealisation() == Idealisation.FRAME;
+        boolean isFrame = frame.idealisation().hasRotations();
         List<List<Vec3>> directions = new ArrayList<>(nodes);
         boolean[] hasBeam = new boolean[nodes];
         for (int n = 0; n < nodes; n++) {
@@ -92,11 +91,13 @@ final class StabilityInspector {
         List<AutoRestraint> autos = new ArrayList<>();
         for (int n = 0; n < nodes; n++) {
             List<Vec3> dirs = directions.get(n);
-            if (dirs.isEmpty() || hasBeam[n] || held[n]) {
+            if (dirs.isEmpty() || hasBeam[n]) {
                 continue; // unconnected nodes are left for the mechanism diagnosis
             }
             int id = frame.nodes().get(n).id();
-            restrainTranslations(id, dirs, kinds[n], n, bases, autos);
+            if (!held[n]) {
+                restrainTranslations(id, dirs, kinds[n], n, bases, autos);
+            }
             if (isFrame) {
                 for (int k = 3; k < 6; k++) {
                     if (kinds[n][k] == NodeConstraints.FREE) {

@@ -23,9 +23,11 @@ import tetrapod.model.Vec3;
  * Immutable; build it with {@link #of(Frame)}.
  *
  * <p><b>Idealisations.</b> {@link Idealisation#TRUSS}: three translations per node, every member
- * axial only. {@link Idealisation#FRAME}: six DOFs per node; members with {@code axialOnly == false}
- * are 3D Euler–Bernoulli beam-columns (axial, St Venant torsion, biaxial bending), the others
- * pin-ended bars contributing translational stiffness only.
+ * axial only. {@link Idealisation#CONTINUOUS_LEGS} and {@link Idealisation#FRAME}: six DOFs per
+ * node; members with {@code axialOnly == false} are 3D Euler–Bernoulli beam-columns (axial, St
+ * Venant torsion, biaxial bending), the others pin-ended bars contributing translational stiffness
+ * only. Straight pin-ended bracing split at a node is held across its line in every idealisation
+ * ({@link ContinuityElement}).
  *
  * <p><b>Member axes.</b> Local x runs from node i to node j, local y is {@code member.orientation()}
  * (made exactly perpendicular to x), z = x × y. Iy, the second moment about local y, is
@@ -43,12 +45,14 @@ public final class StructuralModel {
     private final List<ContinuityElement> continuity;
     private final NodeConstraints constraints;
     private final DofNumbering numbering;
+    private final int[] autoRestraintRows;
     private final OrderingSummary ordering;
     private final double size;
 
     private StructuralModel(Frame frame, Map<Integer, Integer> nodeIndex, Map<Integer, Integer> memberIndex,
                             List<MemberElement> elements, List<ContinuityElement> continuity,
                             NodeConstraints constraints, DofNumbering numbering, OrderingSummary ordering, double size) {
+        this.autoRestraintRows = AutoRestraintRows.of(frame, constraints, numbering);
         this.frame = frame;
         this.nodeIndex = nodeIndex;
         this.memberIndex = memberIndex;
@@ -80,7 +84,7 @@ public final class StructuralModel {
         if (nodeIndex.size() != frame.nodes().size()) {
             throw new IllegalArgumentException("frame " + frame.name() + " has duplicate node ids");
         }
-        boolean isFrame = frame.idealisation() == Idealisation.FRAME;
+        boolean isFrame = frame.idealisation().hasRotations();
         List<MemberElement> elements = new ArrayList<>(frame.members().size());
         Map<Integer, Integer> memberIndex = new HashMap<>(frame.members().size() * 2);
         boolean[] beam = new boolean[frame.members().size()];
@@ -101,7 +105,7 @@ public final class StructuralModel {
                 throw new IllegalArgumentException("node " + s.node() + " has two supports");
             }
         }
-        List<ContinuityElement> continuity = isFrame ? List.of() : ContinuityFinder.find(frame, nodeIndex);
+        List<ContinuityElement> continuity = ContinuityFinder.find(frame, nodeIndex, beam);
         boolean[] held = new boolean[frame.nodes().size()];
         continuity.forEach(c -> held[c.a()] = true);
         NodeConstraints constraints = StabilityInspector.inspect(frame, nodeIndex, beam, held);
@@ -218,6 +222,14 @@ public final class StructuralModel {
     /** Restraints the solver added for the lattice model's own instabilities, in node order. */
     public List<AutoRestraint> autoRestraints() {
         return constraints.autoRestraints();
+    }
+
+    /**
+     * The restrained row (see {@link DofNumbering}) of each auto-restraint, in the order of
+     * {@link #autoRestraints()}.
+     */
+    int[] autoRestraintRows() {
+        return autoRestraintRows;
     }
 
     /** Number of unknowns (free degrees of freedom). */

@@ -42,10 +42,15 @@ class MemberPropertiesTest {
     }
 
     @Test
-    void frameLegsAreBeamColumnsAndBracingIsAxial() throws Exception {
-        for (Member m : prismatic(Idealisation.FRAME).members()) {
+    void continuousLegsAreBeamColumnsAndBracingIsAxial() throws Exception {
+        for (Member m : prismatic(Idealisation.CONTINUOUS_LEGS).members()) {
             assertEquals(m.role() != Role.LEG, m.axialOnly(), m.role() + " member " + m.id());
         }
+    }
+
+    @Test
+    void inAFrameEveryMemberIsABeamColumn() throws Exception {
+        assertTrue(prismatic(Idealisation.FRAME).members().stream().noneMatch(Member::axialOnly));
     }
 
     @Test

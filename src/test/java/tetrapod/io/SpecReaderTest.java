@@ -49,7 +49,7 @@ class SpecReaderTest {
     void ridgeLookoutReadsAsWritten() throws BadInputException {
         TowerSpec spec = model("ridge-lookout-square.json");
         assertEquals("Ridge lookout tower", spec.name());
-        assertEquals(Idealisation.TRUSS, spec.idealisation());
+        assertEquals(Idealisation.CONTINUOUS_LEGS, spec.idealisation());
         assertEquals(6.0, spec.base().widthX());
         assertEquals(6.0, spec.base().widthY());
         assertEquals(3, spec.segments().size());
@@ -91,7 +91,7 @@ class SpecReaderTest {
                 "{ \"height\": 8.0, \"panels\": 4, \"bracing\": \"single\", \"sections\": { \"leg\": \"L100x10\", \"diagonal\": \"L60x6\", \"horizontal\": \"L60x6\" } }",
                 ""));
         assertEquals("", minimal.description());
-        assertEquals(Idealisation.TRUSS, minimal.idealisation());
+        assertEquals(Idealisation.CONTINUOUS_LEGS, minimal.idealisation(), "the default (issue 11)");
         assertEquals(MaterialSpec.grade("S355"), minimal.material());
         assertEquals(SupportType.PINNED, minimal.supports());
         assertEquals(0.10, minimal.connectionAllowance());

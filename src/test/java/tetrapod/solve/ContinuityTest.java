@@ -86,13 +86,22 @@ class ContinuityTest {
     }
 
     @Test
-    void aFrameNeedsNoContinuity() {
-        Frame frame = new Frame("frame", Idealisation.FRAME, TestFrames.STEEL,
-                List.of(new Node(1, 0, 0, 0), new Node(2, 1, 0, 0), new Node(3, 4, 0, 0), new Node(4, 1, 2, 0)),
+    void beamColumnBracingNeedsNoContinuityButPinEndedBracingKeepsItWithSixDofs() {
+        List<Node> nodes = List.of(new Node(1, 0, 0, 0), new Node(2, 1, 0, 0), new Node(3, 4, 0, 0), new Node(4, 1, 2, 0));
+        List<Support> supports = List.of(new Support(1, Restraint.FIXED), new Support(3, Restraint.FIXED),
+                new Support(4, Restraint.FIXED));
+        Frame beams = new Frame("beams", Idealisation.FRAME, TestFrames.STEEL, nodes,
+                List.of(diagonalBeam(1, 1, 2), diagonalBeam(2, 2, 3),
+                        member(3, 2, 4, Role.REDUNDANT, REDUNDANT)), supports);
+        assertFalse(StructuralModel.of(beams).continuityNodes().iterator().hasNext(), "the diagonal bends by itself");
+        Frame pinned = new Frame("pin-ended", Idealisation.CONTINUOUS_LEGS, TestFrames.STEEL, nodes,
                 List.of(member(1, 1, 2, Role.DIAGONAL, DIAGONAL), member(2, 2, 3, Role.DIAGONAL, DIAGONAL),
-                        member(3, 2, 4, Role.REDUNDANT, REDUNDANT)),
-                List.of(new Support(1, Restraint.FIXED), new Support(3, Restraint.FIXED), new Support(4, Restraint.FIXED)));
-        assertFalse(StructuralModel.of(frame).continuityNodes().iterator().hasNext());
+                        member(3, 2, 4, Role.REDUNDANT, REDUNDANT)), supports);
+        assertEquals(List.of(2), StructuralModel.of(pinned).continuityNodes().stream().map(ContinuityNode::node).toList());
+    }
+
+    private static Member diagonalBeam(int id, int i, int j) {
+        return new Member(id, i, j, Role.DIAGONAL, 0, 0, Face.NONE, DIAGONAL, false, Vec3.Z);
     }
 
     private static Member member(int id, int i, int j, Role role, Section s) {

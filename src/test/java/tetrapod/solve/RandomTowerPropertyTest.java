@@ -64,11 +64,46 @@ class RandomTowerPropertyTest {
         return new Case(seed, frame, randomLoads(frame, random, "F1"), randomLoads(frame, random, "F2"));
     }
 
+    /**
+     * Random loads at nodes that can carry them in every direction, judged from the geometry here
+     * (not from the solver's list): a beam-column reaches the node or its members span space.
+     * Moments only where a beam-column reaches and every support is fixed (on pinned supports a
+     * straight leg could spin about its own axis). A load the model cannot carry is refused by
+     * {@link LoadPath}, tested elsewhere.
+     */
     private static LoadVector randomLoads(Frame frame, Random random, String name) {
         List<NodeForce> loads = new ArrayList<>();
-        boolean moments = frame.idealisation() == Idealisation.FRAME;
+        boolean fixed = frame.supports().stream().allMatch(s -> s.restraint() == Restraint.FIXED);
+        List<Node> carrying = new ArrayList<>();
+        List<Boolean> beamReached = new ArrayList<>();
+        for (Node n : frame.nodes()) {
+            double[] m = new double[9];
+            boolean beam = false;
+            for (var member : frame.members()) {
+                if (member.i() != n.id() && member.j() != n.id()) {
+                    continue;
+                }
+                beam |= frame.idealisation().hasRotations() && !member.axialOnly();
+                Node other = frame.nodes().get(frame.nodeIndex().get(member.i() == n.id() ? member.j() : member.i()));
+                double[] e = {other.x() - n.x(), other.y() - n.y(), other.z() - n.z()};
+                double len = Math.sqrt(e[0] * e[0] + e[1] * e[1] + e[2] * e[2]);
+                for (int r = 0; r < 3; r++) {
+                    for (int c = 0; c < 3; c++) {
+                        m[3 * r + c] += e[r] * e[c] / (len * len);
+                    }
+                }
+            }
+            double det = m[0] * (m[4] * m[8] - m[5] * m[7]) - m[1] * (m[3] * m[8] - m[5] * m[6])
+                    + m[2] * (m[3] * m[7] - m[4] * m[6]);
+            if (beam || det > 1e-6) {
+                carrying.add(n);
+                beamReached.add(beam);
+            }
+        }
         for (int k = 0; k < 6; k++) {
-            Node n = frame.nodes().get(random.nextInt(frame.nodes().size()));
+            int pick = random.nextInt(carrying.size());
+            Node n = carrying.get(pick);
+            boolean moments = fixed && beamReached.get(pick);
             loads.add(new NodeForce(n.id(), 1e4 * random.nextGaussian(), 1e4 * random.nextGaussian(),
                     1e4 * random.nextGaussian(), moments ? 1e3 * random.nextGaussian() : 0,
                     moments ? 1e3 * random.nextGaussian() : 0, moments ? 1e3 * random.nextGaussian() : 0));

@@ -36,29 +36,50 @@ class StabilityTest {
         return b.minus(a).cross(c.minus(a)).unit();
     }
 
+    /**
+     * A "V": two pin-ended bars from two pinned supports meet at node 3 in the plane through
+     * (0,0,0), (4,0,0), (2,1,3), whose normal (4,0,0) × (2,1,3) = (0, −12, 4) is no global axis.
+     */
+    private static Frame tiltedV(Idealisation idealisation) {
+        var bar = TestFrames.section("bar", 2.0e-3, 1e-6, 1e-6, 1e-8);
+        return TestFrames.frame("tilted V", idealisation, TestFrames.STEEL,
+                List.of(new Node(1, 0, 0, 0), new Node(2, 4, 0, 0), new Node(3, 2, 1, 3)),
+                List.of(TestFrames.bar(1, 1, 3, bar), TestFrames.bar(2, 2, 3, bar)),
+                List.of(new Support(1, Restraint.PINNED), new Support(2, Restraint.PINNED)));
+    }
+
+    private static final Vec3 TILTED_NORMAL = new Vec3(0, -12, 4).unit();
+
     @Test
-    void midpointOfARedundantInATaperedFaceIsRestrainedNormalToTheFace() throws Exception {
-        // A frame: its bracing is pin-ended with no continuity, so the node has no stiffness out of plane.
+    void whereBarsMeetInATiltedPlaneTheNodeIsRestrainedNormalToIt() throws Exception {
+        for (Idealisation idealisation : Idealisation.values()) {
+            StructuralModel model = StructuralModel.of(tiltedV(idealisation));
+            List<AutoRestraint> translations = model.autoRestraints().stream().filter(a -> !a.isRotation()).toList();
+            assertEquals(1, translations.size(), idealisation + ": one translation restrained");
+            AutoRestraint r = translations.get(0);
+            assertEquals(3, r.node());
+            assertEquals(AutoRestraint.SKEW, r.dof(), "the normal is no global axis");
+            assertEquals(1, Math.abs(r.direction().dot(TILTED_NORMAL)), 1e-12, "restrained along the plane's normal");
+            assertEquals(StabilityInspector.PLANE_REASON, r.reason());
+            long rotations = model.autoRestraints().stream().filter(a -> a.node() == 3 && a.isRotation()).count();
+            assertEquals(idealisation.hasRotations() ? 3 : 0, rotations, "only pin-ended bars meet at node 3");
+        }
+    }
+
+    @Test
+    void withSixDofsTheRedundantMidpointIsHeldByTheContinuousHorizontal() throws Exception {
+        // legs beam-columns, bracing pin-ended (continuous legs): the bracing continuity stays
         TowerFixture t = new TowerFixture(Idealisation.FRAME, 3, 6, 3, 12).redundantInFirstPanel();
         Frame frame = t.build();
         StructuralModel model = StructuralModel.of(frame);
-        Vec3 normal = faceNormal(frame, t);
-        // the redundant's node splits the bottom horizontal of face 0 at mid-length
         Vec3 mid = position(frame, t.baseCorners()[0]).lerp(position(frame, t.baseCorners()[1]), 0.5);
         int redundantNode = frame.nodes().stream().filter(n -> n.position().distanceTo(mid) < 1e-12).findFirst().orElseThrow().id();
-        List<AutoRestraint> atNode = model.autoRestraints().stream()
-                .filter(a -> a.node() == redundantNode && !a.isRotation()).toList();
-        assertEquals(1, atNode.size(), "one translation restrained, normal to the face");
-        AutoRestraint r = atNode.get(0);
-        assertEquals(AutoRestraint.SKEW, r.dof(), "the tapered face's normal is not a global axis");
-        assertEquals(1, Math.abs(r.direction().dot(normal)), 1e-12, "restrained along the face normal");
-        assertEquals(StabilityInspector.PLANE_REASON, r.reason());
-
-        // the structure solves, the restraint carries nothing under loads at the main nodes
-        Solution s = Solver.factor(model).solve(new LoadVector("wind", List.of(
-                NodeForce.force(t.topCorners()[0], 5e3, 2e3, 0), NodeForce.force(t.topCorners()[2], 5e3, 2e3, 0))));
-        assertEquals(0, s.largestAutoRestraintForce(), 1e-6);
-        assertTrue(s.equilibriumError() < 1e-9);
+        assertTrue(model.autoRestraints().stream().noneMatch(a -> a.node() == redundantNode && !a.isRotation()));
+        assertEquals(3, model.autoRestraints().stream().filter(a -> a.node() == redundantNode && a.isRotation()).count(),
+                "its rotations, which no member reaches, are restrained");
+        Solution s = Solver.factor(model).solve(new LoadVector("weight", List.of(NodeForce.force(redundantNode, 0, 0, -1e3))));
+        assertEquals(0, s.largestAutoRestraintForce(), 1e-9);
+        assertEquals(1e3, s.reactions().stream().mapToDouble(NodeForce::fz).sum(), 1e-6, "statics: ΣRz = −ΣFz");
     }
 
     @Test
@@ -77,17 +98,47 @@ class StabilityTest {
     }
 
     @Test
-    void aLoadAlongAnAutoRestrainedDirectionGoesIntoTheRestraintAndIsReported() throws Exception {
-        TowerFixture t = new TowerFixture(Idealisation.FRAME, 2, 4, 4, 8); // prismatic: crossing nodes' normals are axes
-        Frame frame = t.build();
-        StructuralModel model = StructuralModel.of(frame);
-        AutoRestraint r = model.autoRestraints().stream().filter(a -> !a.isRotation()).findFirst().orElseThrow();
-        assertFalse(r.isSkew(), "prismatic face: the normal is a global axis");
+    void aLoadAlongAnAutoRestrainedDirectionIsRefusedNotLost() throws Exception {
+        StructuralModel model = StructuralModel.of(tiltedV(Idealisation.TRUSS));
+        FactoredSystem system = Solver.factor(model);
         double p = 1234;
-        Solution s = Solver.factor(model).solve(new LoadVector("normal to face", List.of(
-                NodeForce.force(r.node(), p * r.direction().x(), p * r.direction().y(), p * r.direction().z()))));
-        assertEquals(p, s.largestAutoRestraintForce(), 1e-9 * p, "the lattice cannot carry it: the restraint takes it all");
-        assertTrue(s.equilibriumError() < 1e-9);
+        Vec3 f = TILTED_NORMAL.times(p);
+        Solution s = system.solve(new LoadVector("normal", List.of(NodeForce.force(3, f.x(), f.y(), f.z()))));
+        assertEquals(p, s.largestAutoRestraintForce(), 1e-9 * p, "the lattice cannot carry it");
+        assertEquals(p, Math.abs(s.autoRestraintForce(0)), 1e-9 * p);
+        // statics on the loads and the supports alone: the supports carry nothing, so the residual is
+        // |F| / Σ|F|, and |F| / Σ|F| ≥ 1/√3 for any single force
+        assertTrue(s.equilibriumError() > 0.5, "automatic restraints never count as supports: " + s.equilibriumError());
+        UnstableStructureException e = assertThrows(UnstableStructureException.class, () -> s.requireLoadCarried("normal"));
+        assertTrue(e.getMessage().contains("node 3") && e.getMessage().contains("'normal'")
+                && e.getMessage().contains("1.234 kN") && e.getMessage().contains("continuous-legs"), e.getMessage());
+        assertEquals(List.of(new UnstableStructureException.FreeDof(3, AutoRestraint.SKEW)), e.freeDofs());
+    }
+
+    @Test
+    void theLimitIsOneMillionthOfTheCaseLoad() throws Exception {
+        StructuralModel model = StructuralModel.of(tiltedV(Idealisation.TRUSS));
+        FactoredSystem system = Solver.factor(model);
+        Vec3 inPlane = new Vec3(0, 1, 3).unit(); // (0, 1, 3) · (0, −12, 4) = 0
+        // Σ|F| ≈ 1.26e4 N (in-plane part 1e4 N along (0, 1, 3)/√10), so the limit is ≈ 0.0126 N:
+        // a normal part of 0.005 N is kept, one of 0.02 N is refused
+        double[] shares = {0, 0.5e-6, 2e-6};
+        boolean[] refused = {false, false, true};
+        for (int k = 0; k < shares.length; k++) {
+            double share = shares[k];
+            // Σ|F| of the load below, with the normal part `share` of the in-plane part's size
+            Vec3 f = inPlane.times(1e4).plus(TILTED_NORMAL.times(1e4 * share));
+            Solution s = system.solve(new LoadVector("mostly in plane", List.of(NodeForce.force(3, f.x(), f.y(), f.z()))));
+            double total = Math.abs(f.x()) + Math.abs(f.y()) + Math.abs(f.z());
+            assertEquals(total, s.totalLoad(), 1e-12 * total, "Σ|F| over nodes and directions");
+            assertEquals(refused[k], 1e4 * share > LoadPath.LOST_LOAD_RATIO * total, "the case is on the intended side");
+            if (refused[k]) {
+                assertThrows(UnstableStructureException.class, () -> s.requireLoadCarried("c"), "share " + share);
+            } else {
+                s.requireLoadCarried("c");
+                assertTrue(s.equilibriumError() < 1e-6, "share " + share + ": " + s.equilibriumError());
+            }
+        }
     }
 
     @Test
