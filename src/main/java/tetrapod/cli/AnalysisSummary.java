@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import tetrapod.analysis.Analysis;
 import tetrapod.analysis.AnalysisResult;
+import tetrapod.analysis.AutoRestraintPeak;
 import tetrapod.analysis.HandComparison;
 import tetrapod.analysis.LegBaseExtremes;
 import tetrapod.analysis.SolvedCase;
@@ -29,8 +30,10 @@ final class AnalysisSummary {
                 frame.name(), frame.idealisation().jsonName(), frame.nodes().size(), frame.members().size(),
                 r.caseCount(), r.loads().combinations().size(), CaseKey.degrees(r.loads().sweepStep()));
         if (!r.model().autoRestraints().isEmpty()) {
-            out.printf(Locale.ROOT, "auto-restrained: %d directions where the lattice model has no stiffness "
-                    + "(listed in results.json model.autoRestraints)%n", r.model().autoRestraints().size());
+            double largest = r.autoRestraints().stream().mapToDouble(AutoRestraintPeak::force).max().orElse(0);
+            out.printf(Locale.ROOT, "auto-restrained: %d directions where the lattice model has no stiffness; none "
+                    + "carries load (largest %.1e N or N·m over every case; results.json model.autoRestraints)%n",
+                    r.model().autoRestraints().size(), largest);
         }
         if (!r.model().continuityNodes().isEmpty()) {
             out.printf(Locale.ROOT, "continuity: %d bracing nodes held across their member by its bending stiffness "
@@ -44,7 +47,8 @@ final class AnalysisSummary {
         for (SolvedCase c : r.cases()) {
             worst = Math.max(worst, c.solution().equilibriumError());
         }
-        out.printf(Locale.ROOT, "equilibrium: largest residual of the %d cases solved in full: %.1e%n",
+        out.printf(Locale.ROOT, "equilibrium of the applied loads against the support reactions alone: largest "
+                + "residual of the %d cases solved in full: %.1e%n",
                 r.cases().size(), worst);
         double max = r.maxUtilisation();
         out.printf(Locale.ROOT, "%s: largest utilisation %.3f%n", max > 1.0 ? "OVERSTRESSED" : "all checks pass", max);

@@ -21,18 +21,32 @@ final class MethodNotesSection implements Section {
         return "Method notes";
     }
 
+    private static String idealisation(String name) {
+        return switch (name) {
+            case "truss" -> "pin-jointed members carrying axial force only";
+            case "frame" -> "every member a beam-column with rigid joints";
+            default -> "legs continuous beam-columns through every leg node, all other members pin-ended";
+        };
+    }
+
     @Override
     public void write(Html out, ReportInput ri) {
         Results r = ri.results();
         Map<String, Object> in = r.input();
         out.element("h3", "Analysis");
         out.p("Linear elastic, first-order, small-displacement analysis of the 3D " + r.idealisation() + " model ("
-                + ("frame".equals(r.idealisation()) ? "legs continuous beam-columns, bracing pin-ended"
-                : "pin-jointed members carrying axial force only") + "). The stiffness matrix is assembled and "
+                + idealisation(r.idealisation()) + "). The stiffness matrix is assembled and "
                 + "factorised once; every combination at every azimuth of the sweep is formed by superposing the "
                 + "responses to a few load vectors that do not depend on the azimuth (exact, not an approximation), "
                 + "and the cases reported in full are solved directly. Second-order effects, buckling of the tower "
                 + "as a whole and dynamic response are not analysed.");
+        out.p(String.format(java.util.Locale.ROOT, "Every load reaches the supports: %d direction%s in which the "
+                + "lattice model has no stiffness (listed in results.json) %s held by the solver, and an analysis in "
+                + "which such a restraint carries more than 1e-6 of a case's total load stops as an unstable structure. "
+                + "The largest force any of them carried here is %.1e N (round-off). Equilibrium is checked on the "
+                + "applied loads against the support reactions alone.", r.autoRestraintCount(),
+                r.autoRestraintCount() == 1 ? "" : "s", r.autoRestraintCount() == 1 ? "is" : "are",
+                r.largestAutoRestraintForce()));
         out.element("h3", "Loads");
         Map<String, Object> wind = Tree.mapOrEmpty(Tree.mapOrEmpty(in, "loads"), "wind");
         out.p("Self-weight: each member's mass per metre × length × g × (1 + connection allowance), half to each end. "

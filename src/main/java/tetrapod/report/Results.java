@@ -134,6 +134,20 @@ public final class Results {
         return worst;
     }
 
+    /** Number of directions the solver restrained automatically (no stiffness in the lattice model). */
+    public int autoRestraintCount() {
+        return Tree.maps(Tree.map(doc, "model"), "autoRestraints").size();
+    }
+
+    /** The largest force (N, or N·m for a rotation) any automatic restraint carried over the sweep. */
+    public double largestAutoRestraintForce() {
+        double worst = 0;
+        for (Map<String, Object> a : Tree.maps(Tree.map(doc, "model"), "autoRestraints")) {
+            worst = Math.max(worst, Tree.num(a, "largestForce"));
+        }
+        return worst;
+    }
+
     public List<CheckRow> checks() {
         List<CheckRow> out = new ArrayList<>();
         for (Map<String, Object> c : Tree.maps(doc, "checks")) {

@@ -40,7 +40,7 @@ final class SummarySection implements Section {
                 .close("div");
         boolean swept = !r.legSweeps().isEmpty();
         out.p(String.format(java.util.Locale.ROOT, "%s: %s model, %d nodes, %d members; %d load case%s solved in "
-                        + "full (largest equilibrium residual %.1e)%s.", r.name(), r.idealisation(), r.nodeCount(),
+                        + "full (largest equilibrium residual of the applied loads against the support reactions alone %.1e)%s.", r.name(), r.idealisation(), r.nodeCount(),
                 r.members().size(), r.caseCountInFull(), r.caseCountInFull() == 1 ? "" : "s", r.worstEquilibriumError(),
                 swept ? r.sweepStepDeg().map(s -> "; every combination with wind swept round the tower in steps of "
                         + Format.degrees(s) + "°").orElse("") : "; no wind"));
