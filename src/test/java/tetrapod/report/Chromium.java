@@ -1,7 +1,5 @@
 package tetrapod.report;
 
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
 import java.io.IOException;
 import java.net.ServerSocket;
 import java.net.Socket;
@@ -45,7 +43,6 @@ final class Chromium implements AutoCloseable {
     private final Path profiles;
 
     Chromium() throws IOException {
-        assertTrue(Files.isExecutable(BINARY), BINARY + " is missing: install Debian's chromium (.ci/run does)");
         proxy = new ServerSocket(0, 50, java.net.InetAddress.getLoopbackAddress());
         Thread t = new Thread(this::record, "proxy-recorder");
         t.setDaemon(true);

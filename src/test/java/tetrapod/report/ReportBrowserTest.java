@@ -23,15 +23,20 @@ import javax.imageio.ImageIO;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
+import tetrapod.testing.NativeRequirement;
 
 /**
  * report.html of every example opens in headless Chromium with no console message and no request
  * to the network, shows every plot, and its first page is not blank.
  */
 class ReportBrowserTest {
+
+    @RegisterExtension
+    static final NativeRequirement BROWSER = NativeRequirement.executable(Chromium.BINARY, "chromium");
 
     private static Chromium chromium;
 

@@ -5,8 +5,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.image.BufferedImage;
 import java.util.List;
+import java.util.Optional;
 import org.junit.jupiter.api.Test;
 import tetrapod.model.Frame;
+import tetrapod.testing.NativeRequirement;
 
 /**
  * What every render route must do, run once per route (OpenGL by EGL, by OSMesa, Java2D): a tower
@@ -23,6 +25,18 @@ abstract class RenderContract {
 
     /** The only route the test lets the renderer use. */
     abstract RenderRoute route();
+
+    /** An OpenGL route as a test's requirement: present when it makes a context, from {@code packages}. */
+    static NativeRequirement openGl(RenderRoute route, String packages) {
+        return NativeRequirement.probed(packages, () -> {
+            LwjglMessages.silence();
+            try (HeadlessContext context = HeadlessContext.open(route)) {
+                return Optional.empty();
+            } catch (HeadlessContext.Unavailable e) {
+                return Optional.of("no OpenGL context through " + e.getMessage());
+            }
+        });
+    }
 
     final Frame frame = ViewFixtures.ridge();
 
