@@ -61,7 +61,7 @@ public final class Asce10MemberCheck implements MemberCheck {
                             String.format(Locale.ROOT, "w/t = %.2f > (w/t)lim = %.2f, F_cr = %.1f MPa", ratio, limit,
                                     fcr / 1e6)));
                 }
-                out.add(new CheckResult(CheckMode.LOCAL_BUCKLING, ratio / MAX_WIDTH_THICKNESS,
+                out.add(new CheckResult(CheckMode.WIDTH_THICKNESS, ratio / MAX_WIDTH_THICKNESS,
                         "ASCE 10-97 3.7.3 w/t ≤ 25 (recalled)", String.format(Locale.ROOT, "w/t = %.2f", ratio)));
             }
             double fa = Asce10Slenderness.fa(s.klOverR(), fcr, e);

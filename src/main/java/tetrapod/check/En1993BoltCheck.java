@@ -56,7 +56,7 @@ public final class En1993BoltCheck implements BoltCheck {
         if (n >= 2) {
             spacing = Math.max(spacing, 2.2 * d0 / c.pitch());                                      // EN 1993-1-8 Table 3.3
         }
-        CheckResult detailing = new CheckResult(CheckMode.BOLT_BEARING, spacing,
+        CheckResult detailing = new CheckResult(CheckMode.BOLT_SPACING, spacing,
                 "EN 1993-1-8 3.5, Table 3.3 (minimum e1, e2 ≥ 1.2 d0, p1 ≥ 2.2 d0)",
                 String.format(Locale.ROOT, "d0 = %.0f mm, e1 = %.0f, e2 = %.0f, p1 = %.0f mm", d0 * 1e3,
                         c.endDistance() * 1e3, c.edgeDistance() * 1e3, c.pitch() * 1e3));

@@ -49,7 +49,7 @@ public final class En1993MemberCheck implements MemberCheck {
         List<CheckResult> out = new ArrayList<>();
 
         if (cls.flagged()) {
-            out.add(new CheckResult(CheckMode.LOCAL_BUCKLING, cls.slendernessRatio() / cls.classThreeLimit(),
+            out.add(new CheckResult(CheckMode.WIDTH_THICKNESS, cls.slendernessRatio() / cls.classThreeLimit(),
                     "EN 1993-1-1 5.5.2, Table 5.2", cls.note()));
         }
         if (f.axial() >= 0) {

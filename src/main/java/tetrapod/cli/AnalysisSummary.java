@@ -1,16 +1,21 @@
 package tetrapod.cli;
 
 import java.io.PrintWriter;
+import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import tetrapod.analysis.Analysis;
 import tetrapod.analysis.AnalysisResult;
 import tetrapod.analysis.AutoRestraintPeak;
 import tetrapod.analysis.HandComparison;
 import tetrapod.analysis.LegBaseExtremes;
 import tetrapod.analysis.SolvedCase;
+import tetrapod.check.CheckResult;
 import tetrapod.check.Extreme;
+import tetrapod.check.RequirementVerdict;
 import tetrapod.check.FoundationEnvelope;
 import tetrapod.check.MemberEnvelope;
 import tetrapod.load.CaseKey;
@@ -51,8 +56,22 @@ final class AnalysisSummary {
                 + "residual of the %d cases solved in full: %.1e%n",
                 r.cases().size(), worst);
         double max = r.maxUtilisation();
-        out.printf(Locale.ROOT, "%s: largest utilisation %.3f%n", max > 1.0 ? "OVERSTRESSED" : "all checks pass", max);
+        out.printf(Locale.ROOT, "%s: largest strength utilisation %.3f%n", max > 1.0 ? "OVERSTRESSED" : "all checks pass", max);
+        out.println("requirements: " + RequirementVerdict.line(brokenRequirements(r)));
         out.println("Results must be checked by a qualified engineer against the codes that apply locally.");
+    }
+
+    /** Rule label → the members that break it, by member id. */
+    private static Map<String, List<Integer>> brokenRequirements(AnalysisResult r) {
+        Map<String, List<Integer>> out = new LinkedHashMap<>();
+        for (MemberEnvelope e : r.members()) {
+            for (CheckResult q : e.requirements()) {
+                if (!q.passes()) {
+                    out.computeIfAbsent(q.mode().label(), k -> new ArrayList<>()).add(e.member());
+                }
+            }
+        }
+        return out;
     }
 
     private static void members(PrintWriter out, AnalysisResult r, Frame frame) {

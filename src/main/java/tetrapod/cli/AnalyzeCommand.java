@@ -27,7 +27,7 @@ import tetrapod.view.ViewData;
 /** The main job: analyse a tower under its loads and write the results. */
 @Command(name = "analyze", mixinStandardHelpOptions = true,
         description = "Analyse a tower: self-weight, ancillaries, ice and wind from every azimuth of the sweep, "
-                + "every combination; writes results.json, members.csv, reactions.csv, wind.csv, tower.png and "
+                + "every combination; writes results.json, members.csv, reactions.csv, wind.csv, requirements.csv, tower.png and "
                 + "report.html into the output folder and prints a summary.%n"
                 + "Results must be checked by a qualified engineer against the codes that apply locally.")
 final class AnalyzeCommand implements Callable<Integer> {
@@ -86,7 +86,7 @@ final class AnalyzeCommand implements Callable<Integer> {
         AnalysisSummary.print(out, result);
         out.println("tower.png " + route.replaceFirst("^render: ", "drawn by "));
         out.println("results written to " + folder + ": results.json, " + CsvTables.MEMBERS + ", "
-                + CsvTables.REACTIONS + ", " + CsvTables.WIND + ", tower.png, " + ReportHtml.FILE);
+                + CsvTables.REACTIONS + ", " + CsvTables.WIND + ", " + CsvTables.REQUIREMENTS + ", tower.png, " + ReportHtml.FILE);
         if (timings) {
             out.printf(Locale.ROOT, "timings (%d DOF, %d load cases, %d basis vectors):%n",
                     result.model().freeDofCount(), result.caseCount(), result.responses().size());

@@ -50,6 +50,7 @@ final class ResultViews {
         double[] azimuth = new double[n];
         double[] axial = new double[n];
         List<String> notes = new ArrayList<>(n);
+        List<Integer> breaks = new ArrayList<>();
         for (int k = 0; k < n; k++) {
             MemberEnvelope e = byId.get(frame.members().get(k).id());
             if (e == null || e.governing() == null) {
@@ -65,15 +66,26 @@ final class ResultViews {
             double t = e.maxTension().value();
             double c = e.maxCompression().value();
             axial[k] = t >= c ? t : -c;
-            notes.add(String.format(Locale.ROOT, "%s %.3f, %s; case %s", e.governing().mode().jsonName(),
-                    e.governing().utilisation(), e.governing().clause(), e.governingWhere().caseId()));
+            StringBuilder note = new StringBuilder(String.format(Locale.ROOT, "%s %.3f, %s; case %s",
+                    e.governing().mode().jsonName(), e.governing().utilisation(), e.governing().clause(),
+                    e.governingWhere().caseId()));
+            for (var q : e.requirements()) {
+                if (!q.passes()) {
+                    note.append(String.format(Locale.ROOT, "; breaks the %s (%.3f, %s)", q.mode().label(),
+                            q.utilisation(), q.clause()));
+                }
+            }
+            if (!e.requirementsMet()) {
+                breaks.add(k);
+            }
+            notes.add(note.toString());
         }
         Map<Colouring, MemberScalars> scalars = new EnumMap<>(Colouring.class);
         scalars.put(Colouring.UTILISATION, MemberScalars.of(utilisation));
         scalars.put(Colouring.AZIMUTH, MemberScalars.of(azimuth));
         scalars.put(Colouring.AXIAL, MemberScalars.of(axial));
         return new ViewCase("envelope over " + result.caseCount() + (result.caseCount() == 1 ? " case" : " cases"), OptionalDouble.empty(), scalars,
-                List.of(), List.of(), notes);
+                List.of(), List.of(), notes, breaks);
     }
 
     private static ViewCase solved(Frame frame, SolvedCase c) {

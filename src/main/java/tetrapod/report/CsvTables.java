@@ -11,11 +11,12 @@ import tetrapod.report.Rows.CheckRow;
 import tetrapod.report.Rows.LegBaseRow;
 import tetrapod.report.Rows.MemberRow;
 import tetrapod.report.Rows.PanelRow;
+import tetrapod.report.Rows.RequirementRow;
 import tetrapod.report.Rows.Peak;
 import tetrapod.report.Rows.WindRow;
 
 /**
- * The tables for spreadsheets: members.csv, reactions.csv and wind.csv. One header row whose
+ * The tables for spreadsheets: members.csv, reactions.csv, wind.csv and requirements.csv. One header row whose
  * names carry the unit ({@code N_max_kN}), RFC 4180 quoting and CRLF line ends, numbers with a
  * point and no thousands separator, empty cells where a value does not apply.
  */
@@ -24,6 +25,7 @@ public final class CsvTables {
     public static final String MEMBERS = "members.csv";
     public static final String REACTIONS = "reactions.csv";
     public static final String WIND = "wind.csv";
+    public static final String REQUIREMENTS = "requirements.csv";
 
     static final List<String> MEMBER_HEADER = List.of("member", "role", "segment", "panel", "face", "section",
             "length_m", "N_max_kN", "N_max_case", "N_min_kN", "N_min_case", "utilisation", "mode", "clause",
@@ -32,6 +34,8 @@ public final class CsvTables {
             "compression_max_kN", "compression_combination", "compression_azimuth_deg",
             "uplift_max_kN", "uplift_combination", "uplift_azimuth_deg",
             "shear_max_kN", "shear_combination", "shear_azimuth_deg");
+    static final List<String> REQUIREMENT_HEADER = List.of("member", "role", "segment", "section", "rule", "ratio",
+            "met", "clause", "note");
     static final List<String> WIND_HEADER = List.of("azimuth_deg", "panel", "z_bottom_m", "z_top_m", "z_ref_m",
             "q_kPa", "solidity", "cf", "area_m2", "Fx_kN", "Fy_kN", "F_kN");
 
@@ -44,6 +48,22 @@ public final class CsvTables {
         AtomicFiles.writeText(folder.resolve(MEMBERS), out -> members(results, out));
         AtomicFiles.writeText(folder.resolve(REACTIONS), out -> reactions(results, out));
         AtomicFiles.writeText(folder.resolve(WIND), out -> wind(results, out));
+        AtomicFiles.writeText(folder.resolve(REQUIREMENTS), out -> requirements(results, out));
+    }
+
+    /**
+     * One row per member and requirement (a rule that does not depend on the load): the ratio of
+     * the member's value to the rule's limit and whether it is met.
+     */
+    public static void requirements(Results results, Appendable out) throws IOException {
+        CSVPrinter csv = new CSVPrinter(out, FORMAT);
+        csv.printRecord(REQUIREMENT_HEADER);
+        for (RequirementRow q : results.requirements()) {
+            MemberRow m = results.member(q.member());
+            csv.printRecord(m.id(), m.role(), m.segment(), m.section(), q.ruleLabel(), fixed(q.ratio(), 4),
+                    q.met() ? "yes" : "no", q.clause(), q.note());
+        }
+        csv.flush(); // not closed: the caller owns the stream
     }
 
     /**

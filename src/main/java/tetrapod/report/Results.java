@@ -9,6 +9,7 @@ import java.util.Map;
 import java.util.Optional;
 import tetrapod.report.Rows.AzimuthPeak;
 import tetrapod.report.Rows.CheckRow;
+import tetrapod.report.Rows.RequirementRow;
 import tetrapod.report.Rows.CombinationRow;
 import tetrapod.report.Rows.FootingCheck;
 import tetrapod.report.Rows.FootingRow;
@@ -156,6 +157,28 @@ public final class Results {
                     Tree.numOrNull(c, "azimuthDeg"), peak(Tree.map(c, "maxTension")),
                     peak(Tree.map(c, "maxCompression"))));
         }
+        return out;
+    }
+
+    /** Every requirement of every member, in member order (results.json {@code requirements}). */
+    public List<RequirementRow> requirements() {
+        List<RequirementRow> out = new ArrayList<>();
+        for (Map<String, Object> c : Tree.maps(doc, "requirements")) {
+            out.add(new RequirementRow(Tree.integer(c, "member"), Tree.str(c, "rule"), Tree.num(c, "ratio"),
+                    Boolean.TRUE.equals(c.get("met")), Tree.str(c, "clause"), orEmpty(Tree.str(c, "note"))));
+        }
+        return out;
+    }
+
+    /** The requirements not met, from the largest ratio down (ties by member id). */
+    public List<RequirementRow> requirementsNotMet() {
+        List<RequirementRow> out = new ArrayList<>();
+        for (RequirementRow q : requirements()) {
+            if (!q.met()) {
+                out.add(q);
+            }
+        }
+        out.sort(Comparator.comparingDouble((RequirementRow q) -> -q.ratio()).thenComparingInt(RequirementRow::member));
         return out;
     }
 

@@ -68,6 +68,7 @@ public final class ResultsDocument {
         doc.put("wind", result.wind().stream().map(ResultsDocument::wind).toList());
         doc.put("sweep", sweep(result));
         doc.put("checks", result.members().stream().map(ResultsDocument::memberCheck).toList());
+        doc.put("requirements", result.members().stream().flatMap(ResultsDocument::requirements).toList());
         doc.put("foundations", result.foundations().stream().map(ResultsDocument::foundation).toList());
         doc.put("legBases", result.legBases().stream().map(ResultsDocument::legBase).toList());
         doc.put("handMethod", result.hand().stream().map(ResultsDocument::hand).toList());
@@ -134,6 +135,19 @@ public final class ResultsDocument {
         m.put("maxTension", extreme(e.maxTension()));
         m.put("maxCompression", extreme(e.maxCompression()));
         return m;
+    }
+
+    private static java.util.stream.Stream<Map<String, Object>> requirements(MemberEnvelope e) {
+        return e.requirements().stream().map(r -> {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("member", e.member());
+            m.put("rule", r.mode().jsonName());
+            m.put("ratio", r.utilisation());
+            m.put("met", r.passes());
+            m.put("clause", r.clause());
+            m.put("note", r.note());
+            return m;
+        });
     }
 
     /** An extreme force as {value (N), case, azimuthDeg}; value 0 and case null when it never occurs. */

@@ -29,6 +29,23 @@ public final class Rows {
     public record CheckRow(int member, double utilisation, String mode, String clause, String note, String caseId,
                            Double azimuthDeg, Peak maxTension, Peak maxCompression) { }
 
+    /**
+     * One requirement of one member (a rule that does not depend on the load): its ratio to the
+     * limit and whether it is met.
+     */
+    public record RequirementRow(int member, String rule, double ratio, boolean met, String clause, String note) {
+
+        /** The rule's name for people. */
+        public String ruleLabel() {
+            for (tetrapod.check.CheckMode m : tetrapod.check.CheckMode.values()) {
+                if (m.jsonName().equals(rule)) {
+                    return m.label();
+                }
+            }
+            return rule;
+        }
+    }
+
     /** One footing check of a leg base. */
     public record FootingCheck(String name, double utilisation, String clause, String note, String caseId,
                                Double azimuthDeg) { }

@@ -34,10 +34,13 @@ final class SummarySection implements Section {
         boolean over = max > 1.0;
         out.open("div", Html.attr("class", over ? "verdict over" : "verdict pass") + " id=\"verdict\"")
                 .element("strong", over ? "OVERSTRESSED" : "All checks pass")
-                .text(": the largest utilisation of any member or footing is ")
+                .text(": the largest strength utilisation (design force effect over design resistance) of any member or footing is ")
                 .element("span", "id=\"max-utilisation\"", Format.utilisation(max))
                 .text(over ? " (above 1.000)." : " (at most 1.000).")
                 .close("div");
+        boolean broken = !r.requirementsNotMet().isEmpty();
+        out.element("div", Html.attr("class", broken ? "verdict over" : "verdict pass") + " id=\"requirements-verdict-summary\"",
+                RequirementsVerdict.text(r.requirementsNotMet()));
         boolean swept = !r.legSweeps().isEmpty();
         out.p(String.format(java.util.Locale.ROOT, "%s: %s model, %d nodes, %d members; %d load case%s solved in "
                         + "full (largest equilibrium residual of the applied loads against the support reactions alone %.1e)%s.", r.name(), r.idealisation(), r.nodeCount(),

@@ -19,8 +19,40 @@ import tetrapod.model.Section;
  */
 final class GroupTrial {
 
-    /** The governing check of a full trial: utilisation, the member and case that give it. */
-    record Worst(double utilisation, int member, CheckResult check, String caseId) { }
+    /**
+     * The governing check of a full trial: strength utilisation, the member and case that give it,
+     * and the requirement with the largest ratio to its limit (null when the method has none).
+     */
+    record Worst(double utilisation, int member, CheckResult check, String caseId, CheckResult requirement) {
+
+        /** The largest requirement ratio, 0 without requirements. */
+        double requirementRatio() {
+            return requirement == null ? 0 : requirement.utilisation();
+        }
+
+        /** How far from passing: max(utilisation / target, requirement ratio); ≤ 1 passes. */
+        double shortfall(double target) {
+            return Math.max(utilisation / target, requirementRatio());
+        }
+
+        /** For people: the strength check, and the requirement when it is broken. */
+        String describe() {
+            return check.mode().jsonName() + ", " + check.clause() + ", case " + caseId
+                    + (requirementRatio() > 1 ? String.format(java.util.Locale.ROOT, "; breaks the %s (%.3f, %s)",
+                    requirement.mode().label(), requirementRatio(), requirement.clause()) : "");
+        }
+    }
+
+    /** The requirement of {@code r} with the largest ratio to its limit, or null. */
+    static CheckResult worstRequirement(List<CheckResult> requirements) {
+        CheckResult worst = null;
+        for (CheckResult q : requirements) {
+            if (worst == null || q.utilisation() > worst.utilisation()) {
+                worst = q;
+            }
+        }
+        return worst;
+    }
 
     private final List<Demand> demands;
     private final MemberChecker checker;
@@ -44,16 +76,20 @@ final class GroupTrial {
     }
 
     /**
-     * Whether {@code section} keeps every demand at or below {@code target}. The analysed section
-     * is judged by its full envelope, so a design that keeps all its sections is known to pass.
+     * Whether {@code section} keeps every demand at or below {@code target} and meets every
+     * requirement (slenderness, bolt spacing, width-to-thickness: constraints, not utilisation).
+     * The analysed section is judged by its full envelope, so a design that keeps all its sections
+     * is known to pass.
      */
     boolean passes(Section section, double target) {
         if (section.equals(current)) {
-            return exactCurrent.utilisation() <= target;
+            return exactCurrent.shortfall(target) <= 1;
         }
         for (int k = 0; k < demands.size(); k++) {
             Demand d = demands.get(k);
-            if (check(d, section).utilisation() > target) {
+            MemberCheckResult r = check(d, section);
+            CheckResult requirement = worstRequirement(r.requirements());
+            if (r.utilisation() > target || requirement != null && !requirement.passes()) {
                 if (k > 0) {
                     demands.remove(k);
                     demands.add(0, d);
@@ -70,13 +106,19 @@ final class GroupTrial {
             return exactCurrent;
         }
         Worst worst = null;
+        CheckResult requirement = null;
         for (Demand d : demands) {
-            CheckResult r = check(d, section).governing();
+            MemberCheckResult result = check(d, section);
+            CheckResult r = result.governing();
             if (worst == null || r.utilisation() > worst.utilisation()) {
-                worst = new Worst(r.utilisation(), d.member().id(), r, d.caseId());
+                worst = new Worst(r.utilisation(), d.member().id(), r, d.caseId(), null);
+            }
+            CheckResult q = worstRequirement(result.requirements());
+            if (q != null && (requirement == null || q.utilisation() > requirement.utilisation())) {
+                requirement = q;
             }
         }
-        return worst;
+        return new Worst(worst.utilisation(), worst.member(), worst.check(), worst.caseId(), requirement);
     }
 
     private MemberCheckResult check(Demand d, Section section) {

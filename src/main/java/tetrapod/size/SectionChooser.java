@@ -106,27 +106,31 @@ final class SectionChooser {
         GroupTrial.Worst bestWorst = null;
         for (Section s : allowed) {
             GroupTrial.Worst w = trial.worst(s);
-            if (bestWorst == null || w.utilisation() < bestWorst.utilisation()) {
+            if (bestWorst == null || w.shortfall(target) < bestWorst.shortfall(target)) {
                 best = s;
                 bestWorst = w;
             }
         }
         shortfalls.add(new Shortfall(g, bestWorst.member(), best.name(), bestWorst.utilisation(),
-                bestWorst.check().mode().jsonName() + ", " + bestWorst.check().clause() + ", case " + bestWorst.caseId()));
+                bestWorst.describe()));
         return best;
     }
 
     private GroupTrial trial(SizingGroup g, Evaluation eval, Section current) {
         List<Demand> all = new ArrayList<>();
         GroupTrial.Worst exact = null;
+        List<tetrapod.check.CheckResult> requirements = new ArrayList<>();
         for (int m : membersOf.get(g)) {
             all.addAll(eval.demands().get(m));
             MemberEnvelope e = eval.envelopes().get(m);
+            requirements.addAll(e.requirements());
             double u = Evaluation.utilisation(e);
             if (exact == null || u > exact.utilisation()) {
-                exact = new GroupTrial.Worst(u, e.member(), e.governing(), e.governingWhere().caseId());
+                exact = new GroupTrial.Worst(u, e.member(), e.governing(), e.governingWhere().caseId(), null);
             }
         }
+        exact = new GroupTrial.Worst(exact.utilisation(), exact.member(), exact.check(), exact.caseId(),
+                GroupTrial.worstRequirement(requirements));
         return new GroupTrial(Demands.reduce(all), eval.checker(), eval.frame().material(), current, exact);
     }
 

@@ -23,6 +23,10 @@ public final class SceneBuilder {
     static final double REACTION_LENGTH = 0.18;
     /** The automatic deformation scale draws the largest displacement this fraction of the size. */
     static final double DEFORMATION_SIZE = 0.05;
+    /** The cross drawn on a member that breaks a requirement: no colour of any scale, near black. */
+    static final Rgb REQUIREMENT_MARK = Rgb.hex(0x161616);
+    /** Arm length of that cross, as a fraction of the tower's size. */
+    static final double REQUIREMENT_MARK_SIZE = 0.012;
 
     private SceneBuilder() { }
 
@@ -103,9 +107,20 @@ public final class SceneBuilder {
             framed.add(baseCentre.plus(new Vec3(r, r, 0)));
             framed.add(baseCentre.minus(new Vec3(r, r, 0)));
         }
+        for (int k : vc.requirementBreaks()) {
+            Member m = frame.members().get(k);
+            RequirementMarks.cross(deco, drawn.get(m.i()), drawn.get(m.j()), REQUIREMENT_MARK_SIZE * size,
+                    REQUIREMENT_MARK);
+        }
         Optional<Legend> legend = Optional.empty();
         if (options.legend()) {
-            legend = Optional.of(ColourScale.of(data, options.colouring()).legend());
+            Legend l = ColourScale.of(data, options.colouring()).legend();
+            if (!vc.requirementBreaks().isEmpty()) {
+                List<Legend.Swatch> swatches = new ArrayList<>(l.swatches());
+                swatches.add(new Legend.Swatch(REQUIREMENT_MARK, "x: breaks a requirement"));
+                l = new Legend(l.title(), l.bar(), l.ticks(), swatches);
+            }
+            legend = Optional.of(l);
         }
         if (options.caption()) {
             labels.add(new SceneLabel(caption(data, vc, options.colouring(), scale), LabelStyle.CAPTION,

@@ -20,9 +20,13 @@ import java.util.OptionalDouble;
  * @param reactions      forces the supports exert on the structure, N, one per support node; may be empty
  * @param memberNotes    one line of text per member shown when it is picked (e.g. governing mode,
  *                       clause and azimuth); empty, or one entry per member ("" for none)
+ * @param requirementBreaks indexes (frame member order) of the members that break a requirement
+ *                       that does not depend on the load (slenderness, bolt spacing, width-to-
+ *                       thickness); drawn with a mark of their own, never as a utilisation colour
  */
 public record ViewCase(String name, OptionalDouble windAzimuthDeg, Map<Colouring, MemberScalars> scalars,
-                       List<NodeVector> displacements, List<NodeVector> reactions, List<String> memberNotes) {
+                       List<NodeVector> displacements, List<NodeVector> reactions, List<String> memberNotes,
+                       List<Integer> requirementBreaks) {
 
     public ViewCase {
         Objects.requireNonNull(name, "name");
@@ -37,6 +41,13 @@ public record ViewCase(String name, OptionalDouble windAzimuthDeg, Map<Colouring
         displacements = List.copyOf(displacements);
         reactions = List.copyOf(reactions);
         memberNotes = List.copyOf(memberNotes);
+        requirementBreaks = List.copyOf(requirementBreaks);
+    }
+
+    /** A case in which no member breaks a requirement (or none is known). */
+    public ViewCase(String name, OptionalDouble windAzimuthDeg, Map<Colouring, MemberScalars> scalars,
+                    List<NodeVector> displacements, List<NodeVector> reactions, List<String> memberNotes) {
+        this(name, windAzimuthDeg, scalars, displacements, reactions, memberNotes, List.of());
     }
 
     /** A case with nothing but a name and, optionally, a wind direction. */

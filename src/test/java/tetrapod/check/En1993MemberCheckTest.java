@@ -101,7 +101,7 @@ class En1993MemberCheckTest {
         assertEquals(0.6922, find(r, CheckMode.NET_SECTION, "(3.12)").utilisation(), HAND);
         assertEquals(1.244, find(r, CheckMode.BOLT_SHEAR, "Table 3.4").utilisation(), 1.244 * 0.005);
         assertEquals(0.8976, find(r, CheckMode.BOLT_BEARING, "F_b,Rd").utilisation(), HAND);
-        assertEquals(0.792, find(r, CheckMode.BOLT_BEARING, "Table 3.3").utilisation(), HAND);
+        assertEquals(0.792, find(r, CheckMode.BOLT_SPACING, "Table 3.3").utilisation(), HAND);
         assertEquals(CheckMode.BOLT_SHEAR, r.governing().mode());
     }
 

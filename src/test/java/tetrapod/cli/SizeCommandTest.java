@@ -2,6 +2,7 @@ package tetrapod.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
@@ -40,15 +41,22 @@ class SizeCommandTest {
     }
 
     @Test
-    void anInfeasibleTargetNamesTheMemberAndItsBestAndWritesNothing(@TempDir Path dir) {
-        // The diagonals' M16 bolts at e1 = e2 = 30 mm give 1.2 d0 / e = 1.2 × 18 / 30 = 0.72 by
-        // EN 1993-1-8 Table 3.3 whatever the section: no section reaches a target of 0.6.
+    void anUnmeetableRequirementNamesTheMemberAndItsBestAndWritesNothing(@TempDir Path dir) throws Exception {
+        // The segment 2-3 diagonals' M16 bolts moved to e1 = e2 = 20 mm: 1.2 d0 / e = 1.2 × 18 / 20 = 1.08
+        // by EN 1993-1-8 Table 3.3 whatever the section, a requirement no section can meet.
+        String ridge = Files.readString(Path.of(RIDGE));
+        String close = ridge.replaceFirst("\"endDistance_mm\": 30, \"edgeDistance_mm\": 30",
+                "\"endDistance_mm\": 20, \"edgeDistance_mm\": 20");
+        assertNotEquals(ridge, close);
+        Path model = dir.resolve("close-bolts.json");
+        Files.writeString(model, close);
         Path sized = dir.resolve("never.json");
-        CliRun run = CliRun.of("size", RIDGE, "-o", sized.toString(), "--history-dir", dir.toString(), "--target", "0.6");
+        CliRun run = CliRun.of("size", model.toString(), "-o", sized.toString(), "--history-dir", dir.toString());
         assertEquals(ExitCode.INFEASIBLE, run.exitCode(), run.out() + run.err());
         assertTrue(run.err().contains("infeasible"), run.err());
         assertTrue(run.err().matches("(?s).*segment 2 diagonal: member \\d+ needs more than any allowed section gives; "
-                + "best L\\S+ at utilisation 0\\.720 .*"), run.err());
+                + "best L\\S+ at utilisation [0-9.]+ \\(.*breaks the bolt end/edge distance and spacing \\(1\\.080, .*"),
+                run.err());
         assertFalse(Files.exists(sized));
         assertFalse(Files.exists(dir.resolve("size-history.json")));
         assertFalse(run.err().contains("Exception"), run.err());
