@@ -68,7 +68,8 @@ class SchemaTest {
         "wind-unknown-exposure.json", "wind-unknown-method.json", "wind-key-of-other-method.json",
         "wind-direction-factors-count.json", "ice-negative-thickness.json", "combination-misspelt-action.json",
         "wind-on-explicit-frame.json",
-        "checks-unknown-key.json", "checks-bolt-grade.json", "checks-bolt-size.json", "checks-uplift-both.json", "checks-anchor-no-resistance.json", "checks-frustum-angle.json"})
+        "checks-unknown-key.json", "checks-bolt-grade.json", "checks-bolt-size.json", "checks-uplift-both.json", "checks-anchor-no-resistance.json", "checks-anchor-grade.json",
+        "checks-frustum-angle.json"})
     void schemaRefusesBadSpecs(String file) throws IOException {
         JsonNode tree = MAPPER.readTree(BadSpecsTest.resource(file));
         assertFalse(schema().validate(tree).isEmpty(), file + " passed the schema");
