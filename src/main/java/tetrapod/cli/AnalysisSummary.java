@@ -12,6 +12,7 @@ import tetrapod.analysis.SolvedCase;
 import tetrapod.check.Extreme;
 import tetrapod.check.FoundationEnvelope;
 import tetrapod.check.MemberEnvelope;
+import tetrapod.load.Asce7Ice;
 import tetrapod.load.CaseKey;
 import tetrapod.model.Frame;
 import tetrapod.model.Member;
@@ -36,6 +37,7 @@ final class AnalysisSummary {
             out.printf(Locale.ROOT, "continuity: %d bracing nodes held across their member by its bending stiffness "
                     + "(results.json model.continuityNodes)%n", r.model().continuityNodes().size());
         }
+        ice(out, r);
         members(out, r, frame);
         legBases(out, r);
         footings(out, r);
@@ -49,6 +51,21 @@ final class AnalysisSummary {
         double max = r.maxUtilisation();
         out.printf(Locale.ROOT, "%s: largest utilisation %.3f%n", max > 1.0 ? "OVERSTRESSED" : "all checks pass", max);
         out.println("Results must be checked by a qualified engineer against the codes that apply locally.");
+    }
+
+    private static void ice(PrintWriter out, AnalysisResult r) {
+        Asce7Ice ice = r.loads().icing();
+        if (ice.isNone()) {
+            return;
+        }
+        double top = r.tower().height();
+        String rule = ice.map() == null
+                ? "t_d as given at 10 m" + (ice.heightFactor() ? ", grown by f_z = (z/33 ft)^0.10" : ", constant")
+                : String.format(Locale.ROOT, "t_d = 2.0 t I_i f_z K_zt^0.35 (ASCE 7 (10.4-5)) with map t = %.1f mm,"
+                        + " I_i = %.2f, K_zt = %.2f", ice.map().nominal() * 1e3, ice.map().importanceFactor(),
+                        ice.map().topographicFactor());
+        out.printf(Locale.ROOT, "ice: %s: %.1f mm at 10 m (33 ft), %.1f mm at the top (%.1f m)%n",
+                rule, ice.thicknessAt(Asce7Ice.REFERENCE_HEIGHT) * 1e3, ice.thicknessAt(top) * 1e3, top);
     }
 
     private static void members(PrintWriter out, AnalysisResult r, Frame frame) {

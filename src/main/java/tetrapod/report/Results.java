@@ -13,6 +13,7 @@ import tetrapod.report.Rows.CombinationRow;
 import tetrapod.report.Rows.FootingCheck;
 import tetrapod.report.Rows.FootingRow;
 import tetrapod.report.Rows.HandRow;
+import tetrapod.report.Rows.IceRow;
 import tetrapod.report.Rows.LegBaseRow;
 import tetrapod.report.Rows.LegSweep;
 import tetrapod.report.Rows.MemberRow;
@@ -231,6 +232,23 @@ public final class Results {
                     Tree.num(fe, "maxTension"), Tree.num(diff, "compression"), Tree.num(diff, "tension")));
         }
         return out;
+    }
+
+    /** The ice the analysis used; empty without ice. */
+    public Optional<IceRow> ice() {
+        Map<String, Object> i = Tree.mapOrEmpty(doc, "ice");
+        if (i.isEmpty()) {
+            return Optional.empty();
+        }
+        return Optional.of(new IceRow(Tree.str(i, "rule"), orNaN(i, "nominalThickness"), orNaN(i, "importanceFactor"),
+                orNaN(i, "topographicFactor"), Tree.bool(i, "heightFactor"), Tree.num(i, "referenceHeight"),
+                Tree.num(i, "designThicknessAtReference"), Tree.num(i, "topHeight"),
+                Tree.num(i, "designThicknessAtTop")));
+    }
+
+    private static double orNaN(Map<String, Object> parent, String key) {
+        Double v = Tree.numOrNull(parent, key);
+        return v == null ? Double.NaN : v;
     }
 
     public List<CombinationRow> combinations() {

@@ -79,6 +79,15 @@ public final class Rows {
                           double handCompression, double handUplift, double feCompression, double feUplift,
                           double compressionDiffPct, double upliftDiffPct) { }
 
+    /**
+     * The ice the analysis used: the rule ("asce7": from the map values; "given"), the map's nominal
+     * thickness (m), I_i and K_zt (NaN for the given rule), whether it grows with height, and the
+     * design thickness (m) at the reference height and at the top (heights in m).
+     */
+    public record IceRow(String rule, double nominal, double importanceFactor, double topographicFactor,
+                         boolean heightFactor, double referenceHeight, double atReference, double topHeight,
+                         double atTop) { }
+
     /** A load combination and its factors by action name. */
     public record CombinationRow(String name, java.util.Map<String, Double> factors, boolean wind) {
         public CombinationRow {

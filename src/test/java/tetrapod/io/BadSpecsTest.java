@@ -93,6 +93,8 @@ class BadSpecsTest {
                 new Case("ancillary-above-top.json", "loads.ancillaries[1].height", 12,
                         "is above the tower top (12 m), was 14.5", 1),
                 new Case("ice-negative-thickness.json", "loads.ice.thickness_mm", 10, "must be ≥ 0 mm and ≤ 300 mm, was -10", 1),
+                new Case("ice-asce7-design-thickness.json", "loads.ice.thickness_mm", 10,
+                        "is not read with the asce7 wind: give nominalThickness_mm", 1),
                 new Case("combination-misspelt-action.json", "loads.combinations[0].wnd", 11,
                         "unknown key; did you mean 'wind'?", 1),
                 new Case("combination-wind-without-wind.json", "loads.combinations[0].wind", 11,
