@@ -117,21 +117,31 @@ final class AnalysisSummary {
     }
 
     private static void hand(PrintWriter out, AnalysisResult r) {
-        if (r.hand().isEmpty()) {
-            return;
-        }
-        String combination = r.hand().get(0).combination();
-        out.printf(Locale.ROOT, "hand method (N/4 +- M/lever) beside the analysis, %s:%n", combination);
-        out.printf(Locale.ROOT, "  %7s %10s %12s %14s %14s %7s %12s %12s %7s%n", "azimuth", "N kN", "M kNm",
-                "hand comp kN", "analysis kN", "diff %", "hand upl kN", "analysis kN", "diff %");
+        r.handGoverning().ifPresent(g -> {
+            out.println("hand method (N/4 +- M/lever) beside the analysis, each in the combination that governs it:");
+            HandComparison c = g.compression();
+            out.printf(Locale.ROOT, "  compression in %s (largest leg compression %.1f kN at %s deg):%n", c.combination(),
+                    c.feMaxCompression() / 1e3, CaseKey.degrees(c.hand().azimuthDeg()));
+            handRows(out, r, c.combination(), true);
+            HandComparison u = g.uplift();
+            out.printf(Locale.ROOT, "  uplift in %s (largest uplift %.1f kN at %s deg):%n", u.combination(),
+                    u.feMaxTension() / 1e3, CaseKey.degrees(u.hand().azimuthDeg()));
+            handRows(out, r, u.combination(), false);
+        });
+    }
+
+    private static void handRows(PrintWriter out, AnalysisResult r, String combination, boolean compression) {
+        out.printf(Locale.ROOT, "    %7s %10s %12s %10s %12s %7s%n", "azimuth", "N kN", "M kNm", "hand kN", "analysis kN",
+                "diff %");
         for (HandComparison h : r.hand()) {
             if (!h.combination().equals(combination) || !Analysis.REPORTED_AZIMUTHS.contains(h.hand().azimuthDeg())) {
                 continue;
             }
-            out.printf(Locale.ROOT, "  %7s %10.1f %12.1f %14.1f %14.1f %7.1f %12.1f %12.1f %7.1f%n",
-                    CaseKey.degrees(h.hand().azimuthDeg()), h.hand().n() / 1e3, h.hand().m() / 1e3,
-                    h.hand().legs().compression() / 1e3, h.feMaxCompression() / 1e3, h.compressionDifferencePct(),
-                    h.hand().legs().tension() / 1e3, h.feMaxTension() / 1e3, h.tensionDifferencePct());
+            out.printf(Locale.ROOT, "    %7s %10.1f %12.1f %10.1f %12.1f %7.1f%n", CaseKey.degrees(h.hand().azimuthDeg()),
+                    h.hand().n() / 1e3, h.hand().m() / 1e3,
+                    (compression ? h.hand().legs().compression() : h.hand().legs().tension()) / 1e3,
+                    (compression ? h.feMaxCompression() : h.feMaxTension()) / 1e3,
+                    compression ? h.compressionDifferencePct() : h.tensionDifferencePct());
         }
     }
 

@@ -12,6 +12,7 @@ import tetrapod.report.Rows.CheckRow;
 import tetrapod.report.Rows.CombinationRow;
 import tetrapod.report.Rows.FootingCheck;
 import tetrapod.report.Rows.FootingRow;
+import tetrapod.report.Rows.HandCase;
 import tetrapod.report.Rows.HandRow;
 import tetrapod.report.Rows.IceRow;
 import tetrapod.report.Rows.LegBaseRow;
@@ -232,6 +233,19 @@ public final class Results {
                     Tree.num(fe, "maxTension"), Tree.num(diff, "compression"), Tree.num(diff, "tension")));
         }
         return out;
+    }
+
+    /**
+     * The hand-method comparison of {@code quantity} ("compression" or "uplift") in the case that
+     * governs it; empty when the results have none.
+     */
+    public Optional<HandCase> handCase(String quantity) {
+        Map<String, Object> c = Tree.mapOrEmpty(Tree.mapOrEmpty(doc, "handMethodGoverning"), quantity);
+        if (c.isEmpty()) {
+            return Optional.empty();
+        }
+        return Optional.of(new HandCase(Tree.str(c, "combination"), Tree.num(c, "azimuthDeg"), Tree.num(c, "N"),
+                Tree.num(c, "M"), Tree.num(c, "hand"), Tree.num(c, "fe"), Tree.num(c, "differencePct")));
     }
 
     /** The ice the analysis used; empty without ice. */

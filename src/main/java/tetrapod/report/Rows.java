@@ -80,6 +80,14 @@ public final class Rows {
                           double compressionDiffPct, double upliftDiffPct) { }
 
     /**
+     * One hand-method comparison in the case where the analysis' value is largest: the combination
+     * that governs the quantity, the azimuth, N (N), M (N·m), the hand and analysis values (N) and
+     * their difference (percent).
+     */
+    public record HandCase(String combination, double azimuthDeg, double n, double m, double hand, double fe,
+                           double differencePct) { }
+
+    /**
      * The ice the analysis used: the rule ("asce7": from the map values; "given"), the map's nominal
      * thickness (m), I_i and K_zt (NaN for the given rule), whether it grows with height, and the
      * design thickness (m) at the reference height and at the top (heights in m).
