@@ -1,6 +1,7 @@
 package tetrapod.analysis;
 
 import java.util.List;
+import java.util.Optional;
 import tetrapod.check.FoundationEnvelope;
 import tetrapod.check.MemberEnvelope;
 import tetrapod.generate.Tower;
@@ -44,6 +45,11 @@ public record AnalysisResult(Tower tower, TowerLoads loads, StructuralModel mode
         hand = List.copyOf(hand);
         utilisationByAzimuth = List.copyOf(utilisationByAzimuth);
         autoRestraints = List.copyOf(autoRestraints);
+    }
+
+    /** The cases in which the hand method is compared for compression and for uplift; empty without a comparison. */
+    public Optional<HandGoverning> handGoverning() {
+        return HandGoverning.of(hand);
     }
 
     /** The largest utilisation of any member or footing. */

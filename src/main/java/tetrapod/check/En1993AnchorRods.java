@@ -5,10 +5,12 @@ import java.util.Locale;
 import tetrapod.model.spec.BoltGrade;
 
 /**
- * Anchor rods as bolts of EN 1993-1-8 Table 3.4: tension F_t,Rd = k2 f_ub A_s/γM2 with k2 = 0.9,
- * shear through the threads F_v,Rd = α_v f_ub A_s/γM2, and tension with shear
- * F_v,Ed/F_v,Rd + F_t,Ed/(1.4 F_t,Rd) ≤ 1. A_s is the tensile stress area of ISO 898-1
- * ({@link MetricThreads}). The rods share the forces equally.
+ * Anchor rods by EN 1993-1-8: tension F_t,Rd = k2 f_ub A_s/γM2 with k2 = 0.9 (Table 3.4), shear
+ * F_2,vb,Rd = α_bc f_ub A_s/γM2 with α_bc = 0.44 − 0.0003 f_yb (6.2.2 (7), anchor bolts; in place of
+ * the α_v of Table 3.4), and tension with shear F_v,Ed/F_v,Rd + F_t,Ed/(1.4 F_t,Rd) ≤ 1 (Table 3.4).
+ * A_s is the tensile stress area of ISO 898-1 ({@link MetricThreads}). The rods share the forces
+ * equally. The bearing of the rods on the base plate (F_1,vb,Rd of 6.2.2 (7)) is not checked: the
+ * model gives no base plate.
  *
  * @param diameter nominal diameter, m (a metric coarse size M12 … M72)
  */
@@ -17,9 +19,18 @@ public record En1993AnchorRods(int count, double diameter, BoltGrade grade, doub
     /** k2 of EN 1993-1-8 Table 3.4 (not countersunk). */
     static final double K2 = 0.9;
 
+    /** The range of f_yb, Pa, for which EN 1993-1-8 6.2.2 (7) gives α_bc: 235 ≤ f_yb ≤ 640 N/mm². */
+    static final double MIN_YIELD = 235e6;
+    static final double MAX_YIELD = 640e6;
+
     public En1993AnchorRods {
         if (count < 1 || !(gammaM2 > 0)) {
             throw new IllegalArgumentException("anchor rods: count >= 1, γM2 > 0");
+        }
+        double fyb = BoltStrengths.yield(grade);
+        if (fyb < MIN_YIELD || fyb > MAX_YIELD) {
+            throw new IllegalArgumentException("anchor rods of grade " + grade.jsonName()
+                    + ": EN 1993-1-8 6.2.2 (7) holds for 235 ≤ f_yb ≤ 640 MPa only");
         }
         MetricThreads.pitch(diameter);   // must be a known size
     }
@@ -29,10 +40,14 @@ public record En1993AnchorRods(int count, double diameter, BoltGrade grade, doub
         return K2 * BoltStrengths.ultimate(grade) * MetricThreads.stressArea(diameter) / gammaM2;   // EN 1993-1-8 Table 3.4
     }
 
-    /** F_v,Rd of one rod with the shear plane through the threads, N. EN 1993-1-8 Table 3.4. */
+    /** α_bc of an anchor bolt in shear, no unit. */
+    public double alphaBc() {
+        return 0.44 - 0.0003 * BoltStrengths.yield(grade) / 1e6;   // EN 1993-1-8 6.2.2 (7), f_yb in N/mm²
+    }
+
+    /** F_2,vb,Rd of one rod, its shear resistance, N. */
     public double shearResistance() {
-        return BoltStrengths.alphaVThreads(grade) * BoltStrengths.ultimate(grade) * MetricThreads.stressArea(diameter)
-                / gammaM2;                                                                            // EN 1993-1-8 Table 3.4
+        return alphaBc() * BoltStrengths.ultimate(grade) * MetricThreads.stressArea(diameter) / gammaM2;   // EN 1993-1-8 6.2.2 (7)
     }
 
     @Override
@@ -46,8 +61,8 @@ public record En1993AnchorRods(int count, double diameter, BoltGrade grade, doub
         return List.of(
                 new CheckResult(CheckMode.ANCHOR_TENSION, CheckResult.ratio(ft, ftRd), "EN 1993-1-8 Table 3.4 (F_t,Rd)",
                         rods + String.format(Locale.ROOT, ", F_t,Rd = %.1f kN per rod", ftRd / 1e3)),
-                new CheckResult(CheckMode.ANCHOR_SHEAR, CheckResult.ratio(fv, fvRd), "EN 1993-1-8 Table 3.4 (F_v,Rd)",
-                        String.format(Locale.ROOT, "F_v,Rd = %.1f kN per rod", fvRd / 1e3)),
+                new CheckResult(CheckMode.ANCHOR_SHEAR, CheckResult.ratio(fv, fvRd), "EN 1993-1-8 6.2.2 (7) (F_2,vb,Rd)",
+                        String.format(Locale.ROOT, "α_bc = %.3f, F_v,Rd = %.1f kN per rod", alphaBc(), fvRd / 1e3)),
                 new CheckResult(CheckMode.ANCHOR_COMBINED, CheckResult.ratio(fv, fvRd) + CheckResult.ratio(ft, 1.4 * ftRd),
                         "EN 1993-1-8 Table 3.4 (shear with tension)", ""));
     }

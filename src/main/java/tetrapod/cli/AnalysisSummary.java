@@ -18,6 +18,7 @@ import tetrapod.check.Extreme;
 import tetrapod.check.RequirementVerdict;
 import tetrapod.check.FoundationEnvelope;
 import tetrapod.check.MemberEnvelope;
+import tetrapod.load.Asce7Ice;
 import tetrapod.load.CaseKey;
 import tetrapod.model.Frame;
 import tetrapod.model.Member;
@@ -44,6 +45,7 @@ final class AnalysisSummary {
             out.printf(Locale.ROOT, "continuity: %d bracing nodes held across their member by its bending stiffness "
                     + "(results.json model.continuityNodes)%n", r.model().continuityNodes().size());
         }
+        ice(out, r);
         members(out, r, frame);
         legBases(out, r);
         footings(out, r);
@@ -72,6 +74,21 @@ final class AnalysisSummary {
             }
         }
         return out;
+    }
+
+    private static void ice(PrintWriter out, AnalysisResult r) {
+        Asce7Ice ice = r.loads().icing();
+        if (ice.isNone()) {
+            return;
+        }
+        double top = r.tower().height();
+        String rule = ice.map() == null
+                ? "t_d as given at 10 m" + (ice.heightFactor() ? ", grown by f_z = (z/33 ft)^0.10" : ", constant")
+                : String.format(Locale.ROOT, "t_d = 2.0 t I_i f_z K_zt^0.35 (ASCE 7 (10.4-5)) with map t = %.1f mm,"
+                        + " I_i = %.2f, K_zt = %.2f", ice.map().nominal() * 1e3, ice.map().importanceFactor(),
+                        ice.map().topographicFactor());
+        out.printf(Locale.ROOT, "ice: %s: %.1f mm at 10 m (33 ft), %.1f mm at the top (%.1f m)%n",
+                rule, ice.thicknessAt(Asce7Ice.REFERENCE_HEIGHT) * 1e3, ice.thicknessAt(top) * 1e3, top);
     }
 
     private static void members(PrintWriter out, AnalysisResult r, Frame frame) {
@@ -123,21 +140,31 @@ final class AnalysisSummary {
     }
 
     private static void hand(PrintWriter out, AnalysisResult r) {
-        if (r.hand().isEmpty()) {
-            return;
-        }
-        String combination = r.hand().get(0).combination();
-        out.printf(Locale.ROOT, "hand method (N/4 +- M/lever) beside the analysis, %s:%n", combination);
-        out.printf(Locale.ROOT, "  %7s %10s %12s %14s %14s %7s %12s %12s %7s%n", "azimuth", "N kN", "M kNm",
-                "hand comp kN", "analysis kN", "diff %", "hand upl kN", "analysis kN", "diff %");
+        r.handGoverning().ifPresent(g -> {
+            out.println("hand method (N/4 +- M/lever) beside the analysis, each in the combination that governs it:");
+            HandComparison c = g.compression();
+            out.printf(Locale.ROOT, "  compression in %s (largest leg compression %.1f kN at %s deg):%n", c.combination(),
+                    c.feMaxCompression() / 1e3, CaseKey.degrees(c.hand().azimuthDeg()));
+            handRows(out, r, c.combination(), true);
+            HandComparison u = g.uplift();
+            out.printf(Locale.ROOT, "  uplift in %s (largest uplift %.1f kN at %s deg):%n", u.combination(),
+                    u.feMaxTension() / 1e3, CaseKey.degrees(u.hand().azimuthDeg()));
+            handRows(out, r, u.combination(), false);
+        });
+    }
+
+    private static void handRows(PrintWriter out, AnalysisResult r, String combination, boolean compression) {
+        out.printf(Locale.ROOT, "    %7s %10s %12s %10s %12s %7s%n", "azimuth", "N kN", "M kNm", "hand kN", "analysis kN",
+                "diff %");
         for (HandComparison h : r.hand()) {
             if (!h.combination().equals(combination) || !Analysis.REPORTED_AZIMUTHS.contains(h.hand().azimuthDeg())) {
                 continue;
             }
-            out.printf(Locale.ROOT, "  %7s %10.1f %12.1f %14.1f %14.1f %7.1f %12.1f %12.1f %7.1f%n",
-                    CaseKey.degrees(h.hand().azimuthDeg()), h.hand().n() / 1e3, h.hand().m() / 1e3,
-                    h.hand().legs().compression() / 1e3, h.feMaxCompression() / 1e3, h.compressionDifferencePct(),
-                    h.hand().legs().tension() / 1e3, h.feMaxTension() / 1e3, h.tensionDifferencePct());
+            out.printf(Locale.ROOT, "    %7s %10.1f %12.1f %10.1f %12.1f %7.1f%n", CaseKey.degrees(h.hand().azimuthDeg()),
+                    h.hand().n() / 1e3, h.hand().m() / 1e3,
+                    (compression ? h.hand().legs().compression() : h.hand().legs().tension()) / 1e3,
+                    (compression ? h.feMaxCompression() : h.feMaxTension()) / 1e3,
+                    compression ? h.compressionDifferencePct() : h.tensionDifferencePct());
         }
     }
 

@@ -41,6 +41,9 @@ final class ChecksReader {
     static final double DEFAULT_FACTOR_OF_SAFETY = 1.5;
 
     private static final List<String> GRADES = BoltGrade.names();
+    /** Anchor rod grades: EN 1993-1-8 6.2.2 (7) gives their shear resistance for 235 ≤ f_yb ≤ 640 MPa. */
+    private static final List<BoltGrade> ROD_GRADES = List.of(BoltGrade.G4_6, BoltGrade.G5_6, BoltGrade.G8_8);
+    private static final List<String> ROD_GRADE_NAMES = ROD_GRADES.stream().map(BoltGrade::jsonName).toList();
     private static final List<String> CROSSINGS = List.of(CrossingRule.values()).stream().map(CrossingRule::jsonName).toList();
     private static final List<String> LEGS = List.of(ConnectedLeg.values()).stream().map(ConnectedLeg::jsonName).toList();
     private static final Bound HALF_ANGLE = new Bound(0, true, 90, false);
@@ -299,12 +302,19 @@ final class ChecksReader {
             return null;
         }
         if (!byGrade && !byStress) {
-            problems.add(r.path(), "give either grade (4.6, 5.6, 8.8, 10.9) or allowableTension and allowableShear in MPa");
+            problems.add(r.path(), "give either grade (" + String.join(", ", ROD_GRADE_NAMES)
+                    + ") or allowableTension and allowableShear in MPa");
             return null;
         }
         if (byGrade) {
             double d = metricDiameter(r);
-            BoltGrade grade = r.requiredChoice("grade", "bolt grade", GRADES, List.of(BoltGrade.values()));
+            if (BoltGrade.G10_9.jsonName().equals(r.get("grade").asText())) {
+                problems.add(r.path("grade"), "anchor rods of grade 10.9 (f_yb = 900 MPa) are outside EN 1993-1-8 6.2.2 (7),"
+                        + " which gives the shear resistance of anchor bolts for 235 ≤ f_yb ≤ 640 MPa; expected one of "
+                        + String.join(", ", ROD_GRADE_NAMES));
+                return null;
+            }
+            BoltGrade grade = r.requiredChoice("grade", "anchor rod grade", ROD_GRADE_NAMES, ROD_GRADES);
             return problems.count() == before ? new FoundationSpec.RodsByGrade(count, d, grade) : null;
         }
         double d = r.requiredNumber("diameter_mm", Bound.POSITIVE, "mm");

@@ -32,7 +32,8 @@ final class LoadsReader {
     static final Map<String, List<String>> ANCILLARY_KEYS = Map.of(
             "point", List.of("kind", "name", "height", "weight", "area", "forceCoefficient", "shielding", "face"),
             "linear", List.of("kind", "name", "from", "to", "weight", "width", "forceCoefficient", "shielding", "face"));
-    static final List<String> ICE_KEYS = List.of("thickness_mm", "density", "heightFactor", "windSpeed", "windPressure");
+    static final List<String> ICE_KEYS = List.of("thickness_mm", "nominalThickness_mm", "importanceFactor", "density",
+            "heightFactor", "windSpeed", "windPressure");
     static final List<String> COMBINATION_KEYS = List.of("name", "dead", "wind", "ice", "windOnIce", "nodal");
     static final List<String> WIND_METHODS = List.of("en1991", "asce7", "uniform");
 
@@ -41,6 +42,10 @@ final class LoadsReader {
     /** Largest pressure of the uniform method, kPa. */
     static final double MAX_PRESSURE = 20;
     static final double MAX_ICE_MM = 300;
+    /** Largest nominal thickness of the ASCE 7 map, mm: twice it (10.4-5) reaches the bound of the design thickness. */
+    static final double MAX_NOMINAL_ICE_MM = MAX_ICE_MM / 2;
+    /** Ice importance factors of ASCE 7 Table 1.5-2 lie between 0.8 and 1.25; above 2 is taken for a mistake. */
+    private static final Bound IMPORTANCE = new Bound(0, false, 2, true);
     static final double MAX_FACTOR = 10;
     static final double MIN_STEP = 0.1;
 
@@ -320,9 +325,8 @@ final class LoadsReader {
     private IceSpec ice(Fields f, String method) {
         int before = problems.count();
         f.allowOnly(ICE_KEYS);
-        double thickness = f.requiredNumber("thickness_mm", new Bound(0, true, MAX_ICE_MM, true), "mm");
+        IceSpec.Thickness thickness = "asce7".equals(method) ? asce7Thickness(f) : givenThickness(f);
         double density = f.optionalNumber("density", new Bound(100, true, 1000, true), "kg/m³", IceSpec.DEFAULT_DENSITY);
-        Boolean heightFactor = f.optionalBool("heightFactor", true);
         double windSpeed = Double.NaN;
         double windPressure = Double.NaN;
         if (f.has("windSpeed")) {
@@ -343,8 +347,40 @@ final class LoadsReader {
             }
         }
         return problems.count() == before
-                ? new IceSpec(thickness, density, heightFactor, windSpeed, windPressure)
+                ? new IceSpec(thickness, density, windSpeed, windPressure)
                 : null;
+    }
+
+    /** With the asce7 wind: the map's nominal thickness and I_i; t_d is computed by ASCE 7 (10.4-5). */
+    private IceSpec.Thickness asce7Thickness(Fields f) {
+        if (f.has("thickness_mm")) {
+            problems.add(f.path("thickness_mm"), "is not read with the asce7 wind: give nominalThickness_mm, the nominal"
+                    + " ice thickness t of the ASCE 7 map (mm), and importanceFactor (I_i); Tetrapod computes the design"
+                    + " thickness t_d = 2.0 t I_i f_z K_zt^0.35 (ASCE 7 (10.4-5))");
+        }
+        if (f.has("heightFactor")) {
+            problems.add(f.path("heightFactor"), "does not apply with the asce7 wind: the design thickness of ASCE 7"
+                    + " (10.4-5) always grows with height by f_z");
+        }
+        double nominal = f.has("thickness_mm") && !f.has("nominalThickness_mm") ? Double.NaN   // reported above
+                : f.requiredNumber("nominalThickness_mm", new Bound(0, true, MAX_NOMINAL_ICE_MM, true), "mm");
+        double importance = f.optionalNumber("importanceFactor", IMPORTANCE, "",
+                IceSpec.Asce7Map.DEFAULT_IMPORTANCE_FACTOR);
+        return new IceSpec.Asce7Map(nominal, importance);
+    }
+
+    /** Without the asce7 wind: the design thickness at 10 m as given, constant or grown by f_z. */
+    private IceSpec.Thickness givenThickness(Fields f) {
+        for (String key : List.of("nominalThickness_mm", "importanceFactor")) {
+            if (f.has(key)) {
+                problems.add(f.path(key), "applies with the asce7 wind (ASCE 7 chapter 10 design thickness); without it"
+                        + " give thickness_mm, the design ice thickness at 10 m");
+            }
+        }
+        double thickness = f.has("nominalThickness_mm") && !f.has("thickness_mm") ? Double.NaN   // reported above
+                : f.requiredNumber("thickness_mm", new Bound(0, true, MAX_ICE_MM, true), "mm");
+        Boolean heightFactor = f.optionalBool("heightFactor", true);
+        return new IceSpec.Given(thickness, heightFactor == null || heightFactor);   // null: reported
     }
 
     private List<CombinationSpec> combinations(JsonNode array, String path, boolean hasWind, boolean hasIce) {

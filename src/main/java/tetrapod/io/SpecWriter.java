@@ -364,9 +364,16 @@ public final class SpecWriter {
 
     private static Map<String, Object> ice(IceSpec ice) {
         Map<String, Object> m = new LinkedHashMap<>();
-        m.put("thickness_mm", ice.thickness());
-        m.put("density", ice.density());
-        m.put("heightFactor", ice.heightFactor());
+        if (ice.thickness() instanceof IceSpec.Asce7Map map) {
+            m.put("nominalThickness_mm", map.nominal());
+            m.put("importanceFactor", map.importanceFactor());
+            m.put("density", ice.density());
+        } else {
+            IceSpec.Given given = (IceSpec.Given) ice.thickness();
+            m.put("thickness_mm", given.thickness());
+            m.put("density", ice.density());
+            m.put("heightFactor", given.heightFactor());
+        }
         if (!Double.isNaN(ice.windSpeed())) {
             m.put("windSpeed", ice.windSpeed());
         }

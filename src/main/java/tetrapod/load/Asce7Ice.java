@@ -16,11 +16,13 @@ import tetrapod.model.SectionShape;
  * (10.4-2), and every wind width grows by twice the thickness. Equation numbers and the height
  * factor are recalled from memory (docs/methods.md). SI units.
  *
- * @param thickness    design radial thickness t_d at 10 m above ground, m (0: no ice)
+ * @param thickness    design radial thickness t_d at 33 ft (10.06 m) above ground, m (0: no ice)
  * @param density      ice density, kg/m³ (§10.4.1: at least 56 pcf ≈ 900 kg/m³)
  * @param heightFactor whether t_d grows with height by f_z
+ * @param map          the ASCE 7 map values t_d was computed from by (10.4-5), or null when the
+ *                     model gave t_d itself
  */
-public record Asce7Ice(double thickness, double density, boolean heightFactor) {
+public record Asce7Ice(double thickness, double density, boolean heightFactor, MapValues map) {
 
     /** No ice. */
     public static final Asce7Ice NONE = new Asce7Ice(0, 900, false);
@@ -29,17 +31,39 @@ public record Asce7Ice(double thickness, double density, boolean heightFactor) {
     /** Above 900 ft f_z = 1.4. */
     public static final double TOP_OF_HEIGHT_FACTOR = 900 * Asce7Wind.FOOT;
 
+    /**
+     * @param nominal           nominal ice thickness t of the map, m
+     * @param importanceFactor  I_i, no unit
+     * @param topographicFactor K_zt, no unit
+     */
+    public record MapValues(double nominal, double importanceFactor, double topographicFactor) { }
+
     public Asce7Ice {
         if (!(thickness >= 0) || !(density > 0)) {
             throw new IllegalArgumentException("ice thickness must be >= 0 and density > 0");
         }
     }
 
+    /** The design thickness as given (no map values). */
+    public Asce7Ice(double thickness, double density, boolean heightFactor) {
+        this(thickness, density, heightFactor, null);
+    }
+
+    /** The ice of the ASCE 7 map: t_d(z) = 2.0 t I_i f_z K_zt^0.35, growing with height. */
+    public static Asce7Ice fromMap(MapValues map, double density) {
+        return new Asce7Ice(designThickness(map, 1.0), density, true, map);   // f_z = 1 at 33 ft
+    }
+
+    /** Design ice thickness t_d = 2.0 t I_i f_z K_zt^0.35 at height factor f_z, m. */
+    public static double designThickness(MapValues map, double fz) {
+        return 2.0 * map.nominal() * map.importanceFactor() * fz * Math.pow(map.topographicFactor(), 0.35);   // ASCE 7-16 10.4.6 (10.4-5)
+    }
+
     public boolean isNone() {
         return thickness == 0;
     }
 
-    /** Height factor f_z = (z/33 ft)^0.10 up to 900 ft, 1.4 above. */
+    /** Height factor f_z = (z/33 ft)^0.10 for 0 < z ≤ 900 ft, 1.4 above. */
     public static double heightFactor(double z) {
         if (z <= 0) {
             return 0;

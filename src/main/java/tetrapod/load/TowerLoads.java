@@ -39,6 +39,7 @@ public final class TowerLoads {
     private final List<NodeForce> ancillaryWeight;
     private final List<NodeForce> dead;
     private final List<NodeForce> ice;
+    private final Asce7Ice icing;
     private final List<NodeForce> nodal;
     private final WindLoads wind;
     private final WindLoads windOnIce;
@@ -47,7 +48,7 @@ public final class TowerLoads {
     private final LoadBasis basis;
 
     private TowerLoads(Tower tower, List<NodeForce> selfWeight, List<NodeForce> ancillaryWeight, List<NodeForce> ice,
-                       List<NodeForce> nodal, WindLoads wind, WindLoads windOnIce, List<Combination> combinations,
+                       Asce7Ice icing, List<NodeForce> nodal, WindLoads wind, WindLoads windOnIce, List<Combination> combinations,
                        double sweepStep) {
         this.tower = tower;
         this.selfWeight = List.copyOf(selfWeight);
@@ -57,6 +58,7 @@ public final class TowerLoads {
         d.add(ancillaryWeight, 1);
         this.dead = d.toList();
         this.ice = List.copyOf(ice);
+        this.icing = icing;
         this.nodal = List.copyOf(nodal);
         this.wind = wind;
         this.windOnIce = windOnIce;
@@ -96,7 +98,7 @@ public final class TowerLoads {
         NodalLoads mergedNodal = new NodalLoads();
         mergedNodal.add(nodal, 1);
         List<NodeForce> selfWeight = SelfWeight.of(tower.frame(), tower.connectionAllowance());
-        Asce7Ice ice = WindProfiles.ice(spec.ice());
+        Asce7Ice ice = WindProfiles.ice(spec.ice(), spec.wind());
         List<NodeForce> ancillaryWeight = List.of();
         List<NodeForce> iceWeight = List.of();
         WindLoads wind = null;
@@ -121,7 +123,7 @@ public final class TowerLoads {
                 ? DefaultCombinations.of(spec.hasWind() ? spec.wind().method() : null, spec.hasIce(),
                         !spec.nodal().isEmpty(), tower.isGenerated())
                 : spec.combinations().stream().map(TowerLoads::combination).toList();
-        return new TowerLoads(tower, selfWeight, ancillaryWeight, iceWeight, mergedNodal.toList(), wind, windOnIce,
+        return new TowerLoads(tower, selfWeight, ancillaryWeight, iceWeight, ice, mergedNodal.toList(), wind, windOnIce,
                 combinations, spec.sweepStep());
     }
 
@@ -211,6 +213,11 @@ public final class TowerLoads {
     /** Weight of the ice on members and ancillaries, N; empty without ice. */
     public List<NodeForce> ice() {
         return ice;
+    }
+
+    /** The ice and its design thickness ({@link Asce7Ice#NONE} without ice). */
+    public Asce7Ice icing() {
+        return icing;
     }
 
     /** The file's nodal loads, N and N·m, merged by node. */

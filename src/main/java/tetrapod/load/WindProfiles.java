@@ -38,8 +38,20 @@ public final class WindProfiles {
         return bare;
     }
 
-    /** The ice of the spec in SI. */
-    public static Asce7Ice ice(IceSpec ice) {
-        return ice == null ? Asce7Ice.NONE : new Asce7Ice(ice.thickness() * Units.MM, ice.density(), ice.heightFactor());
+    /**
+     * The ice of the spec in SI: the design thickness as given, or from the ASCE 7 map values with the
+     * wind's K_zt (ASCE 7 (10.4-5)).
+     */
+    public static Asce7Ice ice(IceSpec ice, WindSpec wind) {
+        if (ice == null) {
+            return Asce7Ice.NONE;
+        }
+        if (ice.thickness() instanceof IceSpec.Asce7Map map) {
+            double kzt = wind instanceof WindSpec.Asce7 a ? a.topographicFactor() : 1.0;
+            return Asce7Ice.fromMap(new Asce7Ice.MapValues(map.nominal() * Units.MM, map.importanceFactor(), kzt),
+                    ice.density());
+        }
+        IceSpec.Given given = (IceSpec.Given) ice.thickness();
+        return new Asce7Ice(given.thickness() * Units.MM, ice.density(), given.heightFactor());
     }
 }

@@ -6,7 +6,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import tetrapod.report.Rows.CheckRow;
-import tetrapod.report.Rows.HandRow;
 import tetrapod.report.Rows.LegSweep;
 import tetrapod.report.Rows.MemberRow;
 import tetrapod.report.Rows.PanelRow;
@@ -143,16 +142,5 @@ final class ChartData {
             }
         }
         return true;
-    }
-
-    /** The combination the hand-method comparison is shown for: the one with the largest analysed leg compression. */
-    static String handCombination(List<HandRow> hand) {
-        HandRow best = null;
-        for (HandRow h : hand) {
-            if (best == null || h.feCompression() > best.feCompression()) {
-                best = h;
-            }
-        }
-        return best == null ? null : best.combination();
     }
 }

@@ -112,20 +112,25 @@ final class Charts {
         return Figure.draw("fig-histogram", "Members by governing utilisation, stacked by role.", chart, WIDTH, HEIGHT);
     }
 
-    /** Hand method and analysis leg forces against azimuth for one combination. */
+    /** Hand method and analysis leg forces against azimuth: compression and uplift each in the combination governing it. */
     static Optional<Figure> handComparison(Results r) {
-        String combination = ChartData.handCombination(r.hand());
-        if (combination == null) {
+        Optional<Rows.HandCase> compression = r.handCase("compression");
+        Optional<Rows.HandCase> uplift = r.handCase("uplift");
+        if (compression.isEmpty() || uplift.isEmpty()) {
             return Optional.empty();
         }
+        String c = compression.get().combination();
+        String u = uplift.get().combination();
         XYSeries handC = new XYSeries("compression, hand method", false, true);
         XYSeries feC = new XYSeries("compression, analysis", false, true);
         XYSeries handT = new XYSeries("uplift, hand method", false, true);
         XYSeries feT = new XYSeries("uplift, analysis", false, true);
         for (HandRow h : r.hand()) {
-            if (h.combination().equals(combination)) {
+            if (h.combination().equals(c)) {
                 handC.add(h.azimuthDeg(), h.handCompression() / 1e3);
                 feC.add(h.azimuthDeg(), h.feCompression() / 1e3);
+            }
+            if (h.combination().equals(u)) {
                 handT.add(h.azimuthDeg(), h.handUplift() / 1e3);
                 feT.add(h.azimuthDeg(), h.feUplift() / 1e3);
             }
@@ -148,8 +153,8 @@ final class Charts {
         renderer.setSeriesPaint(3, ChartStyle.series(1));
         renderer.setSeriesStroke(0, ChartStyle.DASHED);
         renderer.setSeriesStroke(2, ChartStyle.DASHED);
-        return Optional.of(Figure.draw("fig-hand", "Leg base forces against azimuth, " + combination
-                + ": the hand method (dashed) beside the analysis (solid).", chart, WIDTH, HEIGHT));
+        return Optional.of(Figure.draw("fig-hand", "Leg base forces against azimuth, compression in " + c + ", uplift in "
+                + u + ": the hand method (dashed) beside the analysis (solid).", chart, WIDTH, HEIGHT));
     }
 
     /** Steel mass and largest utilisation at each iteration of tetrapod size (two range axes). */

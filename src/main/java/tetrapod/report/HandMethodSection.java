@@ -3,6 +3,9 @@ package tetrapod.report;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import java.util.function.ToDoubleFunction;
+import tetrapod.report.Rows.HandCase;
 import tetrapod.report.Rows.HandRow;
 import tetrapod.report.Table.Cell;
 
@@ -22,9 +25,9 @@ final class HandMethodSection implements Section {
     @Override
     public void write(Html out, ReportInput ri) {
         Results r = ri.results();
-        List<HandRow> all = r.hand();
-        String combination = ChartData.handCombination(all);
-        if (combination == null) {
+        Optional<HandCase> compression = r.handCase("compression");
+        Optional<HandCase> uplift = r.handCase("uplift");
+        if (compression.isEmpty() || uplift.isEmpty()) {
             out.p("No comparison: the hand method needs a generated tower with wind (an explicit frame has no base "
                     + "width to split the moment over).");
             return;
@@ -34,40 +37,56 @@ final class HandMethodSection implements Section {
                 + "carries N/4 + M/lever and the most lifted one M/lever − N/4. The lever is d = √(bx² + by²) for wind "
                 + "along the base diagonal and 2b for wind normal to a face; for any azimuth θ the moment is split "
                 + "as M (|cos θ|/(2 bx) + |sin θ|/(2 by)). The analysis takes the same loads through the 3D frame.");
-        out.p("Shown for " + combination + ", the combination with the largest leg compression; results.json "
-                + "handMethod gives every combination at every azimuth of the sweep.");
+        HandCase c = compression.get();
+        HandCase u = uplift.get();
+        out.p("Each quantity is compared in the combination that governs it: compression in " + c.combination()
+                + ", the combination of the analysis' largest leg compression (" + Format.kN(c.fe()) + " kN at "
+                + Format.degrees(c.azimuthDeg()) + "°); uplift in " + u.combination() + ", the combination of its "
+                + "largest uplift (" + Format.kN(u.fe()) + " kN at " + Format.degrees(u.azimuthDeg()) + "°). "
+                + "results.json handMethodGoverning names both; handMethod gives every combination at every azimuth "
+                + "of the sweep.");
+        List<HandRow> all = r.hand();
         List<Double> reported = r.wind().stream().map(Rows.WindRow::azimuthDeg).toList();
-        Table t = new Table("hand-table", "", List.of("azimuth", "N, kN", "H, kN", "z of H, m", "M, kN·m",
-                "compression hand, kN", "compression analysis, kN", "difference, %", "uplift hand, kN",
-                "uplift analysis, kN", "difference, %"));
+        out.element("h3", "Compression, " + c.combination());
+        table("hand-compression", all, c.combination(), reported, HandRow::handCompression, HandRow::feCompression,
+                HandRow::compressionDiffPct).writeTo(out);
+        out.element("h3", "Uplift, " + u.combination());
+        table("hand-uplift", all, u.combination(), reported, HandRow::handUplift, HandRow::feUplift,
+                HandRow::upliftDiffPct).writeTo(out);
+        Charts.handComparison(r).ifPresent(f -> ReportHtml.figure(out, f));
         double worstDiff = 0;
         Double worstAt = null;
         for (HandRow h : all) {
-            if (!h.combination().equals(combination)) {
-                continue;
-            }
-            double d = Math.max(Math.abs(h.compressionDiffPct()), Math.abs(h.upliftDiffPct()));
+            double d = Math.max(h.combination().equals(c.combination()) ? Math.abs(h.compressionDiffPct()) : 0,
+                    h.combination().equals(u.combination()) ? Math.abs(h.upliftDiffPct()) : 0);
             if (d > worstDiff) {
                 worstDiff = d;
                 worstAt = h.azimuthDeg();
             }
-            if (!reported.isEmpty() && !reported.contains(h.azimuthDeg())) {
-                continue;
-            }
-            t.row(Cell.num(Format.degrees(h.azimuthDeg()) + "°"), Cell.num(Format.kN(h.n())), Cell.num(Format.kN(h.h())),
-                    Cell.num(Format.metres(h.zH())), Cell.num(Format.kNm(h.m())), Cell.num(Format.kN(h.handCompression())),
-                    Cell.num(Format.kN(h.feCompression())), Cell.num(Format.fixed(h.compressionDiffPct(), 1)),
-                    Cell.num(Format.kN(h.handUplift())), Cell.num(Format.kN(h.feUplift())),
-                    Cell.num(Format.fixed(h.upliftDiffPct(), 1)));
         }
-        t.writeTo(out);
-        Charts.handComparison(r).ifPresent(f -> ReportHtml.figure(out, f));
         out.element("h3", "Why the two differ");
         out.open("ul");
         for (String reason : reasons(r, worstDiff, worstAt)) {
             out.element("li", reason);
         }
         out.close("ul");
+    }
+
+    /** One combination's rows at the reported azimuths: N, M, the hand value, the analysis' value, the difference. */
+    private static Table table(String id, List<HandRow> all, String combination, List<Double> reported,
+                               ToDoubleFunction<HandRow> hand, ToDoubleFunction<HandRow> fe,
+                               ToDoubleFunction<HandRow> diff) {
+        Table t = new Table(id, "", List.of("azimuth", "N, kN", "H, kN", "z of H, m", "M, kN·m", "hand, kN",
+                "analysis, kN", "difference, %"));
+        for (HandRow h : all) {
+            if (!h.combination().equals(combination) || (!reported.isEmpty() && !reported.contains(h.azimuthDeg()))) {
+                continue;
+            }
+            t.row(Cell.num(Format.degrees(h.azimuthDeg()) + "°"), Cell.num(Format.kN(h.n())), Cell.num(Format.kN(h.h())),
+                    Cell.num(Format.metres(h.zH())), Cell.num(Format.kNm(h.m())), Cell.num(Format.kN(hand.applyAsDouble(h))),
+                    Cell.num(Format.kN(fe.applyAsDouble(h))), Cell.num(Format.fixed(diff.applyAsDouble(h), 1)));
+        }
+        return t;
     }
 
     private static List<String> reasons(Results r, double worstDiff, Double worstAt) {

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import tetrapod.report.Rows.CombinationRow;
+import tetrapod.report.Rows.IceRow;
 import tetrapod.report.Rows.MemberRow;
 import tetrapod.report.Table.Cell;
 
@@ -65,6 +66,9 @@ final class InputSection implements Section {
                     out.element("h4", key.equals("nodal") ? "nodal loads" : key);
                     InputTables.flat("input-" + key, r, loads.get(key), "$.loads." + key).writeTo(out);
                 }
+                if (key.equals("ice")) {
+                    r.ice().ifPresent(ice -> out.p(designIce(ice)));
+                }
             }
             if (loads.containsKey("ancillaries")) {
                 out.element("h4", "ancillaries");
@@ -93,6 +97,19 @@ final class InputSection implements Section {
         }
         out.element("h3", "Everything Tetrapod assumed");
         assumed(r).writeTo(out);
+    }
+
+    /** The design ice thickness the analysis used, with the rule that gave it. */
+    private static String designIce(IceRow ice) {
+        String rule = "asce7".equals(ice.rule())
+                ? "computed by ASCE 7 (10.4-5), t_d = 2.0 t I_i f_z K_zt^0.35, from the map's nominal thickness t = "
+                        + Format.fixed(ice.nominal() * 1e3, 1) + " mm, I_i = " + Format.fixed(ice.importanceFactor(), 2)
+                        + " and the wind's K_zt = " + Format.fixed(ice.topographicFactor(), 2) + ", with f_z = (z/33 ft)^0.10"
+                : "as the model file gives it" + (ice.heightFactor() ? ", grown with height by f_z = (z/33 ft)^0.10"
+                        : ", the same at every height");
+        return "Design ice thickness t_d " + rule + ": " + Format.fixed(ice.atReference() * 1e3, 1) + " mm at "
+                + Format.metres(ice.referenceHeight()) + " m (33 ft) and " + Format.fixed(ice.atTop() * 1e3, 1)
+                + " mm at the top (" + Format.metres(ice.topHeight()) + " m).";
     }
 
     private static Table geometry(Results r, Map<String, Object> in) {

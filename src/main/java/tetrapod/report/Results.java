@@ -13,7 +13,9 @@ import tetrapod.report.Rows.RequirementRow;
 import tetrapod.report.Rows.CombinationRow;
 import tetrapod.report.Rows.FootingCheck;
 import tetrapod.report.Rows.FootingRow;
+import tetrapod.report.Rows.HandCase;
 import tetrapod.report.Rows.HandRow;
+import tetrapod.report.Rows.IceRow;
 import tetrapod.report.Rows.LegBaseRow;
 import tetrapod.report.Rows.LegSweep;
 import tetrapod.report.Rows.MemberRow;
@@ -268,6 +270,36 @@ public final class Results {
                     Tree.num(fe, "maxTension"), Tree.num(diff, "compression"), Tree.num(diff, "tension")));
         }
         return out;
+    }
+
+    /**
+     * The hand-method comparison of {@code quantity} ("compression" or "uplift") in the case that
+     * governs it; empty when the results have none.
+     */
+    public Optional<HandCase> handCase(String quantity) {
+        Map<String, Object> c = Tree.mapOrEmpty(Tree.mapOrEmpty(doc, "handMethodGoverning"), quantity);
+        if (c.isEmpty()) {
+            return Optional.empty();
+        }
+        return Optional.of(new HandCase(Tree.str(c, "combination"), Tree.num(c, "azimuthDeg"), Tree.num(c, "N"),
+                Tree.num(c, "M"), Tree.num(c, "hand"), Tree.num(c, "fe"), Tree.num(c, "differencePct")));
+    }
+
+    /** The ice the analysis used; empty without ice. */
+    public Optional<IceRow> ice() {
+        Map<String, Object> i = Tree.mapOrEmpty(doc, "ice");
+        if (i.isEmpty()) {
+            return Optional.empty();
+        }
+        return Optional.of(new IceRow(Tree.str(i, "rule"), orNaN(i, "nominalThickness"), orNaN(i, "importanceFactor"),
+                orNaN(i, "topographicFactor"), Tree.bool(i, "heightFactor"), Tree.num(i, "referenceHeight"),
+                Tree.num(i, "designThicknessAtReference"), Tree.num(i, "topHeight"),
+                Tree.num(i, "designThicknessAtTop")));
+    }
+
+    private static double orNaN(Map<String, Object> parent, String key) {
+        Double v = Tree.numOrNull(parent, key);
+        return v == null ? Double.NaN : v;
     }
 
     public List<CombinationRow> combinations() {

@@ -15,6 +15,8 @@ import tetrapod.load.Combination;
 import tetrapod.model.Material;
 import tetrapod.model.spec.LoadAction;
 import tetrapod.analysis.HandComparison;
+import tetrapod.analysis.HandGoverning;
+import tetrapod.load.Asce7Ice;
 import tetrapod.analysis.LegBaseExtremes;
 import tetrapod.check.Extreme;
 import tetrapod.check.FoundationEnvelope;
@@ -72,6 +74,8 @@ public final class ResultsDocument {
         doc.put("foundations", result.foundations().stream().map(ResultsDocument::foundation).toList());
         doc.put("legBases", result.legBases().stream().map(ResultsDocument::legBase).toList());
         doc.put("handMethod", result.hand().stream().map(ResultsDocument::hand).toList());
+        doc.put("handMethodGoverning", result.handGoverning().map(ResultsDocument::handGoverning).orElse(null));
+        doc.put("ice", ice(result));
         doc.put("combinations", result.loads().combinations().stream().map(ResultsDocument::combination).toList());
         doc.put("material", material(result.tower().frame().material()));
         doc.put("steel", steel(result.tower()));
@@ -204,6 +208,50 @@ public final class ResultsDocument {
         diff.put("compression", clean(h.compressionDifferencePct()));
         diff.put("tension", clean(h.tensionDifferencePct()));
         m.put("differencePct", diff);
+        return m;
+    }
+
+    private static Map<String, Object> handGoverning(HandGoverning g) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        HandComparison c = g.compression();
+        m.put("compression", governingCase(c, c.hand().legs().compression(), c.feMaxCompression(),
+                c.compressionDifferencePct()));
+        HandComparison u = g.uplift();
+        m.put("uplift", governingCase(u, u.hand().legs().tension(), u.feMaxTension(), u.tensionDifferencePct()));
+        return m;
+    }
+
+    private static Map<String, Object> governingCase(HandComparison h, double hand, double fe, double differencePct) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("combination", h.combination());
+        m.put("azimuthDeg", h.hand().azimuthDeg());
+        m.put("N", clean(h.hand().n()));
+        m.put("M", clean(h.hand().m()));
+        m.put("hand", clean(hand));
+        m.put("fe", clean(fe));
+        m.put("differencePct", clean(differencePct));
+        return m;
+    }
+
+    /** The ice and its design thickness at 33 ft and at the top of the tower; null without ice. */
+    private static Map<String, Object> ice(AnalysisResult result) {
+        Asce7Ice ice = result.loads().icing();
+        if (ice.isNone()) {
+            return null;
+        }
+        Asce7Ice.MapValues map = ice.map();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("rule", map == null ? "given" : "asce7");
+        m.put("nominalThickness", map == null ? null : map.nominal());
+        m.put("importanceFactor", map == null ? null : map.importanceFactor());
+        m.put("topographicFactor", map == null ? null : map.topographicFactor());
+        m.put("heightFactor", ice.heightFactor());
+        m.put("density", ice.density());
+        m.put("referenceHeight", Asce7Ice.REFERENCE_HEIGHT);
+        m.put("designThicknessAtReference", ice.thicknessAt(Asce7Ice.REFERENCE_HEIGHT));
+        double top = result.tower().height();
+        m.put("topHeight", top);
+        m.put("designThicknessAtTop", ice.thicknessAt(top));
         return m;
     }
 

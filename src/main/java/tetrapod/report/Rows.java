@@ -96,6 +96,23 @@ public final class Rows {
                           double handCompression, double handUplift, double feCompression, double feUplift,
                           double compressionDiffPct, double upliftDiffPct) { }
 
+    /**
+     * One hand-method comparison in the case where the analysis' value is largest: the combination
+     * that governs the quantity, the azimuth, N (N), M (N·m), the hand and analysis values (N) and
+     * their difference (percent).
+     */
+    public record HandCase(String combination, double azimuthDeg, double n, double m, double hand, double fe,
+                           double differencePct) { }
+
+    /**
+     * The ice the analysis used: the rule ("asce7": from the map values; "given"), the map's nominal
+     * thickness (m), I_i and K_zt (NaN for the given rule), whether it grows with height, and the
+     * design thickness (m) at the reference height and at the top (heights in m).
+     */
+    public record IceRow(String rule, double nominal, double importanceFactor, double topographicFactor,
+                         boolean heightFactor, double referenceHeight, double atReference, double topHeight,
+                         double atTop) { }
+
     /** A load combination and its factors by action name. */
     public record CombinationRow(String name, java.util.Map<String, Double> factors, boolean wind) {
         public CombinationRow {

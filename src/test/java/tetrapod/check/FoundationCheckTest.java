@@ -1,6 +1,7 @@
 package tetrapod.check;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import org.junit.jupiter.api.Test;
 import tetrapod.model.spec.BoltGrade;
@@ -27,16 +28,45 @@ class FoundationCheckTest {
     }
 
     /**
-     * Tension with shear, EN 1993-1-8 Table 3.4: F_v,Ed/F_v,Rd + F_t,Ed/(1.4 F_t,Rd); M24 8.8 through the
-     * threads F_v,Rd = 0.6 · 800 · 353/1.25 = 135.6 kN; 100 kN tension and 40 kN shear per rod:
-     * 40/135.6 + 100/(1.4 · 203.3) = 0.2950 + 0.3514 = 0.646.
+     * Shear of anchor bolts, EN 1993-1-8 6.2.2 (7): F_2,vb,Rd = α_bc f_ub A_s/γM2 with
+     * α_bc = 0.44 − 0.0003 f_yb (f_yb in N/mm²), by hand:
+     * M24 8.8 (f_yb = 640, f_ub = 800 N/mm², Table 3.1; A_s = 353 mm², ISO 898-1):
+     * α_bc = 0.44 − 0.0003 · 640 = 0.44 − 0.192 = 0.248; F = 0.248 · 800 · 353/1.25 = 70 035.2/1.25 = 56 028 N.
+     * The α_v = 0.6 of Table 3.4 would give 0.6 · 800 · 353/1.25 = 135 552 N, 0.6/0.248 = 2.42 times as much.
+     * M20 4.6 (f_yb = 240, f_ub = 400; A_s = 245 mm²): α_bc = 0.44 − 0.072 = 0.368;
+     * F = 0.368 · 400 · 245/1.25 = 28 851 N.
+     */
+    @Test
+    void anchorBoltShearByTheAnchorBoltFactor() {
+        En1993AnchorRods m24 = new En1993AnchorRods(4, 0.024, BoltGrade.G8_8, 1.25);
+        assertEquals(0.248, m24.alphaBc(), 1e-12);
+        assertEquals(56_028, m24.shearResistance(), 56_028 * 0.005);   // A_s 352.50 against the table's 353 mm²
+        // four rods, 112 kN of shear: 28 kN per rod, 28/56.03 = 0.4997
+        CheckResult shear = m24.check(0, 112e3).get(1);
+        assertEquals(CheckMode.ANCHOR_SHEAR, shear.mode());
+        assertEquals(0.4997, shear.utilisation(), 0.003);
+        En1993AnchorRods m20 = new En1993AnchorRods(1, 0.020, BoltGrade.G4_6, 1.25);
+        assertEquals(0.368, m20.alphaBc(), 1e-12);
+        assertEquals(28_851, m20.shearResistance(), 28_851 * 0.005);
+    }
+
+    /** 10.9 rods (f_yb = 900 N/mm², Table 3.1) lie outside 235 ≤ f_yb ≤ 640 N/mm² of EN 1993-1-8 6.2.2 (7). */
+    @Test
+    void gradeTenNineRodsAreOutsideTheAnchorBoltRule() {
+        assertThrows(IllegalArgumentException.class, () -> new En1993AnchorRods(4, 0.024, BoltGrade.G10_9, 1.25));
+    }
+
+    /**
+     * Tension with shear, EN 1993-1-8 Table 3.4: F_v,Ed/F_v,Rd + F_t,Ed/(1.4 F_t,Rd); M24 8.8 in shear
+     * F_v,Rd = 56.03 kN (6.2.2 (7), above), in tension F_t,Rd = 203.3 kN; 100 kN tension and 40 kN shear
+     * per rod: 40/56.03 + 100/(1.4 · 203.3) = 0.7139 + 0.3514 = 1.065.
      */
     @Test
     void rodInTensionWithShear() {
         En1993AnchorRods rods = new En1993AnchorRods(1, 0.024, BoltGrade.G8_8, 1.25);
         CheckResult combined = rods.check(100e3, 40e3).get(2);
         assertEquals(CheckMode.ANCHOR_COMBINED, combined.mode());
-        assertEquals(0.646, combined.utilisation(), 0.004);
+        assertEquals(1.065, combined.utilisation(), 0.004);
     }
 
     /**

@@ -35,6 +35,28 @@ class AnalyzeCommandTest {
         }
     }
 
+    /**
+     * EN 1990 Table A1.2(B): the permanent action factored 1.35 where unfavourable (compression), 1.0 where
+     * favourable (uplift); the summary names the combination each hand-method comparison is made in.
+     */
+    @Test
+    void theSummaryNamesTheCombinationOfEachHandComparison(@TempDir Path dir) {
+        CliRun run = CliRun.of("analyze", "models/ridge-lookout-square.json", "-o", dir.toString());
+        assertTrue(run.out().contains("  compression in 1.35G + 1.5W (largest leg compression"), run.out());
+        assertTrue(run.out().contains("  uplift in 1.0G + 1.5W (largest uplift"), run.out());
+    }
+
+    /**
+     * ASCE 7 (10.4-5) on the harbour example's map values: t_d = 2.0 · 6.0 mm · I_i 1.00 · f_z · K_zt 1.00^0.35;
+     * f_z = 1 at 33 ft: 12.0 mm; at the top, 18 m = 59.06 ft: f_z = (59.06/33)^0.10 = 1.0599, 12.7 mm.
+     */
+    @Test
+    void theSummaryPrintsTheDesignIceThickness(@TempDir Path dir) {
+        CliRun run = CliRun.of("analyze", "models/harbour-beacon-rectangular.json", "-o", dir.toString());
+        assertTrue(run.out().contains("ice: t_d = 2.0 t I_i f_z K_zt^0.35 (ASCE 7 (10.4-5)) with map t = 6.0 mm, I_i = 1.00,"
+                + " K_zt = 1.00: 12.0 mm at 10 m (33 ft), 12.7 mm at the top (18.0 m)"), run.out());
+    }
+
     @ParameterizedTest
     @ValueSource(strings = {"k-panel-without-horizontals.json", "tripod-on-one-support.json"})
     void aMechanismExitsThreeNamingTheFreeNodes(String file, @TempDir Path dir) {

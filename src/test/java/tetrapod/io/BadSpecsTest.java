@@ -93,6 +93,8 @@ class BadSpecsTest {
                 new Case("ancillary-above-top.json", "loads.ancillaries[1].height", 12,
                         "is above the tower top (12 m), was 14.5", 1),
                 new Case("ice-negative-thickness.json", "loads.ice.thickness_mm", 10, "must be ≥ 0 mm and ≤ 300 mm, was -10", 1),
+                new Case("ice-asce7-design-thickness.json", "loads.ice.thickness_mm", 10,
+                        "is not read with the asce7 wind: give nominalThickness_mm", 1),
                 new Case("combination-misspelt-action.json", "loads.combinations[0].wnd", 11,
                         "unknown key; did you mean 'wind'?", 1),
                 new Case("combination-wind-without-wind.json", "loads.combinations[0].wind", 11,
@@ -113,7 +115,9 @@ class BadSpecsTest {
                 new Case("checks-uplift-both.json", "checks.foundation.uplift", 14,
                         "give either factorOfSafety (uplift × FS ≤ weights) or gammaStabilising (EN 1997 UPL), not both", 1),
                 new Case("checks-anchor-no-resistance.json", "checks.foundation.anchorRods", 15,
-                        "give either grade (4.6, 5.6, 8.8, 10.9) or allowableTension and allowableShear in MPa", 1),
+                        "give either grade (4.6, 5.6, 8.8) or allowableTension and allowableShear in MPa", 1),
+                new Case("checks-anchor-grade.json", "checks.foundation.anchorRods.grade", 15,
+                        "anchor rods of grade 10.9 (f_yb = 900 MPa) are outside EN 1993-1-8 6.2.2 (7)", 1),
                 new Case("checks-frustum-angle.json", "checks.foundation.frustumHalfAngle", 14,
                         "must be ≥ 0 degrees and < 90 degrees, was 90", 1));
     }

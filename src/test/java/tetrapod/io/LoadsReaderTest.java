@@ -69,7 +69,7 @@ class LoadsReaderTest {
                   "sweepStep": 0.5 }""").loads();
         assertEquals(List.of(new AncillarySpec.Point("a", 12, 1, 0.5, 1.2, 0, Face.X_MINUS),
                 new AncillarySpec.Linear("b", 0, 12, 0.1, 0.2, 1.5, 0.3, Face.NONE)), loads.ancillaries());
-        assertEquals(new IceSpec(10, 900, true, Double.NaN, 0.4), loads.ice());
+        assertEquals(new IceSpec(new IceSpec.Given(10, true), 900, Double.NaN, 0.4), loads.ice());
         assertEquals(List.of(new CombinationSpec("c", Map.of(LoadAction.DEAD, 1.1, LoadAction.WIND_ON_ICE, 0.9))),
                 loads.combinations());
         assertEquals(0.5, loads.sweepStep());
@@ -116,6 +116,35 @@ class LoadsReaderTest {
                 + " windPressure (kPa)"), found);
     }
 
+    /** With the asce7 wind the ice is the map's nominal thickness and I_i (default 1.0, risk category II). */
+    @Test
+    void asce7IceIsTheMapValue() throws BadInputException {
+        LoadsSpec loads = read("{ \"wind\": { \"method\": \"asce7\", \"speed\": 50, \"exposure\": \"C\" },"
+                + " \"ice\": { \"nominalThickness_mm\": 25.4, \"windSpeed\": 18 } }").loads();
+        assertEquals(new IceSpec(new IceSpec.Asce7Map(25.4, 1.0), 900, 18, Double.NaN), loads.ice());
+        loads = read("{ \"wind\": { \"method\": \"asce7\", \"speed\": 50, \"exposure\": \"C\" },"
+                + " \"ice\": { \"nominalThickness_mm\": 12, \"importanceFactor\": 1.25 } }").loads();
+        assertEquals(new IceSpec.Asce7Map(12, 1.25), loads.ice().thickness());
+    }
+
+    /** The old design-thickness keys are refused with the asce7 wind, naming the new key; the map keys without it. */
+    @Test
+    void iceKeysOfTheOtherRuleAreRefusedByName() {
+        List<String> found = problems("{ \"wind\": { \"method\": \"asce7\", \"speed\": 50, \"exposure\": \"C\" },"
+                + " \"ice\": { \"thickness_mm\": 12, \"heightFactor\": false } }");
+        assertEquals(2, found.size(), found::toString);
+        assertTrue(found.get(0).startsWith("loads.ice.thickness_mm: is not read with the asce7 wind: give nominalThickness_mm"),
+                found::toString);
+        assertTrue(found.get(1).startsWith("loads.ice.heightFactor: does not apply with the asce7 wind"), found::toString);
+        found = problems("{ \"wind\": { \"method\": \"en1991\", \"basicSpeed\": 24, \"terrain\": \"II\" },"
+                + " \"ice\": { \"nominalThickness_mm\": 12, \"importanceFactor\": 1.25 } }");
+        assertTrue(found.contains("loads.ice.nominalThickness_mm: applies with the asce7 wind (ASCE 7 chapter 10 design"
+                + " thickness); without it give thickness_mm, the design ice thickness at 10 m"), found::toString);
+        assertTrue(found.contains("loads.ice.importanceFactor: applies with the asce7 wind (ASCE 7 chapter 10 design"
+                + " thickness); without it give thickness_mm, the design ice thickness at 10 m"), found::toString);
+        assertEquals(2, found.size(), found::toString);
+    }
+
     @Test
     void missingRequiredKeysAreNamed() {
         List<String> found = problems("{ \"wind\": { \"method\": \"asce7\" } }");
@@ -129,7 +158,7 @@ class LoadsReaderTest {
                 .loads();
         assertEquals(new WindSpec.Uniform(0.9, 2.4), loads.wind());
         assertEquals(2, loads.ancillaries().size());
-        assertEquals(new IceSpec(8, 850, false, Double.NaN, 0.35), loads.ice());
+        assertEquals(new IceSpec(new IceSpec.Given(8, false), 850, Double.NaN, 0.35), loads.ice());
         assertEquals(2, loads.combinations().size());
         assertEquals(2.5, loads.sweepStep());
     }

@@ -66,9 +66,10 @@ class SchemaTest {
         "restraint-wrong-length.json", "frame-unknown-role.json", "frame-with-tower-supports.json",
         "not-an-object.json", "wind-negative-speed.json", "wind-absurd-speed.json", "wind-unknown-terrain.json",
         "wind-unknown-exposure.json", "wind-unknown-method.json", "wind-key-of-other-method.json",
-        "wind-direction-factors-count.json", "ice-negative-thickness.json", "combination-misspelt-action.json",
+        "wind-direction-factors-count.json", "ice-negative-thickness.json", "ice-asce7-design-thickness.json", "combination-misspelt-action.json",
         "wind-on-explicit-frame.json",
-        "checks-unknown-key.json", "checks-bolt-grade.json", "checks-bolt-size.json", "checks-uplift-both.json", "checks-anchor-no-resistance.json", "checks-frustum-angle.json"})
+        "checks-unknown-key.json", "checks-bolt-grade.json", "checks-bolt-size.json", "checks-uplift-both.json", "checks-anchor-no-resistance.json", "checks-anchor-grade.json",
+        "checks-frustum-angle.json"})
     void schemaRefusesBadSpecs(String file) throws IOException {
         JsonNode tree = MAPPER.readTree(BadSpecsTest.resource(file));
         assertFalse(schema().validate(tree).isEmpty(), file + " passed the schema");

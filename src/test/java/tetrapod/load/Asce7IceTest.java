@@ -42,6 +42,27 @@ class Asce7IceTest {
         assertEquals(0.025 * Math.pow(60 / (33 * 0.3048), 0.1), ice.thicknessAt(60), 1e-12);
     }
 
+    /**
+     * Design thickness from the map, ASCE 7 (10.4-5) t_d = 2.0 t I_i f_z K_zt^0.35, by hand:
+     * t = 1 in, I_i = 1.25 (risk category IV, Table 1.5-2), z = 100 ft, K_zt = 1.0:
+     * f_z = (100/33)^0.10 = exp(0.10 · ln 3.0303) = exp(0.10 · 1.108663) = exp(0.1108663) = 1.117245;
+     * t_d = 2.0 · 1 · 1.25 · 1.117245 · 1.0^0.35 = 2.793114 in = 70.945 mm.
+     * With K_zt = 1.2: 1.2^0.35 = exp(0.35 · ln 1.2) = exp(0.35 · 0.1823216) = exp(0.0638126) = 1.065893;
+     * t_d = 2.793114 · 1.065893 = 2.977160 in = 75.620 mm. At 33 ft f_z = 1: t_d = 2.0 · 1 · 1.25 = 2.5 in = 63.5 mm.
+     */
+    @Test
+    void designThicknessFromTheMapByHand() {
+        double inch = 0.0254;
+        double z = 100 * 0.3048;
+        Asce7Ice flat = Asce7Ice.fromMap(new Asce7Ice.MapValues(1 * inch, 1.25, 1.0), 900);
+        assertEquals(70.945e-3, flat.thicknessAt(z), 0.0005e-3);
+        assertEquals(63.5e-3, flat.thicknessAt(33 * 0.3048), 1e-9);
+        assertEquals(63.5e-3, flat.thickness(), 1e-12);
+        Asce7Ice hill = Asce7Ice.fromMap(new Asce7Ice.MapValues(1 * inch, 1.25, 1.2), 900);
+        assertEquals(75.620e-3, hill.thicknessAt(z), 0.0005e-3);
+        assertEquals(75.620e-3, Asce7Ice.designThickness(hill.map(), Asce7Ice.heightFactor(z)), 0.0005e-3);
+    }
+
     @Test
     void itemIceAndIcedArea() {
         Asce7Ice ice = new Asce7Ice(0.01, 900, false);

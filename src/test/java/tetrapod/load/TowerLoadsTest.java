@@ -34,7 +34,7 @@ class TowerLoadsTest {
             new AncillarySpec.Point("antennas", 26, 3.0, 2.4, 1.5, 0, Face.NONE),
             new AncillarySpec.Linear("feeder", 0, 24, 0.2, 0.15, 1.3, 0.1, Face.Y_PLUS));
     private static final WindSpec EN = new WindSpec.En1991(26, TerrainCategory.CAT_II, List.of(), 1, 1, 1, 1, 1.25);
-    private static final IceSpec ICE = new IceSpec(20, 900, true, 18, Double.NaN);
+    private static final IceSpec ICE = new IceSpec(new IceSpec.Given(20, true), 900, 18, Double.NaN);
 
     private static LoadsSpec spec(WindSpec wind, IceSpec ice, List<CombinationSpec> combinations, double step) {
         return new LoadsSpec(List.of(new NodalLoadSpec(TOWER.frame().nodes().size(), 1.0, 0, -2.0, 0, 0, 0.5)), wind,

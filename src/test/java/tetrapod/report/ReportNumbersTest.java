@@ -90,4 +90,37 @@ class ReportNumbersTest {
                     "governing azimuth of the largest leg base compression");
         }
     }
+
+    /**
+     * The report compares compression in the combination of the largest analysed leg compression and
+     * uplift in that of the largest uplift, found here from results.json handMethod with Jackson.
+     */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("models")
+    void theHandMethodIsShownInTheCombinationGoverningEachQuantity(Path model) throws IOException {
+        JsonNode results = ExampleRuns.results(model);
+        String html = Files.readString(ExampleRuns.folder(model).resolve("report.html"));
+        JsonNode compression = null;
+        JsonNode uplift = null;
+        for (JsonNode h : results.get("handMethod")) {
+            if (compression == null || h.at("/fe/maxCompression").asDouble() > compression.at("/fe/maxCompression").asDouble()) {
+                compression = h;
+            }
+            if (uplift == null || h.at("/fe/maxTension").asDouble() > uplift.at("/fe/maxTension").asDouble()) {
+                uplift = h;
+            }
+        }
+        if (compression == null) {
+            assertTrue(results.get("handMethodGoverning").isNull(), "no hand method, no governing cases");
+            return;
+        }
+        String c = compression.get("combination").asText();
+        String u = uplift.get("combination").asText();
+        assertEquals(c, results.at("/handMethodGoverning/compression/combination").asText());
+        assertEquals(u, results.at("/handMethodGoverning/uplift/combination").asText());
+        assertEquals(compression.at("/fe/maxCompression").asDouble(), results.at("/handMethodGoverning/compression/fe").asDouble());
+        assertEquals(uplift.at("/fe/maxTension").asDouble(), results.at("/handMethodGoverning/uplift/fe").asDouble());
+        assertTrue(html.contains("<h3>Compression, " + c + "</h3>"), model + ": compression table of " + c);
+        assertTrue(html.contains("<h3>Uplift, " + u + "</h3>"), model + ": uplift table of " + u);
+    }
 }

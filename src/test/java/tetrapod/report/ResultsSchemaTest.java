@@ -67,7 +67,7 @@ class ResultsSchemaTest {
         walk(root, root, "#", faults);
         assertEquals(List.of(), faults);
         for (String key : List.of("format", "input", "model", "cases", "wind", "sweep", "checks", "foundations",
-                "legBases", "handMethod", "combinations", "material", "steel", "defaults")) {
+                "legBases", "handMethod", "handMethodGoverning", "ice", "combinations", "material", "steel", "defaults")) {
             assertTrue(root.path("properties").has(key), "the schema does not describe " + key);
         }
     }
