@@ -56,4 +56,22 @@ class UtilisationByAzimuthTest {
                     "member " + r.member() + " at " + r.azimuthDeg() + " deg exceeds its own envelope");
         }
     }
+
+    /**
+     * Utilisation means strength (issue 12): on a square tower whose legs carry more on a diagonal
+     * wind (N/4 + M/d) than on a face-normal one (N/4 + M/(2b)), the largest utilisation must change
+     * with the azimuth; a load-independent rule would give a flat line.
+     */
+    @Test
+    void theLargestUtilisationVariesWithTheAzimuth() throws Exception {
+        AnalysisResult r = TestTowers.analyse(TestTowers.squareTower(
+                "{ \"wind\": { \"method\": \"en1991\", \"basicSpeed\": 27.0, \"terrain\": \"II\" }, \"sweepStep\": 15.0 }"))
+                .result();
+        double lo = r.utilisationByAzimuth().stream().mapToDouble(AzimuthUtilisation::utilisation).min().orElseThrow();
+        double hi = r.utilisationByAzimuth().stream().mapToDouble(AzimuthUtilisation::utilisation).max().orElseThrow();
+        assertTrue(hi - lo > 0.05 * hi, "largest utilisation from " + lo + " to " + hi);
+        for (MemberEnvelope m : r.members()) {
+            assertTrue(!m.governing().mode().isRequirement(), "member " + m.member() + " governed by " + m.governing());
+        }
+    }
 }
