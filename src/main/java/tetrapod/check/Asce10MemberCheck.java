@@ -33,6 +33,17 @@ public final class Asce10MemberCheck implements MemberCheck {
     /** Result of the KL/r search over the two buckling axes. */
     record Slenderness(double lOverR, double klOverR, int curve, double lOverRMax) { }
 
+    /** 1.5 % of the braced member's compression: ASCE 10 (redundant members), **recalled from memory**. */
+    @Override
+    public double redundantForceFraction() {
+        return 0.015;
+    }
+
+    @Override
+    public String redundantForceClause() {
+        return "ASCE 10 redundant members, fraction recalled from memory";
+    }
+
     @Override
     public MemberCheckResult check(MemberCheckInput in) {
         Member member = in.member();

@@ -15,14 +15,11 @@ import tetrapod.model.spec.PartialFactors;
 /**
  * Members of lattice towers by EN 1993 (limit states): EN 1993-1-1 6.2 (cross-sections), 6.3.1
  * (flexural buckling) and 6.3.3 (buckling with bending), Annex BB.1.2 (angles as web members),
- * EN 1993-1-8 3.10.3 (angles connected by one leg) and Table 3.4 (bolts), EN 1993-3-1 H.2
- * (legs). Forces are design values of a factored load case; the partial factors are the user's.
+ * EN 1993-1-8 3.10.3 (angles connected by one leg) and Table 3.4 (bolts), EN 1993-3-1 Annex H
+ * (slenderness limits, a requirement: {@link En1993SlendernessLimit}). Forces are design values of a factored load case; the partial factors are the user's.
  * See docs/methods.md (Checks) for every formula and what is assumed.
  */
 public final class En1993MemberCheck implements MemberCheck {
-
-    /** Slenderness L/i a leg should generally not exceed, EN 1993-3-1 H.2 (1). */
-    static final double LEG_SLENDERNESS_LIMIT = 120;
 
     private final PartialFactors factors;
     private final En1993BoltCheck bolts;
@@ -30,6 +27,17 @@ public final class En1993MemberCheck implements MemberCheck {
     public En1993MemberCheck(PartialFactors factors) {
         this.factors = factors;
         this.bolts = new En1993BoltCheck(factors);
+    }
+
+    /** 2.5 % of the braced member's compression: EN 1993-3-1 Annex H, **recalled from memory**. */
+    @Override
+    public double redundantForceFraction() {
+        return 0.025;
+    }
+
+    @Override
+    public String redundantForceClause() {
+        return "EN 1993-3-1 Annex H, fraction recalled from memory";
     }
 
     public PartialFactors factors() {
@@ -77,13 +85,7 @@ public final class En1993MemberCheck implements MemberCheck {
         if (in.connection().boltsChecked() && t > 0) {
             out.addAll(bolts.check(in.connection(), Math.abs(f.axial()), t, fu));
         }
-        if (member.role() == Role.LEG) {
-            double slenderness = Math.max(in.buckling().minorAxis().length() / p.iMin(),
-                    in.buckling().geometricAxis().length() / geometricRadius(p));
-            out.add(new CheckResult(CheckMode.SLENDERNESS_LIMIT, slenderness / LEG_SLENDERNESS_LIMIT,
-                    "EN 1993-3-1 H.2 (1) (informative)",
-                    String.format(Locale.ROOT, "L/i = %.1f, limit %.0f", slenderness, LEG_SLENDERNESS_LIMIT)));
-        }
+        out.add(En1993SlendernessLimit.check(in));
         return new MemberCheckResult(member.id(), out);
     }
 

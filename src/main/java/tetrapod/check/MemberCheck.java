@@ -9,6 +9,15 @@ public sealed interface MemberCheck permits En1993MemberCheck, Asce10MemberCheck
     /** Every check of the method for one member in one load case. */
     MemberCheckResult check(MemberCheckInput input);
 
+    /**
+     * The nominal design force of a redundant (secondary bracing) member as a fraction of the
+     * compression in the member it braces (see {@link RedundantForces}).
+     */
+    double redundantForceFraction();
+
+    /** Where that fraction comes from. */
+    String redundantForceClause();
+
     /** The method {@code checks.method} names, with its parameters. */
     static MemberCheck of(ChecksSpec checks) {
         return checks.method() == CheckMethod.ASCE10

@@ -23,6 +23,7 @@ public final class MemberChecker {
     private final Frame frame;
     private final MemberCheck method;
     private final BucklingLengths buckling;
+    private final RedundantForces redundants;
     private final Map<Integer, Member> members = new HashMap<>();
     private final Map<Integer, Connection> connections = new HashMap<>();
 
@@ -30,6 +31,7 @@ public final class MemberChecker {
         this.frame = frame;
         this.method = MemberCheck.of(checks);
         this.buckling = BucklingLengths.of(frame, checks.bucklingLengths());
+        this.redundants = new RedundantForces(frame, method);
         for (Member m : frame.members()) {
             members.put(m.id(), m);
             connections.put(m.id(), connectionFor(m, checks.connections()));
@@ -75,8 +77,41 @@ public final class MemberChecker {
         if (m == null) {
             throw new IllegalArgumentException("no member " + memberId);
         }
-        BucklingLength lengths = buckling.forCase(memberId, axialForce);
-        return method.check(new MemberCheckInput(m, frame.material(), lengths, connections.get(memberId), forces));
+        return check(m, buckling.forCase(memberId, axialForce), forces, axialForce);
+    }
+
+    /**
+     * Checks {@code member} with the buckling {@code lengths} of the case and its own
+     * {@code forces}; a redundant gets its nominal force (a fraction of the compression of the
+     * members it braces, {@link RedundantForces}) when that is larger, noted beside each check.
+     *
+     * @param axialForce the axial force (N, tension positive) of every member in the same case
+     */
+    public MemberCheckResult check(Member member, BucklingLength lengths, MemberForces forces,
+                                   IntToDoubleFunction axialForce) {
+        MemberForces design = designForces(member.id(), forces, axialForce);
+        MemberCheckResult result = method.check(new MemberCheckInput(member, frame.material(), lengths,
+                connections.get(member.id()), design));
+        if (design == forces) {
+            return result;
+        }
+        String note = redundants.note(member.id(), axialForce);
+        List<CheckResult> noted = new ArrayList<>(result.checks().size());
+        for (CheckResult c : result.checks()) {
+            noted.add(c.mode().isRequirement() ? c
+                    : new CheckResult(c.mode(), c.utilisation(), c.clause(), c.note().isEmpty() ? note : c.note() + "; " + note));
+        }
+        return new MemberCheckResult(result.member(), noted);
+    }
+
+    /** The forces member {@code memberId} is checked for: its own, or a redundant's nominal force when larger. */
+    public MemberForces designForces(int memberId, MemberForces forces, IntToDoubleFunction axialForce) {
+        return redundants.designForces(memberId, forces, axialForce);
+    }
+
+    /** Whether member {@code memberId}'s design force depends on the forces of other members (a redundant). */
+    public boolean hasNominalForce(int memberId) {
+        return redundants.applies(memberId);
     }
 
     /** Checks every member of the frame for one load case, in the frame's member order. */

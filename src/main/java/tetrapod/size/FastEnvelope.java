@@ -156,7 +156,7 @@ public final class FastEnvelope {
                 partnerBits.add(bits);
                 lengthsByMask.add(new HashMap<>());
                 maskable[m] = ids.size() <= MAX_PARTNERS;
-                everyCase[m] = !member.axialOnly() || !maskable[m];
+                everyCase[m] = !member.axialOnly() || !maskable[m] || checker.hasNominalForce(member.id());
                 envelopes[m] = MemberEnvelope.empty(member.id());
                 classes[m] = everyCase[m] ? null : new CaseClasses();
                 demands.add(new ArrayList<>());
@@ -211,8 +211,11 @@ public final class FastEnvelope {
                 }
                 BucklingLength lengths = maskable[m] ? lengths(m, mask)
                         : buckling.forCase(member.id(), id -> axial[index.get(id)]);
-                envelopes[m] = envelopes[m].with(check(member, lengths, forces), forces, caseId, azimuth);
-                demands.get(m).add(new Demand(member, lengths, forces, caseId));
+                checkCount++;
+                envelopes[m] = envelopes[m].with(checker.check(member, lengths, forces, id -> axial[index.get(id)]),
+                        forces, caseId, azimuth);
+                demands.get(m).add(new Demand(member, lengths,
+                        checker.designForces(member.id(), forces, id -> axial[index.get(id)]), caseId));
             }
         }
 

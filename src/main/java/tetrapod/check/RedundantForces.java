@@ -1,0 +1,93 @@
+package tetrapod.check;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.function.IntToDoubleFunction;
+import tetrapod.model.Frame;
+import tetrapod.model.Member;
+import tetrapod.model.Role;
+
+/**
+ * The nominal design force of redundant (secondary bracing) members: a redundant carries almost
+ * nothing in a linear analysis, yet it must hold the member it braces against buckling. Tower codes
+ * give it a design force that is a fraction of the compression in the member it braces
+ * ({@link MemberCheck#redundantForceFraction()}). The members a redundant braces are taken as the
+ * legs, diagonals, horizontals and plan members that meet it at either end; the nominal force is
+ * the fraction of the largest compression among them in the same case, and it acts on the
+ * redundant as compression when it exceeds the redundant's own.
+ */
+final class RedundantForces {
+
+    private final Map<Integer, int[]> braced = new HashMap<>();
+    private final double fraction;
+    private final String clause;
+
+    RedundantForces(Frame frame, MemberCheck method) {
+        this.fraction = method.redundantForceFraction();
+        this.clause = method.redundantForceClause();
+        Map<Integer, List<Member>> atNode = new HashMap<>();
+        for (Member m : frame.members()) {
+            atNode.computeIfAbsent(m.i(), k -> new ArrayList<>()).add(m);
+            atNode.computeIfAbsent(m.j(), k -> new ArrayList<>()).add(m);
+        }
+        for (Member m : frame.members()) {
+            if (m.role() != Role.REDUNDANT) {
+                continue;
+            }
+            List<Integer> ids = new ArrayList<>();
+            for (int node : new int[] {m.i(), m.j()}) {
+                for (Member other : atNode.get(node)) {
+                    if (isMain(other.role()) && !ids.contains(other.id())) {
+                        ids.add(other.id());
+                    }
+                }
+            }
+            braced.put(m.id(), ids.stream().mapToInt(Integer::intValue).toArray());
+        }
+    }
+
+    private static boolean isMain(Role role) {
+        return role == Role.LEG || role == Role.DIAGONAL || role == Role.HORIZONTAL || role == Role.PLAN;
+    }
+
+    /** Whether member {@code id} gets a nominal force (a redundant bracing some member). */
+    boolean applies(int id) {
+        int[] ids = braced.get(id);
+        return ids != null && ids.length > 0 && fraction > 0;
+    }
+
+    /**
+     * The design forces of member {@code id}: its own, or, for a redundant whose nominal force
+     * exceeds its own compression, that nominal force as compression (moments kept).
+     *
+     * @param axial the axial force (N, tension positive) of every member in the same case
+     */
+    MemberForces designForces(int id, MemberForces own, IntToDoubleFunction axial) {
+        if (!applies(id)) {
+            return own;
+        }
+        double nominal = fraction * bracedCompression(id, axial);
+        if (nominal <= own.compression()) {
+            return own;
+        }
+        return new MemberForces(-nominal, own.myI(), own.myJ(), own.mzI(), own.mzJ());
+    }
+
+    /** The largest compression (N, ≥ 0) among the members that redundant {@code id} braces. */
+    private double bracedCompression(int id, IntToDoubleFunction axial) {
+        double worst = 0;
+        for (int other : braced.get(id)) {
+            worst = Math.max(worst, -axial.applyAsDouble(other));
+        }
+        return worst;
+    }
+
+    /** The words that go beside each strength check of a redundant whose nominal force governs. */
+    String note(int id, IntToDoubleFunction axial) {
+        return String.format(Locale.ROOT, "nominal force of a redundant: %.1f %% of %.1f kN, the largest compression "
+                + "of the members it braces (%s)", 100 * fraction, bracedCompression(id, axial) / 1e3, clause);
+    }
+}
