@@ -3,8 +3,8 @@ package tetrapod.solve;
 import tetrapod.model.Vec3;
 
 /**
- * The bending continuity of a straight member through a node that only redundants join, in the
- * truss idealisation. A pin-jointed model of a diagonal split by a redundant has no stiffness
+ * The bending continuity of a straight pin-ended member through a node that no leg reaches, in
+ * every idealisation. A pin-jointed model of a diagonal split by a redundant has no stiffness
  * across the diagonal at the split; the redundant chains of a panel then sway as a mechanism,
  * which the real, continuous diagonal prevents by bending. This element gives the node a
  * transverse stiffness relative to the chord between its two neighbours P and Q on the line:

@@ -2,7 +2,7 @@ package tetrapod.solve;
 
 /**
  * A node inside a straight diagonal that only redundants join, held across the member by
- * the member's bending stiffness (truss idealisation): see {@link ContinuityElement}.
+ * the member's bending stiffness (pin-ended bracing, every idealisation): see {@link ContinuityElement}.
  *
  * @param node      node id
  * @param lineStart id of the neighbouring node on one side along the member line

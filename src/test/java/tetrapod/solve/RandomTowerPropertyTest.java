@@ -5,11 +5,16 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Collections;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Random;
 import java.util.stream.IntStream;
 import java.util.stream.Stream;
+import org.ejml.data.DMatrixRMaj;
+import org.ejml.dense.row.CommonOps_DDRM;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -122,28 +127,52 @@ class RandomTowerPropertyTest {
         return a;
     }
 
+    /**
+     * The reference finds its own restraints from its own stiffness ({@link ReferenceRestraints}):
+     * zero-stiffness directions at single nodes, then whole null modes (spinning legs). The
+     * product restrains a spin at one node of the chain, the reference constrains the whole mode,
+     * so only quantities independent of that choice are compared: every translation, the whole
+     * displacement vector after removing its component along the null modes (the rotations about
+     * a spinning leg's axis are arbitrary otherwise), every member end force, every support
+     * reaction. A null mode costs no energy, so it moves no member end force and no reaction.
+     */
     @ParameterizedTest
     @MethodSource("towers")
     void sparseSolutionEqualsIndependentDenseSolution(Case c) throws Exception {
         StructuralModel model = StructuralModel.of(c.frame());
         Solution s = Solver.factor(model).solve(c.first());
-        DenseReference ref = new DenseReference(c.frame(), DenseReference.constraintsOf(model.autoRestraints()),
-                model.continuityNodes(),
-                loadArray(c.frame(), c.first()));
+        DenseReference dense = new DenseReference(c.frame(), model.continuityNodes());
+        ReferenceRestraints restraints = ReferenceRestraints.find(dense.system(), dense.held());
+        double[] loads = loadArray(c.frame(), c.first());
+        DenseReference.Solved ref = dense.solve(restraints.free(), restraints.modes(), loads);
 
-        double maxU = 0;
-        for (double v : ref.u) {
-            maxU = Math.max(maxU, Math.abs(v));
-        }
-        for (Node n : c.frame().nodes()) {
-            double[] expected = ref.displacement(n.id());
-            NodeDisplacement actual = s.displacement(n.id());
+        List<Node> nodes = c.frame().nodes();
+        double[] actual = new double[6 * nodes.size()];
+        for (int n = 0; n < nodes.size(); n++) {
             for (int k = 0; k < 6; k++) {
-                assertEquals(expected[k], actual.component(k), RELATIVE * maxU, "node " + n.id() + " dof " + k);
+                actual[6 * n + k] = s.displacement(nodes.get(n).id()).component(k);
             }
         }
+        double[] withoutModes = actual.clone();
+        for (double[] phi : restraints.modes()) {
+            double along = NaturalElement.dot(phi, actual);
+            for (int q = 0; q < actual.length; q++) {
+                withoutModes[q] -= along * phi[q];
+            }
+        }
+        double maxTranslation = largest(ref.u(), 0);
+        double maxRotation = largest(ref.u(), 3);
+        for (int q = 0; q < actual.length; q++) {
+            boolean translation = q % 6 < 3;
+            double tolerance = RELATIVE * (translation ? maxTranslation : maxRotation);
+            String where = "node " + nodes.get(q / 6).id() + " dof " + q % 6;
+            if (translation) {
+                assertEquals(ref.u()[q], actual[q], tolerance, where + " (independent dense solve)");
+            }
+            assertEquals(ref.u()[q], withoutModes[q], tolerance, where + " without the null modes (independent dense solve)");
+        }
         double maxF = 0;
-        for (double[][] f : ref.memberEnd.values()) {
+        for (double[][] f : ref.memberEnd().values()) {
             for (double[] end : f) {
                 for (double v : end) {
                     maxF = Math.max(maxF, Math.abs(v));
@@ -151,37 +180,151 @@ class RandomTowerPropertyTest {
             }
         }
         for (MemberEndForces f : s.memberForces()) {
-            double[][] expected = ref.memberEnd.get(f.member());
+            double[][] expected = ref.memberEnd().get(f.member());
             for (int k = 0; k < 6; k++) {
                 assertEquals(expected[0][k], f.atI().component(k), RELATIVE * maxF, "member " + f.member() + " i " + k);
                 assertEquals(expected[1][k], f.atJ().component(k), RELATIVE * maxF, "member " + f.member() + " j " + k);
             }
         }
-        // reaction + auto-restraint force at a node = (K·u − F) there
-        double[][] restraintForce = new double[c.frame().nodes().size()][6];
-        for (NodeForce r : s.reactions()) {
-            add(restraintForce[model.nodeIndex(r.node())], r);
+        // K·u − F of the reference: the support reactions at supported nodes and nothing anywhere
+        // else (the loads are carriable: no restraint, the reference's or the product's, carries any)
+        double loadScale = 0;
+        for (double f : loads) {
+            loadScale = Math.max(loadScale, Math.abs(f));
+        }
+        Map<Integer, NodeForce> reactions = new HashMap<>();
+        s.reactions().forEach(r -> reactions.put(r.node(), r));
+        for (Node n : nodes) {
+            double[] expected = ref.residualAt(n.id());
+            NodeForce reaction = reactions.get(n.id());
+            for (int k = 0; k < 6; k++) {
+                assertEquals(expected[k], reaction == null ? 0 : reaction.component(k), RELATIVE * loadScale,
+                        "K·u − F of the reference vs the support reaction at node " + n.id() + " " + k);
+            }
         }
         for (NodeForce a : s.autoRestraintForces()) {
-            add(restraintForce[model.nodeIndex(a.node())], a);
-        }
-        for (Node n : c.frame().nodes()) {
-            double[] expected = ref.residualAt(n.id());
             for (int k = 0; k < 6; k++) {
-                if (c.frame().idealisation() == Idealisation.TRUSS && k >= 3) {
-                    continue; // the reference holds truss rotations with multipliers of its own
-                }
-                assertEquals(expected[k], restraintForce[model.nodeIndex(n.id())][k], RELATIVE * 1e5,
-                        "restraint force at node " + n.id() + " " + k);
+                assertEquals(0, a.component(k), RELATIVE * loadScale, "product auto-restraint force at node " + a.node());
             }
         }
         assertTrue(s.equilibriumError() < 1e-9, "equilibrium error " + s.equilibriumError());
     }
 
-    private static void add(double[] into, NodeForce f) {
-        for (int k = 0; k < 6; k++) {
-            into[k] += f.component(k);
+    /**
+     * The product's auto-restraints at each node span exactly the reference's zero-stiffness
+     * directions there (translations and rotations apart); its spin restraints (one node per
+     * chain) are compared with the reference's null modes: as many, each mode turns the
+     * restrained node about the restrained axis only, and together they pin every mode (the
+     * matrix of restraint rows times modes is non-singular).
+     */
+    @ParameterizedTest
+    @MethodSource("towers")
+    void autoRestraintsSpanTheReferenceZeroStiffnessDirections(Case c) {
+        StructuralModel model = StructuralModel.of(c.frame());
+        DenseReference dense = new DenseReference(c.frame(), model.continuityNodes());
+        ReferenceRestraints reference = ReferenceRestraints.find(dense.system(), dense.held());
+        List<AutoRestraint> spins = new ArrayList<>();
+        for (Node n : c.frame().nodes()) {
+            List<double[]> product = new ArrayList<>();
+            for (AutoRestraint a : model.autoRestraints()) {
+                if (a.node() != n.id()) {
+                    continue;
+                }
+                if (a.reason().equals(StabilityInspector.SPIN_REASON)) {
+                    spins.add(a);
+                } else {
+                    product.add(sixVector(a));
+                }
+            }
+            List<double[]> expected = reference.nullDirections().get(model.nodeIndex(n.id()));
+            for (int part = 0; part < 2; part++) {
+                String what = "node " + n.id() + (part == 0 ? " translations" : " rotations");
+                assertSameSpan(within(expected, part), within(product, part), what);
+            }
         }
+        assertEquals(reference.modes().size(), spins.size(),
+                "null modes of the reference vs spin restraints; next scaled eigenvalue " + reference.nextEigenvalue());
+        DMatrixRMaj pinned = new DMatrixRMaj(spins.size(), spins.size());
+        for (int r = 0; r < spins.size(); r++) {
+            AutoRestraint spin = spins.get(r);
+            int b = 6 * model.nodeIndex(spin.node());
+            double[] axis = {spin.direction().x(), spin.direction().y(), spin.direction().z()};
+            for (int m = 0; m < spins.size(); m++) {
+                double[] phi = reference.modes().get(m);
+                double[] turn = {phi[b + 3], phi[b + 4], phi[b + 5]};
+                double about = NaturalElement.dot(turn, axis);
+                pinned.set(r, m, about);
+                double[] off = {turn[0] - about * axis[0], turn[1] - about * axis[1], turn[2] - about * axis[2],
+                        phi[b], phi[b + 1], phi[b + 2]};
+                assertEquals(0, Math.sqrt(NaturalElement.dot(off, off)), 1e-9,
+                        "mode " + m + " at spin-restrained node " + spin.node() + ": motion other than about the axis");
+            }
+        }
+        if (!spins.isEmpty()) {
+            DMatrixRMaj gram = new DMatrixRMaj(spins.size(), spins.size());
+            CommonOps_DDRM.multTransA(pinned, pinned, gram);
+            double smallest = Math.sqrt(Math.max(0, new SymmetricEigen(gram).value(0)));
+            assertTrue(smallest > 1e-3, "the spin restraints leave a null mode free: smallest singular value " + smallest);
+        }
+    }
+    /** Largest |u| over the translations (first = 0) or the rotations (first = 3). */
+    private static double largest(double[] u, int first) {
+        double max = 0;
+        for (int q = first; q < u.length; q += 6) {
+            for (int k = 0; k < 3; k++) {
+                max = Math.max(max, Math.abs(u[q + k]));
+            }
+        }
+        return max;
+    }
+
+    /** An auto-restraint's direction as a 6-vector at its node. */
+    private static double[] sixVector(AutoRestraint a) {
+        double[] v = new double[6];
+        int offset = a.isRotation() ? 3 : 0;
+        v[offset] = a.direction().x();
+        v[offset + 1] = a.direction().y();
+        v[offset + 2] = a.direction().z();
+        return v;
+    }
+
+    /** The 3-vectors of the translation (part 0) or rotation (part 1) components of those 6-vectors that have any. */
+    private static List<double[]> within(List<double[]> sixVectors, int part) {
+        List<double[]> out = new ArrayList<>();
+        for (double[] v : sixVectors) {
+            double[] three = Arrays.copyOfRange(v, 3 * part, 3 * part + 3);
+            if (NaturalElement.dot(three, three) > 0.5) {
+                out.add(three);
+            }
+        }
+        return out;
+    }
+
+    /** Equal dimension and equal orthogonal projector onto the span of each list. */
+    private static void assertSameSpan(List<double[]> expected, List<double[]> actual, String what) {
+        assertEquals(expected.size(), actual.size(), what + ": number of zero-stiffness directions");
+        double[] pe = projector(expected);
+        double[] pa = projector(actual);
+        for (int q = 0; q < 9; q++) {
+            assertEquals(pe[q], pa[q], 1e-6, what + ": projector entry " + q);
+        }
+    }
+
+    /** Σ v vᵀ over an orthonormal basis of span(vectors), 3×3 row-major. */
+    private static double[] projector(List<double[]> vectors) {
+        List<double[]> basis = new ArrayList<>();
+        for (double[] v : vectors) {
+            basis.add(ReferenceRestraints.orthonormalised(v.clone(), basis));
+        }
+        double[] p = new double[9];
+        for (double[] v : basis) {
+            for (int r = 0; r < 3; r++) {
+                for (int c = 0; c < 3; c++) {
+                    p[3 * r + c] += v[r] * v[c];
+                }
+            }
+        }
+        return p;
     }
 
     @ParameterizedTest
