@@ -22,16 +22,14 @@ import tetrapod.solve.AutoRestraint;
  */
 class LoadPathTest {
 
-    /** The issue's tower: 20 m square, one segment, single diagonals, horizontals at the ends, EN wind. */
-    private static String singleDiagonalTower(String idealisation, String extra) {
-        return """
-            { "name": "single-diagonal test tower", "idealisation": "%s",
-              "base": { "widthX": 4.0, "widthY": 4.0 },
-              "segments": [ { "height": 20.0, "topWidthX": 2.0, "topWidthY": 2.0, "panels": 8, "bracing": "single",
-                  "horizontals": "ends", "sections": { "leg": "L120x12", "diagonal": "L70x7", "horizontal": "L60x6" } } ],
-              %s
-              "loads": { "wind": { "method": "en1991", "basicSpeed": 26.0, "terrain": "II" }, "sweepStep": 15.0 } }
-            """.formatted(idealisation, extra);
+    /**
+     * The issue's tower: 20 m square, one segment, single diagonals, horizontals at the ends, EN
+     * wind (src/test/resources/load-path), in the given idealisation, with {@code extra} top-level keys.
+     */
+    private static String singleDiagonalTower(String idealisation, String extra) throws java.io.IOException {
+        String json = java.nio.file.Files.readString(java.nio.file.Path.of(
+                "src/test/resources/load-path/one-face-braced-truss.json"));
+        return json.replace("\"idealisation\": \"truss\",", "\"idealisation\": \"" + idealisation + "\", " + extra);
     }
 
     @Test
