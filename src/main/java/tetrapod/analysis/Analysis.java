@@ -44,6 +44,15 @@ public final class Analysis {
      */
     public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, ProgressListener progress)
             throws UnstableStructureException {
+        return run(tower, loads, checks, NaturalModes.DEFAULT_COUNT, progress);
+    }
+
+    /**
+     * As {@link #run(Tower, TowerLoads, ChecksSpec, ProgressListener)}, with the {@code modes}
+     * lowest natural modes (fewer when the structure has fewer massed translations; 0 for none).
+     */
+    public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
+                                     ProgressListener progress) throws UnstableStructureException {
         StructuralModel model = StructuralModel.of(tower.frame());
         progress.progress("prepare model", 1, 1);
         FactoredSystem system = Solver.factor(model, progress);
@@ -105,11 +114,13 @@ public final class Analysis {
             cases.add(solveCase(system, loads.loadCase(key)));
             progress.progress("cases in full", ++solved, reported.size());
         }
+        List<NaturalMode> natural = NaturalModes.of(system, basis, modes);
+        progress.progress("natural modes", 1, 1);
         List<AzimuthWind> wind = new ArrayList<>();
         loads.wind().ifPresent(w -> REPORTED_AZIMUTHS.forEach(a -> wind.add(w.azimuth(a))));
         return new AnalysisResult(tower, loads, model, cases, wind, sweep.legBaseSweeps(), legBases, members,
                 foundations, sweep.handComparisons(), responses, (int) total, sweep.utilisationByAzimuth(),
-                sweep.autoRestraintPeaks());
+                sweep.autoRestraintPeaks(), natural);
     }
 
     /** Adds the case where {@code e} occurred to the reported cases (after those already there). */

@@ -29,12 +29,15 @@ import tetrapod.solve.StructuralModel;
  * @param autoRestraints every auto-restraint of the model with the largest force it carried over
  *                    the sweep (each below the limit of {@code solve.LoadPath}, or the run would
  *                    have stopped)
+ * @param modes       the lowest natural modes, from the lowest frequency up (empty when not asked for
+ *                    or when nothing carries mass)
  */
 public record AnalysisResult(Tower tower, TowerLoads loads, StructuralModel model, List<SolvedCase> cases,
                              List<AzimuthWind> wind, List<LegBaseSweep> sweep, List<LegBaseExtremes> legBases,
                              List<MemberEnvelope> members, List<FoundationEnvelope> foundations,
                              List<HandComparison> hand, BasisResponses responses, int caseCount,
-                             List<AzimuthUtilisation> utilisationByAzimuth, List<AutoRestraintPeak> autoRestraints) {
+                             List<AzimuthUtilisation> utilisationByAzimuth, List<AutoRestraintPeak> autoRestraints,
+                             List<NaturalMode> modes) {
     public AnalysisResult {
         cases = List.copyOf(cases);
         wind = List.copyOf(wind);
@@ -45,6 +48,7 @@ public record AnalysisResult(Tower tower, TowerLoads loads, StructuralModel mode
         hand = List.copyOf(hand);
         utilisationByAzimuth = List.copyOf(utilisationByAzimuth);
         autoRestraints = List.copyOf(autoRestraints);
+        modes = List.copyOf(modes);
     }
 
     /** The cases in which the hand method is compared for compression and for uplift; empty without a comparison. */

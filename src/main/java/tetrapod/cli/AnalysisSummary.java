@@ -12,6 +12,7 @@ import tetrapod.analysis.AnalysisResult;
 import tetrapod.analysis.AutoRestraintPeak;
 import tetrapod.analysis.HandComparison;
 import tetrapod.analysis.LegBaseExtremes;
+import tetrapod.analysis.NaturalMode;
 import tetrapod.analysis.SolvedCase;
 import tetrapod.check.CheckResult;
 import tetrapod.check.Extreme;
@@ -57,10 +58,30 @@ final class AnalysisSummary {
         out.printf(Locale.ROOT, "equilibrium of the applied loads against the support reactions alone: largest "
                 + "residual of the %d cases solved in full: %.1e%n",
                 r.cases().size(), worst);
+        modes(out, r);
         double max = r.maxUtilisation();
         out.printf(Locale.ROOT, "%s: largest strength utilisation %.3f%n", max > 1.0 ? "OVERSTRESSED" : "all checks pass", max);
         out.println("requirements: " + RequirementVerdict.line(brokenRequirements(r)));
         out.println("Results must be checked by a qualified engineer against the codes that apply locally.");
+    }
+
+    /** The first sway and first torsion frequencies, and every mode computed on one line. */
+    private static void modes(PrintWriter out, AnalysisResult r) {
+        if (r.modes().isEmpty()) {
+            return;
+        }
+        StringBuilder line = new StringBuilder("natural frequencies (dead-load masses, no ice):");
+        for (NaturalMode.Kind kind : List.of(NaturalMode.Kind.SWAY, NaturalMode.Kind.TORSION)) {
+            line.append(r.modes().stream().filter(m -> m.kind() == kind).findFirst()
+                    .map(m -> String.format(Locale.ROOT, " first %s %.3f Hz (mode %d);", kind.label(), m.frequencyHz(),
+                            m.number()))
+                    .orElse(String.format(Locale.ROOT, " no %s mode among the %d lowest (--modes);", kind.label(),
+                            r.modes().size())));
+        }
+        long internal = r.modes().stream().filter(m -> m.kind() == NaturalMode.Kind.INTERNAL).count();
+        line.append(String.format(Locale.ROOT, " %d of %d modes move parts of the tower against each other "
+                + "(no net sway, twist or lift)", internal, r.modes().size()));
+        out.println(line);
     }
 
     /** Rule label → the members that break it, by member id. */

@@ -12,6 +12,8 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 import tetrapod.analysis.Analysis;
 import tetrapod.analysis.AnalysisResult;
+import tetrapod.analysis.NaturalModes;
+import tetrapod.common.BadInputException;
 import tetrapod.io.DefaultedKeys;
 import tetrapod.io.JsonOutput;
 import tetrapod.io.ResultsReader;
@@ -53,6 +55,11 @@ final class AnalyzeCommand implements Callable<Integer> {
             description = "No progress bar (there is none anyway when the output is not a terminal).")
     boolean quiet;
 
+    @Option(names = "--modes", paramLabel = "N",
+            description = "Natural modes to compute, at least 1 (default: 6, or fewer when the structure has fewer "
+                    + "free translations that carry mass).")
+    Integer modes;
+
     @Spec
     CommandSpec spec;
 
@@ -60,12 +67,19 @@ final class AnalyzeCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
         StageTimes watch = new StageTimes();
+        if (modes != null && modes < 1) {
+            throw BadInputException.at("--modes", "must be at least 1, was " + modes);
+        }
         LoadedModel loaded = LoadedModel.read(model);
         watch.end("read, generate, loads");
         AnalysisResult result;
         try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
             result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
-                    StageTimes.both(progress, watch));
+                    modes == null ? NaturalModes.DEFAULT_COUNT : modes, StageTimes.both(progress, watch));
+        }
+        if (modes != null && result.modes().size() < modes) {
+            throw BadInputException.at("--modes", "asked for " + modes + " modes; the structure has only "
+                    + result.modes().size() + " free translations that carry mass");
         }
         Path folder = output != null ? output : OutputFolders.forModel(model);
         Path resultsFile = folder.resolve("results.json");

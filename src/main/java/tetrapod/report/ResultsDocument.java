@@ -15,6 +15,7 @@ import tetrapod.load.Combination;
 import tetrapod.model.Material;
 import tetrapod.model.spec.LoadAction;
 import tetrapod.analysis.HandComparison;
+import tetrapod.analysis.NaturalMode;
 import tetrapod.analysis.HandGoverning;
 import tetrapod.load.Asce7Ice;
 import tetrapod.analysis.LegBaseExtremes;
@@ -71,6 +72,7 @@ public final class ResultsDocument {
         doc.put("sweep", sweep(result));
         doc.put("checks", result.members().stream().map(ResultsDocument::memberCheck).toList());
         doc.put("requirements", result.members().stream().flatMap(ResultsDocument::requirements).toList());
+        doc.put("modes", result.modes().stream().map(mode -> mode(mode, result.tower().frame())).toList());
         doc.put("foundations", result.foundations().stream().map(ResultsDocument::foundation).toList());
         doc.put("legBases", result.legBases().stream().map(ResultsDocument::legBase).toList());
         doc.put("handMethod", result.hand().stream().map(ResultsDocument::hand).toList());
@@ -152,6 +154,35 @@ public final class ResultsDocument {
             m.put("note", r.note());
             return m;
         });
+    }
+
+    private static Map<String, Object> mode(NaturalMode mode, Frame frame) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("number", mode.number());
+        m.put("frequencyHz", mode.frequencyHz());
+        m.put("periodS", mode.periodS());
+        m.put("kind", mode.kind().label());
+        m.put("swayDirectionDeg", mode.swayDirectionDeg());
+        Map<String, Object> mass = new LinkedHashMap<>();
+        mass.put("x", mode.massX());
+        mass.put("y", mode.massY());
+        mass.put("z", mode.massZ());
+        mass.put("rz", mode.inertiaZ());
+        m.put("effectiveMass", mass);
+        m.put("residual", mode.residual());
+        List<Map<String, Object>> shape = new ArrayList<>(frame.nodes().size());
+        for (int n = 0; n < frame.nodes().size(); n++) {
+            Map<String, Object> node = new LinkedHashMap<>();
+            node.put("node", frame.nodes().get(n).id());
+            List<Double> u = new ArrayList<>(6);
+            for (int k = 0; k < 6; k++) {
+                u.add(clean(mode.shape()[6 * n + k]));
+            }
+            node.put("u", u);
+            shape.add(node);
+        }
+        m.put("shape", shape);
+        return m;
     }
 
     /** An extreme force as {value (N), case, azimuthDeg}; value 0 and case null when it never occurs. */

@@ -55,6 +55,30 @@ public final class FactoredSystem {
         return lower == null ? 0 : lower.nz_length;
     }
 
+    /** Solves K_ff·x = b in place on the free DOFs (b input, overwritten with x), for {@link ModalAnalysis}. */
+    void solveFree(double[] b) {
+        if (lower != null) {
+            SparseKernels.choleskySolve(lower, b);
+        }
+    }
+
+    /**
+     * ‖K x − λ M x‖ / ‖λ M x‖ on the free DOFs, M = diag(m): how well (λ, x) is an eigenpair
+     * (dimensionless; 0 when λ M x is zero).
+     */
+    double residual(double[] x, double[] m, double lambda) {
+        double[] kx = new double[x.length];
+        SparseKernels.multiply(kff, x, kx);
+        double num = 0;
+        double den = 0;
+        for (int e = 0; e < x.length; e++) {
+            double target = lambda * m[e] * x[e];
+            num += (kx[e] - target) * (kx[e] - target);
+            den += target * target;
+        }
+        return den > 0 ? Math.sqrt(num / den) : 0;
+    }
+
     /** {@link #solveAll(List, ProgressListener)} for one vector. */
     public Solution solve(LoadVector loads) throws UnstableStructureException {
         return solveAll(List.of(loads)).get(0);
