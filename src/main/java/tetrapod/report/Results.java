@@ -9,6 +9,7 @@ import java.util.Map;
 import java.util.Optional;
 import tetrapod.report.Rows.AzimuthPeak;
 import tetrapod.report.Rows.CheckRow;
+import tetrapod.report.Rows.ModeRow;
 import tetrapod.report.Rows.RequirementRow;
 import tetrapod.report.Rows.CombinationRow;
 import tetrapod.report.Rows.FootingCheck;
@@ -158,6 +159,18 @@ public final class Results {
                     Tree.str(c, "clause"), orEmpty(Tree.str(c, "note")), Tree.str(c, "case"),
                     Tree.numOrNull(c, "azimuthDeg"), peak(Tree.map(c, "maxTension")),
                     peak(Tree.map(c, "maxCompression"))));
+        }
+        return out;
+    }
+
+    /** The natural modes, lowest first (results.json {@code modes}; empty in older files). */
+    public List<ModeRow> modes() {
+        List<ModeRow> out = new ArrayList<>();
+        for (Map<String, Object> m : Tree.maps(doc, "modes")) {
+            Map<String, Object> e = Tree.map(m, "effectiveMass");
+            out.add(new ModeRow(Tree.integer(m, "number"), Tree.num(m, "frequencyHz"), Tree.num(m, "periodS"),
+                    Tree.str(m, "kind"), Tree.numOrNull(m, "swayDirectionDeg"), Tree.num(e, "x"), Tree.num(e, "y"),
+                    Tree.num(e, "z"), Tree.num(e, "rz")));
         }
         return out;
     }

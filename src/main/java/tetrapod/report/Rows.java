@@ -88,6 +88,13 @@ public final class Rows {
     public record AzimuthPeak(double azimuthDeg, double utilisation, int member, String combination) { }
 
     /**
+     * One natural mode: frequency in Hz, period in s, kind, sway direction in degrees (null unless
+     * sway) and effective modal mass fractions in x, y, z and about the vertical axis.
+     */
+    public record ModeRow(int number, double frequencyHz, double periodS, String kind, Double swayDirectionDeg,
+                          double massX, double massY, double massZ, double inertiaZ) { }
+
+    /**
      * The hand method beside the analysis in one case: total vertical load N (N), horizontal
      * resultant H (N) at height zH (m), moment M (N·m), base diagonal d (m); hand and analysis leg
      * compression and uplift (N).

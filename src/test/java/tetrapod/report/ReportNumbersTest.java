@@ -123,4 +123,18 @@ class ReportNumbersTest {
         assertTrue(html.contains("<h3>Compression, " + c + "</h3>"), model + ": compression table of " + c);
         assertTrue(html.contains("<h3>Uplift, " + u + "</h3>"), model + ": uplift table of " + u);
     }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("models")
+    void theModeTableShowsTheFrequenciesOfResultsJson(Path model) throws IOException {
+        JsonNode results = ExampleRuns.results(model);
+        String html = Files.readString(ExampleRuns.folder(model).resolve("report.html"));
+        int t = html.indexOf("id=\"mode-table\"");
+        assertTrue(t > 0, "no mode table");
+        String table = html.substring(t, html.indexOf("</table>", t));
+        for (JsonNode m : results.get("modes")) {
+            String f = String.format(Locale.ROOT, "%.3f", m.get("frequencyHz").asDouble());
+            assertTrue(table.contains(">" + f + "<"), "mode " + m.get("number") + " at " + f + " Hz");
+        }
+    }
 }

@@ -1,0 +1,63 @@
+package tetrapod.report;
+
+import java.util.List;
+import java.util.Locale;
+import tetrapod.report.Rows.ModeRow;
+import tetrapod.report.Table.Cell;
+
+/** The tower's lowest natural frequencies, with what each mode does. */
+final class NaturalModesSection implements Section {
+
+    @Override
+    public String id() {
+        return "natural-modes";
+    }
+
+    @Override
+    public String title() {
+        return "Natural frequencies";
+    }
+
+    @Override
+    public void write(Html out, ReportInput ri) {
+        List<ModeRow> modes = ri.results().modes();
+        if (modes.isEmpty()) {
+            out.p("No natural modes were computed (nothing carries mass).");
+            return;
+        }
+        out.p("The lowest natural modes of the analysis model (the same stiffness as the static analysis), with "
+                + "the dead load's masses (steelwork with the connection allowance and the ancillaries' weight) "
+                + "lumped at the leg nodes, no ice, no rotary inertia. Each mode is named by its effective modal "
+                + "masses as a share of the total (x, y, z) and of the rotational inertia about the tower's axis "
+                + "(twist); a mode whose shares add up to less than 5 % moves parts of the tower against each "
+                + "other (a member's vibration, a distortion of the cross-section) rather than the whole tower. "
+                + "The mode shapes are in results.json.");
+        StringBuilder first = new StringBuilder();
+        for (String kind : List.of("sway", "torsion")) {
+            modes.stream().filter(m -> m.kind().equals(kind)).findFirst().ifPresent(m -> first.append(String.format(
+                    Locale.ROOT, "First %s mode: %s Hz (mode %d). ", kind, Format.fixed(m.frequencyHz(), 3), m.number())));
+        }
+        if (!first.isEmpty()) {
+            out.p(first.toString().strip());
+        }
+        Table t = new Table("mode-table", "", List.of("mode", "frequency, Hz", "period, s", "what it does",
+                "sway direction, °", "share x", "share y", "share z", "share of twist"));
+        for (ModeRow m : modes) {
+            t.row(Cell.num(Integer.toString(m.number())), Cell.num(Format.fixed(m.frequencyHz(), 3)),
+                    Cell.num(Format.fixed(m.periodS(), 3)), Cell.of(label(m.kind())),
+                    Cell.num(m.swayDirectionDeg() == null ? "" : Format.fixed(m.swayDirectionDeg(), 0)),
+                    Cell.num(Format.fixed(m.massX(), 3)), Cell.num(Format.fixed(m.massY(), 3)),
+                    Cell.num(Format.fixed(m.massZ(), 3)), Cell.num(Format.fixed(m.inertiaZ(), 3)));
+        }
+        t.writeTo(out);
+    }
+
+    private static String label(String kind) {
+        return switch (kind) {
+            case "sway" -> "sway";
+            case "torsion" -> "twist about the axis";
+            case "vertical" -> "vertical";
+            default -> "parts against each other";
+        };
+    }
+}
