@@ -22,6 +22,7 @@ import tetrapod.load.LoadComponent;
 import tetrapod.load.TowerLoads;
 import tetrapod.model.spec.ChecksSpec;
 import tetrapod.solve.BasisResponses;
+import tetrapod.solve.CriticalLoad;
 import tetrapod.solve.FactoredSystem;
 import tetrapod.solve.LoadVector;
 import tetrapod.solve.Solution;
@@ -133,13 +134,20 @@ public final class Analysis {
     /**
      * Solves one load case directly (not by superposition), for a full report of it.
      *
-     * @throws UnstableStructureException when the structure is a mechanism or an auto-restraint
-     *         would carry part of the case's load
+     * @throws UnstableStructureException when the structure is a mechanism, an auto-restraint
+     *         would carry part of the case's load, or the case's elastic critical load factor is ≤ 1
      */
     public static SolvedCase solveCase(FactoredSystem system, LoadCase loadCase) throws UnstableStructureException {
         Solution solution = system.solve(new LoadVector(loadCase.id(), loadCase.loads()));
         solution.requireLoadCarried(loadCase.id());
-        return new SolvedCase(loadCase.id(), loadCase.combination(), loadCase.azimuthDeg(), solution);
+        double alphaCr = CriticalLoad.factor(system, CriticalLoad.axialForces(solution));
+        if (alphaCr <= 1) {
+            throw new UnstableStructureException(String.format(java.util.Locale.ROOT, "unstable structure: in case '%s' "
+                    + "the elastic critical load factor α_cr is %.3f (≤ 1): the structure buckles as a whole under "
+                    + "these forces (EN 1993-1-1 5.2.1); stiffen the legs or the bracing", loadCase.id(), alphaCr),
+                    java.util.List.of());
+        }
+        return new SolvedCase(loadCase.id(), loadCase.combination(), loadCase.azimuthDeg(), solution, alphaCr);
     }
 
     /** The azimuths a combination is taken at: {@code azimuths} with wind, one null without. */

@@ -5,9 +5,10 @@ import tetrapod.solve.Solution;
 
 /**
  * One load case as solved: its id, the combination it belongs to, its wind azimuth (null for no
- * wind) and the solver's answer (which holds the load vector that was solved).
+ * wind), the solver's answer (which holds the load vector that was solved) and the case's elastic
+ * critical load factor α_cr (EN 1993-1-1 5.2.1; +∞ when its forces cannot buckle the structure).
  */
-public record SolvedCase(String id, String combination, Double azimuthDeg, Solution solution) {
+public record SolvedCase(String id, String combination, Double azimuthDeg, Solution solution, double alphaCr) {
     public SolvedCase {
         Objects.requireNonNull(id, "id");
         Objects.requireNonNull(combination, "combination");

@@ -59,10 +59,35 @@ final class AnalysisSummary {
                 + "residual of the %d cases solved in full: %.1e%n",
                 r.cases().size(), worst);
         modes(out, r);
+        criticalLoad(out, r);
         double max = r.maxUtilisation();
         out.printf(Locale.ROOT, "%s: largest strength utilisation %.3f%n", max > 1.0 ? "OVERSTRESSED" : "all checks pass", max);
         out.println("requirements: " + RequirementVerdict.line(brokenRequirements(r)));
         out.println("Results must be checked by a qualified engineer against the codes that apply locally.");
+    }
+
+    /** The smallest elastic critical load factor of the cases solved in full, and what it means. */
+    private static void criticalLoad(PrintWriter out, AnalysisResult r) {
+        SolvedCase worst = null;
+        for (SolvedCase c : r.cases()) {
+            if (worst == null || c.alphaCr() < worst.alphaCr()) {
+                worst = c;
+            }
+        }
+        if (worst == null) {
+            return;
+        }
+        if (Double.isInfinite(worst.alphaCr())) {
+            out.println("elastic critical load factor: no case solved in full can buckle the structure as a whole");
+        } else if (worst.alphaCr() >= 10) {
+            out.printf(Locale.ROOT, "elastic critical load factor: smallest α_cr %.1f (case %s) ≥ 10: first-order "
+                    + "analysis suffices (EN 1993-1-1 5.2.1 (3))%n", worst.alphaCr(), worst.id());
+        } else {
+            out.printf(Locale.ROOT, "WARNING: elastic critical load factor α_cr %.2f < 10 in case %s: second-order "
+                    + "effects matter (EN 1993-1-1 5.2.1 (3)) and are NOT included in these forces; amplify the sway "
+                    + "effects by 1/(1 - 1/α_cr) = %.3f or stiffen the tower%n", worst.alphaCr(), worst.id(),
+                    1 / (1 - 1 / worst.alphaCr()));
+        }
     }
 
     /** The first sway and first torsion frequencies, and every mode computed on one line. */

@@ -15,11 +15,20 @@ final class NaturalModesSection implements Section {
 
     @Override
     public String title() {
-        return "Natural frequencies";
+        return "Natural frequencies and elastic stability";
     }
 
     @Override
     public void write(Html out, ReportInput ri) {
+        out.p(ri.results().smallestAlphaCr().map(a -> String.format(Locale.ROOT, "Elastic critical load factor: the "
+                + "smallest over the cases solved in full is α_cr = %s (case %s), from the geometric stiffness of the "
+                + "members' axial forces (chord rotation, P-Δ; a bracing member split at nodes only its bending holds "
+                + "taken as one line). %s", Format.fixed(a.getValue(), 1), a.getKey(), a.getValue() >= 10
+                ? "At 10 or more a first-order analysis suffices (EN 1993-1-1 5.2.1 (3))."
+                : "Below 10 second-order effects matter (EN 1993-1-1 5.2.1 (3)) and are NOT included in the forces "
+                + "of this report; amplify the sway effects by 1/(1 − 1/α_cr) = " + Format.fixed(1 / (1 - 1 / a.getValue()), 3)
+                + " or stiffen the tower.")).orElse("Elastic critical load factor: no case solved in full can buckle the "
+                + "structure as a whole."));
         List<ModeRow> modes = ri.results().modes();
         if (modes.isEmpty()) {
             out.p("No natural modes were computed (nothing carries mass).");

@@ -163,6 +163,21 @@ public final class Results {
         return out;
     }
 
+    /**
+     * The smallest elastic critical load factor of the cases solved in full and its case, or empty
+     * when no case can buckle the structure (results.json {@code cases[].alphaCr}).
+     */
+    public java.util.Optional<Map.Entry<String, Double>> smallestAlphaCr() {
+        Map.Entry<String, Double> worst = null;
+        for (Map<String, Object> c : Tree.maps(doc, "cases")) {
+            Double a = Tree.numOrNull(c, "alphaCr");
+            if (a != null && (worst == null || a < worst.getValue())) {
+                worst = Map.entry(Tree.str(c, "id"), a);
+            }
+        }
+        return java.util.Optional.ofNullable(worst);
+    }
+
     /** The natural modes, lowest first (results.json {@code modes}; empty in older files). */
     public List<ModeRow> modes() {
         List<ModeRow> out = new ArrayList<>();

@@ -418,6 +418,7 @@ public final class ResultsDocument {
         m.put("reactions", nodeForces(s.reactions()));
         m.put("memberForces", s.memberForces().stream().map(ResultsDocument::memberForces).toList());
         m.put("equilibriumError", s.equilibriumError());
+        m.put("alphaCr", Double.isFinite(c.alphaCr()) ? c.alphaCr() : null);
         return m;
     }
 

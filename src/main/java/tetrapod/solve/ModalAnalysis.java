@@ -98,8 +98,8 @@ public final class ModalAnalysis {
                     mr[i * q + j] = mr[j * q + i] = dot(y[j], myi);
                 }
             }
-            symmetrise(kr, q);
-            Reduced reduced = Reduced.solve(kr, mr, q);
+            RitzProblem.symmetrise(kr, q);
+            RitzProblem reduced = RitzProblem.solve(kr, mr, q);
             lambda = reduced.values();
             for (int j = 0; j < q; j++) {
                 double[] column = new double[n];
@@ -134,51 +134,6 @@ public final class ModalAnalysis {
         return modes;
     }
 
-    /** The Ritz problem Kr φ = λ Mr φ, solved through Mr = V D Vᵀ and the eigenproblem of D^-½ Vᵀ Kr V D^-½. */
-    private record Reduced(double[] values, double[][] vectors) {
-
-        static Reduced solve(double[] kr, double[] mr, int q) {
-            SmallSymmetricEigen mass = new SmallSymmetricEigen(mr, q);
-            double[][] t = new double[q][q];  // t[k] = v_k / √d_k
-            for (int k = 0; k < q; k++) {
-                double d = mass.value(k);
-                if (!(d > 0)) {
-                    throw new IllegalStateException("subspace iteration: the vectors lost independence");
-                }
-                for (int r = 0; r < q; r++) {
-                    t[k][r] = mass.vector(k)[r] / Math.sqrt(d);
-                }
-            }
-            double[] a = new double[q * q];
-            for (int i = 0; i < q; i++) {
-                for (int j = 0; j < q; j++) {
-                    double s = 0;
-                    for (int r = 0; r < q; r++) {
-                        for (int c = 0; c < q; c++) {
-                            s += t[i][r] * kr[r * q + c] * t[j][c];
-                        }
-                    }
-                    a[i * q + j] = s;
-                }
-            }
-            symmetrise(a, q);
-            SmallSymmetricEigen eig = new SmallSymmetricEigen(a, q);
-            double[] values = new double[q];
-            double[][] vectors = new double[q][q];
-            for (int k = 0; k < q; k++) {
-                values[k] = eig.value(k);
-                for (int r = 0; r < q; r++) {
-                    double s = 0;
-                    for (int i = 0; i < q; i++) {
-                        s += t[i][r] * eig.vector(k)[i];
-                    }
-                    vectors[k][r] = s;
-                }
-            }
-            return new Reduced(values, vectors);
-        }
-    }
-
     /** Start vectors: the mass diagonal, then seeded random vectors weighted by the mass (deterministic). */
     private static double[][] start(double[] m, int q) {
         Random random = new Random(SEED);
@@ -189,16 +144,6 @@ public final class ModalAnalysis {
             }
         }
         return x;
-    }
-
-    private static void symmetrise(double[] a, int q) {
-        for (int i = 0; i < q; i++) {
-            for (int j = i + 1; j < q; j++) {
-                double s = 0.5 * (a[i * q + j] + a[j * q + i]);
-                a[i * q + j] = s;
-                a[j * q + i] = s;
-            }
-        }
     }
 
     private static double[] times(double[] m, double[] v) {

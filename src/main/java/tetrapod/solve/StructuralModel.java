@@ -278,6 +278,16 @@ public final class StructuralModel {
         return continuity;
     }
 
+    private List<GeometricLines> geometricLines;
+
+    /** The lines whose chord rotation carries the geometric stiffness (built on first use). */
+    synchronized List<GeometricLines> geometricLines() {
+        if (geometricLines == null) {
+            geometricLines = List.copyOf(GeometricLines.of(this));
+        }
+        return geometricLines;
+    }
+
     /**
      * Nodes of a truss held across a straight bracing member by its bending stiffness, because
      * only redundants join them there (see {@link ContinuityElement}); empty for a frame.
