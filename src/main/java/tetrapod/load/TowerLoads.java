@@ -120,7 +120,7 @@ public final class TowerLoads {
             }
         }
         List<Combination> combinations = spec.combinations().isEmpty()
-                ? DefaultCombinations.of(spec.hasWind() ? spec.wind().method() : null, spec.hasIce(),
+                ? DefaultCombinations.of(spec.actionFactorsOrDefault(), spec.hasWind() ? spec.wind().method() : null, spec.hasIce(),
                         !spec.nodal().isEmpty(), tower.isGenerated())
                 : spec.combinations().stream().map(TowerLoads::combination).toList();
         return new TowerLoads(tower, selfWeight, ancillaryWeight, iceWeight, ice, mergedNodal.toList(), wind, windOnIce,
