@@ -320,6 +320,26 @@ public final class Results {
         return Tree.mapOrEmpty(doc, "steel");
     }
 
+    /** The design basis: family, action factors and reliability class as one line, e.g. {@code en: action factors en1993-3-1, reliability class 2}. */
+    public String basisLine() {
+        Map<String, Object> b = Tree.mapOrEmpty(doc, "basis");
+        if (b.isEmpty()) {
+            return "";
+        }
+        Double rc = Tree.numOrNull(b, "reliabilityClass");
+        return Tree.str(b, "family") + ": action factors " + Tree.str(b, "actionFactors")
+                + (rc == null ? "" : ", reliability class " + rc.intValue());
+    }
+
+    /** One line per value of the model that belongs to the other family than its basis (allowed by mixedBasis). */
+    public List<String> basisWarnings() {
+        List<String> out = new ArrayList<>();
+        for (Object o : Tree.list(Tree.mapOrEmpty(doc, "basis"), "warnings")) {
+            out.add(String.valueOf(o));
+        }
+        return out;
+    }
+
     /** JSON paths of the input's values that Tetrapod filled in. */
     public List<String> defaults() {
         List<String> out = new ArrayList<>();
