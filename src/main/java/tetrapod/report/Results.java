@@ -197,7 +197,8 @@ public final class Results {
             List<FootingCheck> checks = new ArrayList<>();
             for (Map<String, Object> c : Tree.maps(f, "checks")) {
                 checks.add(new FootingCheck(Tree.str(c, "name"), Tree.num(c, "utilisation"), Tree.str(c, "clause"),
-                        orEmpty(Tree.str(c, "note")), Tree.str(c, "case"), Tree.numOrNull(c, "azimuthDeg")));
+                        orEmpty(Tree.str(c, "note")), Tree.str(c, "case"), Tree.numOrNull(c, "azimuthDeg"),
+                        Tree.str(c, "reactions")));
             }
             out.add(new FootingRow(Tree.integer(f, "node"), checks, Tree.num(f, "concreteVolumeRequired")));
         }

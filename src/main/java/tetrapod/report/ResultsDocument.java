@@ -190,6 +190,7 @@ public final class ResultsDocument {
             c.put("note", g.check().note());
             c.put("case", g.where().caseId());
             c.put("azimuthDeg", g.where().azimuthDeg());
+            c.put("reactions", g.level().jsonName());
             checks.add(c);
         });
         m.put("checks", checks);
