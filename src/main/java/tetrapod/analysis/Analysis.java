@@ -10,6 +10,7 @@ import tetrapod.check.FoundationCheck;
 import tetrapod.check.FoundationEnvelope;
 import tetrapod.check.MemberChecker;
 import tetrapod.check.MemberEnvelope;
+import tetrapod.check.ReactionLevel;
 import tetrapod.common.ProgressListener;
 import tetrapod.common.UnstableStructureException;
 import tetrapod.generate.Tower;
@@ -77,6 +78,12 @@ public final class Analysis {
         for (Combination c : loads.combinations()) {
             total += c.hasWind() ? azimuths.size() : 1;
         }
+        List<Combination> service = footing != null && footing.checksAt(ReactionLevel.SERVICE)
+                ? loads.serviceCombinations() : List.of();
+        long serviceTotal = 0;
+        for (Combination c : service) {
+            serviceTotal += c.hasWind() ? azimuths.size() : 1;
+        }
         long done = 0;
         double[] weights = new double[basis.size()];
         for (Combination c : loads.combinations()) {
@@ -84,7 +91,15 @@ public final class Analysis {
                 CaseKey key = new CaseKey(c, azimuth);
                 keys.put(key.id(), key);
                 sweep.add(key, basis.weights(c, azimuth, weights));
-                progress.progress("sweep and checks", ++done, total);
+                progress.progress("sweep and checks", ++done, total + serviceTotal);
+            }
+        }
+        for (Combination c : service) {
+            for (Double azimuth : azimuthsOf(c, azimuths)) {
+                CaseKey key = new CaseKey(c, azimuth);
+                keys.put(key.id(), key);
+                sweep.addService(key, basis.weights(c, azimuth, weights));
+                progress.progress("sweep and checks", ++done, total + serviceTotal);
             }
         }
 

@@ -8,6 +8,8 @@ import tetrapod.check.Extreme;
 import tetrapod.common.UnstableStructureException;
 import tetrapod.check.FoundationCheck;
 import tetrapod.check.FoundationEnvelope;
+import tetrapod.check.FoundationResult;
+import tetrapod.check.ReactionLevel;
 import tetrapod.check.HandMethod;
 import tetrapod.check.LegBaseForces;
 import tetrapod.check.MemberCheckResult;
@@ -134,10 +136,7 @@ final class Sweep {
             if (rows != null) {
                 rows.add(new double[] {s, azimuthDeg, fz, fh});
             }
-            if (footing != null) {
-                LegBaseForces f = LegBaseForces.fromReaction(fx, fy, fz);
-                foundations[s] = foundations[s].with(footing.check(f), f, caseId, azimuthDeg);
-            }
+            footing(s, fx, fy, fz, caseId, azimuthDeg, ReactionLevel.FACTORED);
         }
         responses.axialForces(weights, axial);
         double worst = -1;
@@ -160,6 +159,29 @@ final class Sweep {
         }
         if (azimuthDeg != null && !Double.isNaN(baseWidthX)) {
             hand.add(handComparison(combination.name(), azimuthDeg, weights, feCompression, feTension));
+        }
+    }
+
+    /**
+     * One service case (unfactored, {@code load.ServiceCombinations}): only the footing rules that
+     * take service reactions see it; members and the reaction extremes are factored.
+     */
+    void addService(CaseKey key, double[] weights) {
+        responses.reactions(weights, reactions);
+        for (int s = 0; s < supportNodes.size(); s++) {
+            footing(s, reactions[6 * s], reactions[6 * s + 1], reactions[6 * s + 2], key.id(), key.azimuthDeg(),
+                    ReactionLevel.SERVICE);
+        }
+    }
+
+    private void footing(int s, double fx, double fy, double fz, String caseId, Double azimuthDeg, ReactionLevel level) {
+        if (footing == null) {
+            return;
+        }
+        LegBaseForces f = LegBaseForces.fromReaction(fx, fy, fz);
+        FoundationResult result = footing.check(f, level);
+        if (result != null) {
+            foundations[s] = foundations[s].with(result, f, caseId, azimuthDeg, level);
         }
     }
 

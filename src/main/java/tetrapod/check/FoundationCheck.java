@@ -22,6 +22,9 @@ import tetrapod.model.spec.PartialFactors;
  * <li>The concrete volume that would balance the uplift alone, without soil: T × FS/γ_c, or
  *     T/(γ_G,stb γ_c).</li>
  * </ul>
+ * The allowable-stress rules (factor of safety, allowable bearing pressure, sliding, allowable rod
+ * stresses) take service reactions, the partial-factor rules (UPL, rods by grade) factored ones
+ * ({@link ReactionLevel}).
  */
 public final class FoundationCheck {
 
@@ -52,36 +55,69 @@ public final class FoundationCheck {
         return Math.max(0, uplift) * upliftFactor() / block.concreteUnitWeight();
     }
 
-    public FoundationResult check(LegBaseForces forces) {
+    /** The level of reactions the uplift rule takes: service for a factor of safety, factored for UPL. */
+    public ReactionLevel upliftLevel() {
+        return spec.uplift() instanceof FoundationSpec.FactorOfSafety ? ReactionLevel.SERVICE : ReactionLevel.FACTORED;
+    }
+
+    private ReactionLevel rodLevel() {
+        return rods instanceof AllowableStressAnchorRods ? ReactionLevel.SERVICE : ReactionLevel.FACTORED;
+    }
+
+    /** Whether any rule takes reactions of {@code level} (bearing and sliding always take service ones). */
+    public boolean checksAt(ReactionLevel level) {
+        return level == ReactionLevel.SERVICE || upliftLevel() == level || (rods != null && rodLevel() == level);
+    }
+
+    /** Every check of the rules that take reactions of {@code level}; null when none does. */
+    public FoundationResult check(LegBaseForces forces, ReactionLevel level) {
         List<CheckResult> out = new ArrayList<>();
+        if (upliftLevel() == level) {
+            out.add(uplift(forces));
+        }
+        if (level == ReactionLevel.SERVICE) {
+            out.add(bearing(forces));
+            out.add(sliding(forces));
+        }
+        if (rods != null && rodLevel() == level) {
+            out.addAll(rods.check(forces.uplift(), forces.horizontal()));
+        }
+        if (out.isEmpty()) {
+            return null;
+        }
+        return new FoundationResult(out, upliftLevel() == level ? concreteVolumeToBalance(forces.uplift()) : 0);
+    }
+
+    private CheckResult uplift(LegBaseForces forces) {
         double weights = block.concreteWeight() + block.frustumWeight();
         boolean fs = spec.uplift() instanceof FoundationSpec.FactorOfSafety;
-        out.add(new CheckResult(CheckMode.UPLIFT, CheckResult.ratio(forces.uplift() * upliftFactor(), weights),
+        return new CheckResult(CheckMode.UPLIFT, CheckResult.ratio(forces.uplift() * upliftFactor(), weights),
                 fs ? "uplift × FS ≤ weight of block and soil frustum (common practice)"
                    : "EN 1997-1 2.4.7.4 (2.8) UPL, γ_G,stb on block and soil frustum",
                 String.format(Locale.ROOT, "block %.2f m³ (%.1f kN), frustum %.2f m³ (%.1f kN), factor %.3f",
                         block.concreteVolume(), block.concreteWeight() / 1e3, block.frustumVolume(),
-                        block.frustumWeight() / 1e3, upliftFactor())));
+                        block.frustumWeight() / 1e3, upliftFactor()));
+    }
+
+    private CheckResult bearing(LegBaseForces forces) {
         double onBase = forces.compression() + block.concreteWeight() + block.soilOnBlockWeight();
         double pressure = onBase / block.baseArea();
-        out.add(new CheckResult(CheckMode.BEARING_PRESSURE, pressure / (spec.allowableBearing() * Units.KPA),
+        return new CheckResult(CheckMode.BEARING_PRESSURE, pressure / (spec.allowableBearing() * Units.KPA),
                 "allowable bearing pressure (common practice)",
-                String.format(Locale.ROOT, "q = %.1f kPa, allowable %.1f kPa", pressure / 1e3, spec.allowableBearing())));
+                String.format(Locale.ROOT, "q = %.1f kPa, allowable %.1f kPa", pressure / 1e3, spec.allowableBearing()));
+    }
+
+    private CheckResult sliding(LegBaseForces forces) {
         if (forces.uplift() > 0 && rods != null) {
-            out.add(new CheckResult(CheckMode.SLIDING, 0, "H × FS ≤ μ N (common practice)",
-                    "the leg pulls up: the horizontal force is carried by the anchor rods (anchorShear)"));
-        } else {
-            double normal = Math.max(0, forces.vertical() + block.concreteWeight() + block.soilOnBlockWeight());
-            double friction = spec.friction() * normal;
-            double demand = forces.horizontal() * spec.slidingFactorOfSafety();
-            double sliding = demand <= 0 ? 0 : friction > 0 ? demand / friction : CheckResult.NO_RESISTANCE;
-            out.add(new CheckResult(CheckMode.SLIDING, sliding, "H × FS ≤ μ N (common practice)",
-                    String.format(Locale.ROOT, "H = %.1f kN, μ N = %.1f kN%s", forces.horizontal() / 1e3, friction / 1e3,
-                            friction > 0 ? "" : " (the block lifts off its base)")));
+            return new CheckResult(CheckMode.SLIDING, 0, "H × FS ≤ μ N (common practice)",
+                    "the leg pulls up: the horizontal force is carried by the anchor rods (anchorShear)");
         }
-        if (rods != null) {
-            out.addAll(rods.check(forces.uplift(), forces.horizontal()));
-        }
-        return new FoundationResult(out, concreteVolumeToBalance(forces.uplift()));
+        double normal = Math.max(0, forces.vertical() + block.concreteWeight() + block.soilOnBlockWeight());
+        double friction = spec.friction() * normal;
+        double demand = forces.horizontal() * spec.slidingFactorOfSafety();
+        double sliding = demand <= 0 ? 0 : friction > 0 ? demand / friction : CheckResult.NO_RESISTANCE;
+        return new CheckResult(CheckMode.SLIDING, sliding, "H × FS ≤ μ N (common practice)",
+                String.format(Locale.ROOT, "H = %.1f kN, μ N = %.1f kN%s", forces.horizontal() / 1e3, friction / 1e3,
+                        friction > 0 ? "" : " (the block lifts off its base)"));
     }
 }

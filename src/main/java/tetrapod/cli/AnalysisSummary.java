@@ -6,6 +6,10 @@ import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import tetrapod.model.spec.ActionFactorSet;
+import tetrapod.model.spec.ActionFactors;
+import tetrapod.model.spec.BasisMix;
+import tetrapod.model.spec.TowerSpec;
 import java.util.Map;
 import tetrapod.analysis.Analysis;
 import tetrapod.analysis.AnalysisResult;
@@ -31,11 +35,12 @@ final class AnalysisSummary {
 
     private AnalysisSummary() { }
 
-    static void print(PrintWriter out, AnalysisResult r) {
+    static void print(PrintWriter out, TowerSpec spec, AnalysisResult r) {
         Frame frame = r.tower().frame();
         out.printf(Locale.ROOT, "%s: %s, %d nodes, %d members; %d load cases (%d combinations, sweep step %s deg)%n",
                 frame.name(), frame.idealisation().jsonName(), frame.nodes().size(), frame.members().size(),
                 r.caseCount(), r.loads().combinations().size(), CaseKey.degrees(r.loads().sweepStep()));
+        basis(out, spec);
         if (!r.model().autoRestraints().isEmpty()) {
             double largest = r.autoRestraints().stream().mapToDouble(AutoRestraintPeak::force).max().orElse(0);
             out.printf(Locale.ROOT, "auto-restrained: %d directions where the lattice model has no stiffness; none "
@@ -120,6 +125,15 @@ final class AnalysisSummary {
             }
         }
         return out;
+    }
+
+    private static void basis(PrintWriter out, TowerSpec spec) {
+        ActionFactors f = spec.loads().actionFactorsOrDefault();
+        out.printf(Locale.ROOT, "design basis: %s; action factors %s%s%n", spec.basis().jsonName(), f.set().jsonName(),
+                f.set() == ActionFactorSet.EN1993_3_1 ? ", reliability class " + f.reliabilityClass() : "");
+        for (BasisMix mix : spec.basisMixes()) {
+            out.println("WARNING: mixed design basis (allowed by mixedBasis): " + mix.describe(spec.basis()));
+        }
     }
 
     private static void ice(PrintWriter out, AnalysisResult r) {

@@ -97,7 +97,7 @@ final class AnalyzeCommand implements Callable<Integer> {
                 SizingHistoryFile.matching(folder, results));
         watch.end("report");
 
-        AnalysisSummary.print(out, result);
+        AnalysisSummary.print(out, loaded.spec(), result);
         out.println("tower.png " + route.replaceFirst("^render: ", "drawn by "));
         out.println("results written to " + folder + ": results.json, " + CsvTables.MEMBERS + ", "
                 + CsvTables.REACTIONS + ", " + CsvTables.WIND + ", " + CsvTables.REQUIREMENTS + ", tower.png, " + ReportHtml.FILE);

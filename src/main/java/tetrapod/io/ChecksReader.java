@@ -10,6 +10,7 @@ import tetrapod.model.spec.CheckMethod;
 import tetrapod.model.spec.ChecksSpec;
 import tetrapod.model.spec.ConnectedLeg;
 import tetrapod.model.spec.ConnectionSpec;
+import tetrapod.model.spec.DesignBasis;
 import tetrapod.model.spec.CrossingRule;
 import tetrapod.model.spec.FoundationSpec;
 import tetrapod.model.spec.PartialFactors;
@@ -48,23 +49,29 @@ final class ChecksReader {
     private static final List<String> LEGS = List.of(ConnectedLeg.values()).stream().map(ConnectedLeg::jsonName).toList();
     private static final Bound HALF_ANGLE = new Bound(0, true, 90, false);
 
+    /** EN 1990 Table A1.2(A) EQU, γ_G,inf on a stabilising permanent action (recommended value). */
+    static final double DEFAULT_GAMMA_STABILISING = 0.9;
+
     private final Problems problems;
     private final int segmentCount;
+    private final DesignBasis basis;
 
     /**
      * @param segmentCount the number of segments of a generated tower; 0 for an explicit frame; −1
      *                     when the segments could not be read (their numbers are then not checked)
+     * @param basis        the model's design basis, whose check method and uplift rule are the defaults
      */
-    ChecksReader(Problems problems, int segmentCount) {
+    ChecksReader(Problems problems, int segmentCount, DesignBasis basis) {
         this.problems = problems;
         this.segmentCount = segmentCount;
+        this.basis = basis;
     }
 
     /** The checks, or null (reported). */
     ChecksSpec read(Fields checks) {
         int before = problems.count();
         checks.allowOnly(CHECKS_KEYS);
-        CheckMethod method = Choices.CHECK_METHOD.optional(checks, "method", ChecksSpec.DEFAULT.method());
+        CheckMethod method = Choices.CHECK_METHOD.optional(checks, "method", ChecksSpec.defaultFor(basis).method());
         PartialFactors factors = PartialFactors.RECOMMENDED;
         Fields factorFields = checks.object("partialFactors", false);
         if (factorFields != null) {
@@ -257,7 +264,9 @@ final class ChecksReader {
         double concrete = f.optionalNumber("concreteUnitWeight", Bound.POSITIVE, "kN/m³", DEFAULT_CONCRETE_UNIT_WEIGHT);
         double soil = f.requiredNumber("soilUnitWeight", Bound.NON_NEGATIVE, "kN/m³");
         double angle = f.requiredNumber("frustumHalfAngle", HALF_ANGLE, "degrees");
-        FoundationSpec.UpliftRule uplift = new FoundationSpec.FactorOfSafety(DEFAULT_FACTOR_OF_SAFETY);
+        FoundationSpec.UpliftRule uplift = basis == DesignBasis.EN
+                ? new FoundationSpec.PartialFactor(DEFAULT_GAMMA_STABILISING)
+                : new FoundationSpec.FactorOfSafety(DEFAULT_FACTOR_OF_SAFETY);
         Fields u = f.object("uplift", false);
         if (u != null) {
             uplift = uplift(u);

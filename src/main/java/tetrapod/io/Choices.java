@@ -6,9 +6,11 @@ import java.util.function.Function;
 import tetrapod.model.Face;
 import tetrapod.model.Idealisation;
 import tetrapod.model.Role;
+import tetrapod.model.spec.ActionFactorSet;
 import tetrapod.model.spec.Asce7Edition;
 import tetrapod.model.spec.Bracing;
 import tetrapod.model.spec.CheckMethod;
+import tetrapod.model.spec.DesignBasis;
 import tetrapod.model.spec.Exposure;
 import tetrapod.model.spec.Horizontals;
 import tetrapod.model.spec.SupportType;
@@ -26,6 +28,9 @@ record Choices<E>(String what, List<String> names, List<E> values) {
     static final Choices<TerrainCategory> TERRAIN = of("terrain category", TerrainCategory.values(), TerrainCategory::jsonName);
     static final Choices<Exposure> EXPOSURE = of("exposure", Exposure.values(), Exposure::jsonName);
     static final Choices<Asce7Edition> EDITION = of("ASCE 7 edition", Asce7Edition.values(), Asce7Edition::jsonName);
+    static final Choices<DesignBasis> BASIS = of("design basis", DesignBasis.values(), DesignBasis::jsonName);
+    static final Choices<ActionFactorSet> ACTION_FACTORS = of("action factors", ActionFactorSet.values(),
+            ActionFactorSet::jsonName);
     static final Choices<Face> FACE = of("face", new Face[] {Face.X_PLUS, Face.X_MINUS, Face.Y_PLUS, Face.Y_MINUS},
             Face::label);
 

@@ -9,9 +9,12 @@ import java.util.List;
 import java.util.Map;
 import java.util.function.IntPredicate;
 import tetrapod.model.Face;
+import tetrapod.model.spec.ActionFactorSet;
+import tetrapod.model.spec.ActionFactors;
 import tetrapod.model.spec.AncillarySpec;
 import tetrapod.model.spec.Asce7Edition;
 import tetrapod.model.spec.CombinationSpec;
+import tetrapod.model.spec.DesignBasis;
 import tetrapod.model.spec.Exposure;
 import tetrapod.model.spec.IceSpec;
 import tetrapod.model.spec.LoadAction;
@@ -26,7 +29,8 @@ import tetrapod.model.spec.WindSpec;
  */
 final class LoadsReader {
 
-    static final List<String> LOADS_KEYS = List.of("nodal", "wind", "ancillaries", "ice", "combinations", "sweepStep");
+    static final List<String> LOADS_KEYS = List.of("nodal", "wind", "ancillaries", "ice", "combinations", "sweepStep",
+            "actionFactors", "reliabilityClass");
     static final List<String> NODAL_KEYS = List.of("node", "F");
     static final Map<String, List<String>> WIND_KEYS = windKeys();
     static final Map<String, List<String>> ANCILLARY_KEYS = Map.of(
@@ -80,8 +84,9 @@ final class LoadsReader {
      *
      * @param nodeExists whether a node id exists; null when the ids are not known yet (generated towers)
      * @param tower      whether the tower is generated and its height (NaN when not known)
+     * @param basis      the model's design basis, whose action factors are the default
      */
-    LoadsSpec read(Fields loads, IntPredicate nodeExists, Tower tower) {
+    LoadsSpec read(Fields loads, IntPredicate nodeExists, Tower tower, DesignBasis basis) {
         int before = problems.count();
         loads.allowOnly(LOADS_KEYS);
         JsonNode nodal = loads.array("nodal", false);
@@ -118,9 +123,29 @@ final class LoadsReader {
                 : combinations(combos, loads.path("combinations"), loads.has("wind") && tower.generated(),
                         loads.has("ice") && tower.generated());
         double step = loads.has("sweepStep") ? sweepStep(loads) : LoadsSpec.DEFAULT_SWEEP_STEP;
+        ActionFactors factors = actionFactors(loads, basis);
         return problems.count() == before
-                ? new LoadsSpec(list, wind, ancillaries, ice, combinations, step)
+                ? new LoadsSpec(list, wind, ancillaries, ice, combinations, step, factors)
                 : null;
+    }
+
+    /** {@code actionFactors} (default: the basis's) and {@code reliabilityClass} (EN 1993-3-1 only, default 2). */
+    private ActionFactors actionFactors(Fields loads, DesignBasis basis) {
+        ActionFactors byDefault = ActionFactors.defaultFor(basis);
+        ActionFactorSet set = Choices.ACTION_FACTORS.optional(loads, "actionFactors", byDefault.set());
+        if (set == null) {
+            return null;
+        }
+        if (!loads.has("reliabilityClass")) {
+            return new ActionFactors(set, ActionFactors.DEFAULT_RELIABILITY_CLASS);
+        }
+        if (set != ActionFactorSet.EN1993_3_1) {
+            problems.add(loads.path("reliabilityClass"), "applies only to actionFactors en1993-3-1 (EN 1993-3-1 Annex A);"
+                    + " the action factors here are " + set.jsonName());
+            return null;
+        }
+        Integer rc = Values.whole(loads.get("reliabilityClass"), loads.path("reliabilityClass"), 1, 3, problems);
+        return rc == null ? null : new ActionFactors(set, rc);
     }
 
     private NodalLoadSpec nodal(Fields f, IntPredicate nodeExists) {

@@ -9,7 +9,12 @@ import tetrapod.common.BadInputException;
 import tetrapod.common.Problem;
 import tetrapod.model.Idealisation;
 import tetrapod.model.SectionLookup;
+import tetrapod.model.spec.ActionFactorSet;
 import tetrapod.model.spec.BaseSpec;
+import tetrapod.model.spec.BasisMix;
+import tetrapod.model.spec.BasisMixes;
+import tetrapod.model.spec.CheckMethod;
+import tetrapod.model.spec.DesignBasis;
 import tetrapod.model.spec.ExplicitFrameSpec;
 import tetrapod.model.spec.ChecksSpec;
 import tetrapod.model.spec.LoadsSpec;
@@ -30,7 +35,8 @@ import tetrapod.model.spec.UserSectionSpec;
 public final class SpecReader {
 
     static final List<String> TOP_KEYS = List.of("name", "description", "idealisation", "base", "segments",
-            "material", "supports", "connectionAllowance", "planBracingLevels", "userSections", "frame", "loads", "checks");
+            "material", "supports", "connectionAllowance", "planBracingLevels", "userSections", "frame", "loads", "checks",
+            "basis", "mixedBasis");
     static final double DEFAULT_CONNECTION_ALLOWANCE = 0.10;
 
     private SpecReader() { }
@@ -115,19 +121,62 @@ public final class SpecReader {
                 frame = frameFields == null ? null : frameReader.read(frameFields);
                 nodeExists = frameFields == null ? null : frameReader::nodeExists;
             }
+            boolean basisGiven = root.has("basis");
+            DesignBasis basis = basisGiven ? Choices.BASIS.optional(root, "basis", DesignBasis.EN) : derivedBasis(root);
+            Boolean mixedBasis = root.optionalBool("mixedBasis", false);
             Fields loadFields = root.object("loads", false);
-            LoadsSpec loads = loadFields == null ? LoadsSpec.NONE : new LoadsReader(problems).read(loadFields, nodeExists, loadTower);
+            DesignBasis readingBasis = basis == null ? DesignBasis.EN : basis;
+            LoadsSpec loads = loadFields == null ? LoadsSpec.NONE
+                    : new LoadsReader(problems).read(loadFields, nodeExists, loadTower, readingBasis);
 
             Fields checkFields = root.object("checks", false);
             int segmentCount = explicit && !generated ? 0 : segments == null ? -1 : segments.size();
-            ChecksSpec checks = checkFields == null ? ChecksSpec.DEFAULT
-                    : new ChecksReader(problems, segmentCount).read(checkFields);
+            ChecksSpec checks = checkFields == null ? null
+                    : new ChecksReader(problems, segmentCount, readingBasis).read(checkFields);
 
             if (problems.count() > 0) {
                 return null;
             }
-            return new TowerSpec(name, description, idealisation, base, segments, material, supports, allowance,
-                    planLevels, userSections, frame, loads, checks);
+            TowerSpec spec = new TowerSpec(name, description, idealisation, base, segments, material, supports, allowance,
+                    planLevels, userSections, frame, loads, checks, basis, mixedBasis);
+            if (!mixedBasis) {
+                refuseMixes(spec, basisGiven);
+            }
+            return spec;
+        }
+
+        /** The basis of a model without the basis key: the family of its wind method, else of its check method. */
+        private DesignBasis derivedBasis(Fields root) {
+            String wind = text(root.get("loads"), "wind", "method");
+            String checks = text(root.get("checks"), "method");
+            String factors = text(root.get("loads"), "actionFactors");
+            CheckMethod checkMethod = "asce10".equals(checks) ? CheckMethod.ASCE10 : "en1993".equals(checks) ? CheckMethod.EN1993 : null;
+            ActionFactorSet set = null;
+            for (ActionFactorSet s : ActionFactorSet.values()) {
+                set = s.jsonName().equals(factors) ? s : set;
+            }
+            return BasisMixes.derive(wind, checkMethod, set);
+        }
+
+        /** The text at {@code keys} under {@code node}, or null. */
+        private static String text(JsonNode node, String... keys) {
+            JsonNode at = node;
+            for (String key : keys) {
+                at = at != null && at.isObject() ? at.get(key) : null;
+            }
+            return at != null && at.isTextual() ? at.textValue() : null;
+        }
+
+        /** Reports every value of the other family than the basis (mixedBasis is false). */
+        private void refuseMixes(TowerSpec spec, boolean basisGiven) {
+            String basis = spec.basis().jsonName();
+            String whose = basisGiven ? "the model's basis is " + basis
+                    : "the model's basis is " + basis + " (no basis key: taken from loads.wind.method, else checks.method)";
+            for (BasisMix mix : spec.basisMixes()) {
+                problems.add(mix.key(), mix.rule() + " belongs to the " + mix.family().jsonName() + " family but " + whose
+                        + "; allowed here: " + BasisMixes.allowed(mix.key(), spec.basis())
+                        + "; or set \"basis\" to match and change the other keys, or \"mixedBasis\": true to mix families");
+            }
         }
     }
 }

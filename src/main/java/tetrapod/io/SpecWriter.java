@@ -28,6 +28,9 @@ import tetrapod.model.spec.MaterialSpec;
 import tetrapod.model.spec.PartialFactors;
 import tetrapod.model.spec.SegmentSpec;
 import tetrapod.model.spec.TowerSpec;
+import tetrapod.model.spec.ActionFactorSet;
+import tetrapod.model.spec.ActionFactors;
+import tetrapod.model.spec.DesignBasis;
 import tetrapod.model.spec.UserSectionSpec;
 import tetrapod.model.spec.WindSpec;
 
@@ -64,6 +67,10 @@ public final class SpecWriter {
         m.put("name", spec.name());
         m.put("description", spec.description());
         m.put("idealisation", spec.idealisation().jsonName());
+        m.put("basis", spec.basis().jsonName());
+        if (spec.mixedBasis()) {
+            m.put("mixedBasis", true);
+        }
         if (!spec.isExplicit()) {
             m.put("base", ordered("widthX", spec.base().widthX(), "widthY", spec.base().widthY()));
             m.put("segments", spec.segments().stream().map(SpecWriter::segment).toList());
@@ -82,7 +89,7 @@ public final class SpecWriter {
             m.put("userSections", sections);
         }
         spec.explicitFrame().ifPresent(frame -> m.put("frame", frame(frame)));
-        Map<String, Object> loads = loads(spec.loads());
+        Map<String, Object> loads = loads(spec.loads(), spec.basis());
         if (!loads.isEmpty()) {
             m.put("loads", loads);
         }
@@ -281,8 +288,12 @@ public final class SpecWriter {
         return ordered("node", s.node(), "restraint", flags);
     }
 
-    /** The loads with their defaults written out; nothing for what is absent; the sweep step with wind or when not the default. */
-    private static Map<String, Object> loads(LoadsSpec loads) {
+    /**
+     * The loads with their defaults written out; nothing for what is absent; the sweep step with wind
+     * or when not the default; the action factors with any other load, or alone when they are not
+     * the basis's default.
+     */
+    private static Map<String, Object> loads(LoadsSpec loads, DesignBasis basis) {
         Map<String, Object> m = new LinkedHashMap<>();
         if (!loads.nodal().isEmpty()) {
             m.put("nodal", loads.nodal().stream().map(SpecWriter::nodalLoad).toList());
@@ -301,6 +312,13 @@ public final class SpecWriter {
         }
         if (loads.hasWind() || loads.sweepStep() != LoadsSpec.DEFAULT_SWEEP_STEP) {
             m.put("sweepStep", loads.sweepStep());
+        }
+        ActionFactors factors = loads.actionFactorsOrDefault();
+        if (!m.isEmpty() || !factors.equals(ActionFactors.defaultFor(basis))) {
+            m.put("actionFactors", factors.set().jsonName());
+            if (factors.set() == ActionFactorSet.EN1993_3_1) {
+                m.put("reliabilityClass", factors.reliabilityClass());
+            }
         }
         return m;
     }

@@ -5,16 +5,20 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import tetrapod.model.spec.ActionFactors;
+import tetrapod.model.spec.DesignBasis;
 import tetrapod.model.spec.LoadAction;
 
 /**
- * The combinations used when the model file gives none, per wind method. The nodal loads of the
- * file, when there are any, are added to every combination with factor 1.0 (taken as given).
+ * The combinations used when the model file gives none, per set of action factors (which follows
+ * the design basis). The nodal loads of the file, when there are any, are added to every
+ * combination with factor 1.0 (taken as given).
  *
  * <ul>
- * <li>en1991: EN 1990 (6.10) with γ_G = 1.35 and γ_Q = 1.5 (Table A1.2(B)); 1.0 G for uplift
- *     (favourable permanent action); with ice, ice leading with wind on ice accompanying and the
- *     reverse, ψ0 = 0.5 ({@link En1990Combinations}).</li>
+ * <li>en1993-3-1: EN 1990 (6.10) with the factors of EN 1993-3-1 Annex A for the reliability class
+ *     (class 2: 1.1G + 1.4W, 1.0G + 1.4W); en1990: with EN 1990 Table A1.2(B) (1.35G + 1.5W,
+ *     1.0G + 1.5W); with ice, ice leading with wind on ice accompanying and the reverse, ψ0 = 0.5
+ *     ({@link EnCombinations}).</li>
  * <li>asce7: ASCE 7 strength design 1.2D + 1.0W, 0.9D + 1.0W, and with ice 1.2D + 1.0Di + 1.0Wi,
  *     0.9D + 1.0Di + 1.0Wi ({@link Asce7Combinations}).</li>
  * <li>uniform: characteristic sums 1.0G + 1.0W (and 1.0G + 1.0I + 1.0Wi), for hand calculations.</li>
@@ -27,12 +31,14 @@ public final class DefaultCombinations {
     private DefaultCombinations() { }
 
     /**
+     * @param factors   the partial factors for actions
      * @param method    the wind method (en1991, asce7, uniform) or null for no wind
      * @param ice       whether the model has ice
      * @param nodal     whether the model has nodal loads
      * @param generated whether the tower is generated (false: an explicit frame)
      */
-    public static List<Combination> of(String method, boolean ice, boolean nodal, boolean generated) {
+    public static List<Combination> of(ActionFactors factors, String method, boolean ice, boolean nodal,
+                                       boolean generated) {
         List<Combination> base;
         if (method == null) {
             base = new ArrayList<>();
@@ -45,17 +51,17 @@ public final class DefaultCombinations {
                 base.add(named(Symbols.EN, Map.of(LoadAction.DEAD, 1.0, LoadAction.ICE, 1.0)));
             }
         } else {
-            base = switch (method) {
-                case "en1991" -> En1990Combinations.defaults(ice);
-                case "asce7" -> Asce7Combinations.defaults(ice);
-                case "uniform" -> uniform(ice);
-                default -> throw new IllegalArgumentException("unknown wind method " + method);
+            base = "uniform".equals(method) ? uniform(ice) : switch (factors.set()) {
+                case EN1993_3_1 -> EnCombinations.defaults(EnPartialFactors.annexA(factors.reliabilityClass()), ice);
+                case EN1990 -> EnCombinations.defaults(EnPartialFactors.EN1990_BUILDINGS, ice);
+                case ASCE7 -> Asce7Combinations.defaults(ice);
             };
         }
         if (!nodal) {
             return List.copyOf(base);
         }
-        Symbols symbols = "asce7".equals(method) ? Symbols.ASCE : Symbols.EN;
+        boolean asce = method != null && !"uniform".equals(method) && factors.set().family() == DesignBasis.US;
+        Symbols symbols = asce ? Symbols.ASCE : Symbols.EN;
         List<Combination> withNodal = new ArrayList<>();
         for (Combination c : base) {
             Map<LoadAction, Double> f = new EnumMap<>(LoadAction.class);

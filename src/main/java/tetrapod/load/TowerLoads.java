@@ -44,13 +44,15 @@ public final class TowerLoads {
     private final WindLoads wind;
     private final WindLoads windOnIce;
     private final List<Combination> combinations;
+    private final List<Combination> serviceCombinations;
     private final double sweepStep;
     private final LoadBasis basis;
 
     private TowerLoads(Tower tower, List<NodeForce> selfWeight, List<NodeForce> ancillaryWeight, List<NodeForce> ice,
                        Asce7Ice icing, List<NodeForce> nodal, WindLoads wind, WindLoads windOnIce, List<Combination> combinations,
-                       double sweepStep) {
+                       List<Combination> serviceCombinations, double sweepStep) {
         this.tower = tower;
+        this.serviceCombinations = List.copyOf(serviceCombinations);
         this.selfWeight = List.copyOf(selfWeight);
         this.ancillaryWeight = List.copyOf(ancillaryWeight);
         NodalLoads d = new NodalLoads();
@@ -120,11 +122,14 @@ public final class TowerLoads {
             }
         }
         List<Combination> combinations = spec.combinations().isEmpty()
-                ? DefaultCombinations.of(spec.hasWind() ? spec.wind().method() : null, spec.hasIce(),
+                ? DefaultCombinations.of(spec.actionFactorsOrDefault(), spec.hasWind() ? spec.wind().method() : null, spec.hasIce(),
                         !spec.nodal().isEmpty(), tower.isGenerated())
                 : spec.combinations().stream().map(TowerLoads::combination).toList();
+        List<Combination> service = ServiceCombinations.of(spec.actionFactorsOrDefault(),
+                spec.hasWind() && tower.isGenerated() ? spec.wind().method() : null, spec.hasIce() && tower.isGenerated(),
+                !spec.nodal().isEmpty());
         return new TowerLoads(tower, selfWeight, ancillaryWeight, iceWeight, ice, mergedNodal.toList(), wind, windOnIce,
-                combinations, spec.sweepStep());
+                combinations, service, spec.sweepStep());
     }
 
     private static Combination combination(CombinationSpec c) {
@@ -237,6 +242,11 @@ public final class TowerLoads {
 
     public List<Combination> combinations() {
         return combinations;
+    }
+
+    /** The unfactored combinations the allowable-stress footing rules take ({@link ServiceCombinations}). */
+    public List<Combination> serviceCombinations() {
+        return serviceCombinations;
     }
 
     /** Azimuth step of the sweep, degrees. */

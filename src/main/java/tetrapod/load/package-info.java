@@ -44,7 +44,7 @@
  * {@link tetrapod.load.Asce7Wind}, {@link tetrapod.load.UniformWind}. Lattice force coefficients
  * ({@link tetrapod.load.LatticeCoefficients}): {@link tetrapod.load.En1993LatticeCoefficients},
  * {@link tetrapod.load.Asce7TrussedTowerCoefficients}, {@link tetrapod.load.UniformCoefficients}.
- * Ice: {@link tetrapod.load.Asce7Ice}. Combinations: {@link tetrapod.load.En1990Combinations},
+ * Ice: {@link tetrapod.load.Asce7Ice}. Combinations: {@link tetrapod.load.EnCombinations} ({@link tetrapod.load.EnPartialFactors}),
  * {@link tetrapod.load.Asce7Combinations}, {@link tetrapod.load.DefaultCombinations}.
  */
 package tetrapod.load;

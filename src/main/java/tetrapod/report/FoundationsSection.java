@@ -28,12 +28,16 @@ final class FoundationsSection implements Section {
             return;
         }
         out.p("Each leg stands on a concrete block (input, check settings). For every leg base and every kind of "
-                + "check, the governing case over every combination and azimuth.");
-        Table t = new Table("foundation-table", "", List.of("node", "check", "utilisation", "clause", "case", "note"));
+                + "check, the governing case over every combination and azimuth. Allowable-stress rules (a factor of "
+                + "safety, an allowable bearing pressure, allowable rod stresses, sliding) take the unfactored service "
+                + "reactions of the 'service: ...' combinations; partial-factor rules (EN 1997-1 UPL, EN 1993-1-8 rods) "
+                + "the factored ones.");
+        Table t = new Table("foundation-table", "", List.of("node", "check", "utilisation", "clause", "reactions", "case",
+                "note"));
         for (FootingRow f : footings) {
             for (FootingCheck c : f.checks()) {
                 t.row(Cell.num(Integer.toString(f.node())), Cell.of(c.name()), Cell.utilisation(c.utilisation(), ""),
-                        Cell.of(c.clause()), Cell.caseId((c.caseId())), Cell.of(c.note()));
+                        Cell.of(c.clause()), Cell.of(c.reactions()), Cell.caseId((c.caseId())), Cell.of(c.note()));
             }
         }
         t.writeTo(out);

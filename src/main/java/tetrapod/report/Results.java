@@ -225,7 +225,8 @@ public final class Results {
             List<FootingCheck> checks = new ArrayList<>();
             for (Map<String, Object> c : Tree.maps(f, "checks")) {
                 checks.add(new FootingCheck(Tree.str(c, "name"), Tree.num(c, "utilisation"), Tree.str(c, "clause"),
-                        orEmpty(Tree.str(c, "note")), Tree.str(c, "case"), Tree.numOrNull(c, "azimuthDeg")));
+                        orEmpty(Tree.str(c, "note")), Tree.str(c, "case"), Tree.numOrNull(c, "azimuthDeg"),
+                        Tree.str(c, "reactions")));
             }
             out.add(new FootingRow(Tree.integer(f, "node"), checks, Tree.num(f, "concreteVolumeRequired")));
         }
@@ -346,6 +347,26 @@ public final class Results {
 
     public Map<String, Object> steel() {
         return Tree.mapOrEmpty(doc, "steel");
+    }
+
+    /** The design basis: family, action factors and reliability class as one line, e.g. {@code en: action factors en1993-3-1, reliability class 2}. */
+    public String basisLine() {
+        Map<String, Object> b = Tree.mapOrEmpty(doc, "basis");
+        if (b.isEmpty()) {
+            return "";
+        }
+        Double rc = Tree.numOrNull(b, "reliabilityClass");
+        return Tree.str(b, "family") + ": action factors " + Tree.str(b, "actionFactors")
+                + (rc == null ? "" : ", reliability class " + rc.intValue());
+    }
+
+    /** One line per value of the model that belongs to the other family than its basis (allowed by mixedBasis). */
+    public List<String> basisWarnings() {
+        List<String> out = new ArrayList<>();
+        for (Object o : Tree.list(Tree.mapOrEmpty(doc, "basis"), "warnings")) {
+            out.add(String.valueOf(o));
+        }
+        return out;
     }
 
     /** JSON paths of the input's values that Tetrapod filled in. */

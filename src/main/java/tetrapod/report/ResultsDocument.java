@@ -35,6 +35,8 @@ import tetrapod.model.Restraint;
 import tetrapod.model.SectionProperties;
 import tetrapod.model.Support;
 import tetrapod.model.Vec3;
+import tetrapod.model.spec.ActionFactorSet;
+import tetrapod.model.spec.ActionFactors;
 import tetrapod.model.spec.TowerSpec;
 import tetrapod.solve.AutoRestraint;
 import tetrapod.solve.ContinuityNode;
@@ -66,6 +68,7 @@ public final class ResultsDocument {
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("format", FORMAT);
         doc.put("input", SpecWriter.toMap(spec));
+        doc.put("basis", basis(spec));
         doc.put("model", model(result.model(), result.autoRestraints()));
         doc.put("cases", result.cases().stream().map(ResultsDocument::solvedCase).toList());
         doc.put("wind", result.wind().stream().map(ResultsDocument::wind).toList());
@@ -83,6 +86,18 @@ public final class ResultsDocument {
         doc.put("steel", steel(result.tower()));
         doc.put("defaults", List.copyOf(defaulted));
         return doc;
+    }
+
+    /** The design basis, its action factors, and one warning per value of the other family (allowed by mixedBasis). */
+    private static Map<String, Object> basis(TowerSpec spec) {
+        ActionFactors factors = spec.loads().actionFactorsOrDefault();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("family", spec.basis().jsonName());
+        m.put("actionFactors", factors.set().jsonName());
+        m.put("reliabilityClass", factors.set() == ActionFactorSet.EN1993_3_1 ? factors.reliabilityClass() : null);
+        m.put("mixedBasis", spec.mixedBasis());
+        m.put("warnings", spec.basisMixes().stream().map(x -> x.describe(spec.basis())).toList());
+        return m;
     }
 
     private static Map<String, Object> combination(Combination c) {
@@ -206,6 +221,7 @@ public final class ResultsDocument {
             c.put("note", g.check().note());
             c.put("case", g.where().caseId());
             c.put("azimuthDeg", g.where().azimuthDeg());
+            c.put("reactions", g.level().jsonName());
             checks.add(c);
         });
         m.put("checks", checks);

@@ -46,9 +46,9 @@ public final class Rows {
         }
     }
 
-    /** One footing check of a leg base. */
+    /** One footing check of a leg base; reactions "factored" or "service" (the rule's level). */
     public record FootingCheck(String name, double utilisation, String clause, String note, String caseId,
-                               Double azimuthDeg) { }
+                               Double azimuthDeg, String reactions) { }
 
     /** A leg base's footing checks; concrete volume in m³. */
     public record FootingRow(int node, List<FootingCheck> checks, double concreteVolumeRequired) {

@@ -41,6 +41,13 @@ final class SummarySection implements Section {
         boolean broken = !r.requirementsNotMet().isEmpty();
         out.element("div", Html.attr("class", broken ? "verdict over" : "verdict pass") + " id=\"requirements-verdict-summary\"",
                 RequirementsVerdict.text(r.requirementsNotMet()));
+        if (!r.basisLine().isEmpty()) {
+            out.p("Design basis " + r.basisLine() + ".");
+        }
+        for (String warning : r.basisWarnings()) {
+            out.element("div", "class=\"verdict over\" id=\"basis-warning\"", "Mixed design basis (allowed by mixedBasis): "
+                    + warning + ".");
+        }
         boolean swept = !r.legSweeps().isEmpty();
         out.p(String.format(java.util.Locale.ROOT, "%s: %s model, %d nodes, %d members; %d load case%s solved in "
                         + "full (largest equilibrium residual of the applied loads against the support reactions alone %.1e)%s.", r.name(), r.idealisation(), r.nodeCount(),

@@ -37,8 +37,10 @@ class EnvelopeTest {
         FoundationEnvelope e = FoundationEnvelope.empty(1);
         LegBaseForces push = new LegBaseForces(300e3, 20e3);
         LegBaseForces pull = new LegBaseForces(-100e3, 30e3);
-        e = e.with(check.check(push), push, "W", 45.0);
-        e = e.with(check.check(pull), pull, "W", 225.0);
+        // a factor of safety, bearing and sliding are allowable-stress rules: service reactions
+        e = e.with(check.check(push, ReactionLevel.SERVICE), push, "W", 45.0, ReactionLevel.FACTORED);
+        e = e.with(check.check(pull, ReactionLevel.SERVICE), pull, "W", 225.0, ReactionLevel.FACTORED);
+        assertEquals(null, check.check(push, ReactionLevel.FACTORED), "no rule of this footing takes factored reactions");
         assertEquals(new Extreme(300e3, "W", 45.0), e.maxCompression());
         assertEquals(new Extreme(100e3, "W", 225.0), e.maxUplift());
         assertEquals(new Extreme(30e3, "W", 225.0), e.maxShear());

@@ -50,8 +50,8 @@ class ExampleModelsTest {
         assertTrue(spec.checks().foundationSpec().isPresent(), "the generated examples give a foundation");
         FoundationCheck footing = new FoundationCheck(spec.checks().foundation(), spec.checks().partialFactors());
         for (LegBaseForces f : new LegBaseForces[] {new LegBaseForces(400e3, 30e3), new LegBaseForces(-250e3, 30e3)}) {
-            FoundationResult r = footing.check(f);
-            assertTrue(r.governing().utilisation() >= 0);
+            FoundationResult r = footing.check(f, ReactionLevel.SERVICE);
+            assertTrue(r.governing().utilisation() >= 0, "bearing and sliding always take service reactions");
         }
     }
 

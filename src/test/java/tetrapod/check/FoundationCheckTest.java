@@ -92,7 +92,7 @@ class FoundationCheckTest {
                 new FoundationSpec.FactorOfSafety(1.0), 200, 0.4, 1.5, null);
         FoundationCheck check = new FoundationCheck(spec, PartialFactors.RECOMMENDED);
         assertEquals(75.0, check.concreteVolumeToBalance(1875e3), 1e-9);
-        FoundationResult r = check.check(new LegBaseForces(-1875e3, 0));
+        FoundationResult r = check.check(new LegBaseForces(-1875e3, 0), ReactionLevel.SERVICE);
         assertEquals(1.0, find(r, CheckMode.UPLIFT).utilisation(), 1e-9);
         assertEquals(75.0, r.concreteVolumeRequired(), 1e-9);
     }
@@ -131,13 +131,46 @@ class FoundationCheckTest {
         FoundationSpec spec = new FoundationSpec(new FoundationSpec.Block(2, 2, 1, 2), 25, 18, 0,
                 new FoundationSpec.PartialFactor(0.9), 200, 0.4, 1.5, null);
         FoundationCheck check = new FoundationCheck(spec, PartialFactors.RECOMMENDED);
-        FoundationResult compression = check.check(new LegBaseForces(300e3, 50e3));
+        FoundationResult compression = check.check(new LegBaseForces(300e3, 50e3), ReactionLevel.SERVICE);
         assertEquals(0.59, find(compression, CheckMode.BEARING_PRESSURE).utilisation(), 1e-9);
         assertEquals(0.3972, find(compression, CheckMode.SLIDING).utilisation(), 5e-5);
-        assertEquals(0, find(compression, CheckMode.UPLIFT).utilisation());
-        FoundationResult uplift = check.check(new LegBaseForces(-150e3, 0));
+        assertEquals(0, find(check.check(new LegBaseForces(300e3, 50e3), ReactionLevel.FACTORED), CheckMode.UPLIFT)
+                .utilisation());
+        FoundationResult uplift = check.check(new LegBaseForces(-150e3, 0), ReactionLevel.FACTORED);
         assertEquals(0.9690, find(uplift, CheckMode.UPLIFT).utilisation(), 5e-5);
         assertEquals(6.667, uplift.concreteVolumeRequired(), 5e-4);
+    }
+
+    /**
+     * Which reactions each rule takes: a factor of safety, an allowable bearing pressure, sliding and
+     * allowable rod stresses are allowable-stress rules (service reactions); EN 1997-1 UPL and rods by
+     * grade (EN 1993-1-8) are partial-factor rules (factored reactions).
+     */
+    @Test
+    void allowableStressRulesTakeServiceReactionsAndPartialFactorRulesFactoredOnes() {
+        FoundationSpec.Block block = new FoundationSpec.Block(2, 2, 1, 2);
+        FoundationCheck allowable = new FoundationCheck(new FoundationSpec(block, 25, 18, 0,
+                new FoundationSpec.FactorOfSafety(1.5), 200, 0.4, 1.5,
+                new FoundationSpec.RodsByAllowableStress(4, 24, 150, 80)), PartialFactors.RECOMMENDED);
+        LegBaseForces pull = new LegBaseForces(-100e3, 20e3);
+        assertEquals(java.util.Set.of(CheckMode.UPLIFT, CheckMode.BEARING_PRESSURE, CheckMode.SLIDING,
+                        CheckMode.ANCHOR_TENSION, CheckMode.ANCHOR_SHEAR, CheckMode.ANCHOR_COMBINED),
+                modes(allowable.check(pull, ReactionLevel.SERVICE)));
+        assertEquals(null, allowable.check(pull, ReactionLevel.FACTORED));
+        FoundationCheck factored = new FoundationCheck(new FoundationSpec(block, 25, 18, 0,
+                new FoundationSpec.PartialFactor(0.9), 200, 0.4, 1.5,
+                new FoundationSpec.RodsByGrade(4, 24, tetrapod.model.spec.BoltGrade.G8_8)), PartialFactors.RECOMMENDED);
+        assertEquals(java.util.Set.of(CheckMode.UPLIFT, CheckMode.ANCHOR_TENSION, CheckMode.ANCHOR_SHEAR,
+                        CheckMode.ANCHOR_COMBINED), modes(factored.check(pull, ReactionLevel.FACTORED)));
+        assertEquals(java.util.Set.of(CheckMode.BEARING_PRESSURE, CheckMode.SLIDING),
+                modes(factored.check(pull, ReactionLevel.SERVICE)));
+        // the factor of safety on the service uplift: 100 kN × 1.5 / (block 100 kN + soil prism 1 m × 4 m² × 18 = 72 kN)
+        assertEquals(100e3 * 1.5 / (100e3 + 72e3), find(allowable.check(pull, ReactionLevel.SERVICE), CheckMode.UPLIFT)
+                .utilisation(), 1e-9);
+    }
+
+    private static java.util.Set<CheckMode> modes(FoundationResult r) {
+        return r.checks().stream().map(CheckResult::mode).collect(java.util.stream.Collectors.toSet());
     }
 
     @Test

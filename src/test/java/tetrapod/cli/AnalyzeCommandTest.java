@@ -36,14 +36,45 @@ class AnalyzeCommandTest {
     }
 
     /**
-     * EN 1990 Table A1.2(B): the permanent action factored 1.35 where unfavourable (compression), 1.0 where
-     * favourable (uplift); the summary names the combination each hand-method comparison is made in.
+     * EN 1993-3-1 Annex A Table A.1, reliability class 2 (the default; values recalled from memory): the
+     * permanent action factored 1.1 where unfavourable (compression), 1.0 where favourable (uplift), the
+     * wind 1.4; the summary names the basis and the combination each hand-method comparison is made in.
      */
     @Test
     void theSummaryNamesTheCombinationOfEachHandComparison(@TempDir Path dir) {
         CliRun run = CliRun.of("analyze", "models/ridge-lookout-square.json", "-o", dir.toString());
-        assertTrue(run.out().contains("  compression in 1.35G + 1.5W (largest leg compression"), run.out());
-        assertTrue(run.out().contains("  uplift in 1.0G + 1.5W (largest uplift"), run.out());
+        assertTrue(run.out().contains("design basis: en; action factors en1993-3-1, reliability class 2"), run.out());
+        assertTrue(run.out().contains("  compression in 1.1G + 1.4W (largest leg compression"), run.out());
+        assertTrue(run.out().contains("  uplift in 1.0G + 1.4W (largest uplift"), run.out());
+        assertFalse(run.out().contains("WARNING"), run.out());
+    }
+
+    /** A mix of families allowed by mixedBasis is a warning in the summary, results.json and the report. */
+    @Test
+    void anAllowedMixIsWarnedEverywhere(@TempDir Path dir) throws IOException {
+        Path model = dir.resolve("mixed.json");
+        Files.writeString(model, """
+                { "name": "mixed", "mixedBasis": true,
+                  "base": { "widthX": 3.0, "widthY": 3.0 },
+                  "segments": [ { "height": 6.0, "topWidthX": 2.0, "topWidthY": 2.0, "panels": 2, "bracing": "x",
+                      "sections": { "leg": "L100x10", "diagonal": "L60x6", "horizontal": "L60x6" } } ],
+                  "loads": { "wind": { "method": "en1991", "basicSpeed": 24.0, "terrain": "II" }, "sweepStep": 15 },
+                  "checks": { "method": "asce10" } }
+                """);
+        Path out = dir.resolve("out");
+        CliRun run = CliRun.of("analyze", model.toString(), "-o", out.toString());
+        assertEquals(ExitCode.DONE, run.exitCode(), run.err());
+        String line = "checks.method: ASCE 10 member and bolt checks (us) in a model of basis en";
+        assertTrue(run.out().contains("WARNING: mixed design basis (allowed by mixedBasis): " + line), run.out());
+        String results = Files.readString(out.resolve("results.json"));
+        assertTrue(results.contains("\"warnings\": [ \"" + line + "\" ]") || results.contains("\"" + line + "\""), results);
+        assertTrue(Files.readString(out.resolve("report.html")).contains("Mixed design basis (allowed by mixedBasis): " + line));
+        Path strict = dir.resolve("strict.json");
+        Files.writeString(strict, Files.readString(model).replace("\"mixedBasis\": true,", ""));
+        CliRun refused = CliRun.of("analyze", strict.toString(), "-o", dir.resolve("out2").toString());
+        assertEquals(ExitCode.BAD_INPUT, refused.exitCode(), refused.out());
+        assertTrue(refused.err().contains("error: checks.method: ASCE 10 member and bolt checks belongs to the us family")
+                && refused.err().contains("allowed here: en1993") && refused.err().contains("(line 6)"), refused.err());
     }
 
     /**
@@ -70,7 +101,7 @@ class AnalyzeCommandTest {
 
     @Test
     void strictTurnsOverstressIntoExitOne(@TempDir Path dir) {
-        // The invented hilltop mast's redundants exceed their slenderness limit (summary: OVERSTRESSED).
+        // The invented hilltop mast's top diagonals buckle under 1.1G + 1.4W (summary: OVERSTRESSED).
         CliRun run = CliRun.of("analyze", "models/hilltop-relay-k.json", "-o", dir.toString(), "--strict");
         assertTrue(run.out().contains("OVERSTRESSED"), run.out());
         assertEquals(ExitCode.OVERSTRESS, run.exitCode());

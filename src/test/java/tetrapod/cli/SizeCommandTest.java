@@ -38,7 +38,12 @@ class SizeCommandTest {
                 dir.toString(), "--target", "0.95");
         assertEquals(ExitCode.DONE, run.exitCode(), run.err());
         assertTrue(run.out().contains("  iteration"), run.out());
-        assertTrue(run.out().contains("largest utilisation after sizing: 0.9"), run.out());
+        // the target given on the command line bounds the result: 0 < largest utilisation ≤ 0.95
+        java.util.regex.Matcher after = java.util.regex.Pattern.compile("largest utilisation after sizing: ([0-9.]+)")
+                .matcher(run.out());
+        assertTrue(after.find(), run.out());
+        double largest = Double.parseDouble(after.group(1));
+        assertTrue(largest > 0 && largest <= 0.95, run.out());
     }
 
     @Test

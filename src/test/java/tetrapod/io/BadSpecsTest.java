@@ -108,6 +108,18 @@ class BadSpecsTest {
                 new Case("checks-bolt-size.json", "checks.connections[0].diameter_mm", 13,
                         "must be a metric coarse thread size from M12 to M72", 1),
                 new Case("checks-factors-asce.json", "checks.partialFactors", 12, "applies to method en1993 only", 1),
+                new Case("basis-unknown.json", "basis", 3, "unknown design basis 'eu'; expected one of en, us", 1),
+                new Case("basis-reliability-class-range.json", "loads.reliabilityClass", 10,
+                        "must be a whole number from 1 to 3, was 4", 1),
+                new Case("basis-action-factors-unknown.json", "loads.actionFactors", 10,
+                        "unknown action factors 'en1991'; expected one of en1993-3-1, en1990, asce7", 1),
+                new Case("basis-reliability-class-asce7.json", "loads.reliabilityClass", 10,
+                        "applies only to actionFactors en1993-3-1", 1),
+                new Case("basis-mixed-derived.json", "checks.method", 9, "ASCE 10 member and bolt checks belongs to the us"
+                        + " family but the model's basis is en (no basis key: taken from loads.wind.method, else checks.method);"
+                        + " allowed here: en1993; or set \"basis\" to match and change the other keys, or \"mixedBasis\": true", 1),
+                new Case("basis-mixed-given.json", "loads.wind.method", 9, "EN 1991-1-4 wind belongs to the en family but the"
+                        + " model's basis is us; allowed here: asce7 or uniform", 1),
                 new Case("checks-connection-overlap.json", "checks.connections[1]", 13,
                         "covers diagonal members already covered by checks.connections[0]", 1),
                 new Case("checks-segment-out-of-range.json", "checks.bucklingLengths[0].segments[0]", 12,

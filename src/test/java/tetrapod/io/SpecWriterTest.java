@@ -78,6 +78,7 @@ class SpecWriterTest {
                   "name": "Mini",
                   "description": "",
                   "idealisation": "truss",
+                  "basis": "en",
                   "base": { "widthX": 3.0, "widthY": 2.5 },
                   "segments": [
                     {

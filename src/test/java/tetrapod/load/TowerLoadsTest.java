@@ -15,6 +15,8 @@ import tetrapod.common.Problem;
 import tetrapod.generate.Tower;
 import tetrapod.model.Face;
 import tetrapod.model.NodeForce;
+import tetrapod.model.spec.ActionFactorSet;
+import tetrapod.model.spec.ActionFactors;
 import tetrapod.model.spec.AncillarySpec;
 import tetrapod.model.spec.Asce7Edition;
 import tetrapod.model.spec.CombinationSpec;
@@ -36,14 +38,17 @@ class TowerLoadsTest {
     private static final WindSpec EN = new WindSpec.En1991(26, TerrainCategory.CAT_II, List.of(), 1, 1, 1, 1, 1.25);
     private static final IceSpec ICE = new IceSpec(new IceSpec.Given(20, true), 900, 18, Double.NaN);
 
+    private static final ActionFactors EN1990 = new ActionFactors(ActionFactorSet.EN1990, 2);
+
     private static LoadsSpec spec(WindSpec wind, IceSpec ice, List<CombinationSpec> combinations, double step) {
         return new LoadsSpec(List.of(new NodalLoadSpec(TOWER.frame().nodes().size(), 1.0, 0, -2.0, 0, 0, 0.5)), wind,
                 ITEMS, ice, combinations, step);
     }
 
+    /** EN 1990 Table A1.2(B): γ_G = 1.35 (1.0 favourable), γ_Q = 1.5; ψ0 = 0.5 for the accompanying ice action. */
     @Test
     void en1990DefaultsWithIceAndNodalLoads() throws BadInputException {
-        TowerLoads loads = TowerLoads.build(TOWER, spec(EN, ICE, List.of(), 5));
+        TowerLoads loads = TowerLoads.build(TOWER, spec(EN, ICE, List.of(), 5).withActionFactors(EN1990));
         List<String> names = loads.combinations().stream().map(Combination::name).toList();
         assertEquals(List.of("1.35G + 1.5W + 1.0Q", "1.0G + 1.5W + 1.0Q", "1.35G + 1.5I + 0.75Wi + 1.0Q",
                 "1.35G + 0.75I + 1.5Wi + 1.0Q"), names);
@@ -72,7 +77,7 @@ class TowerLoadsTest {
 
     @Test
     void fineSweepIsExactMultiples() throws BadInputException {
-        TowerLoads loads = TowerLoads.build(TOWER, spec(EN, null, List.of(), 0.1));
+        TowerLoads loads = TowerLoads.build(TOWER, spec(EN, null, List.of(), 0.1).withActionFactors(EN1990));
         List<Double> az = loads.azimuths();
         assertEquals(3600, az.size());
         assertEquals(359.9, az.get(3599), 1e-9);

@@ -31,6 +31,11 @@ public record ChecksSpec(CheckMethod method, PartialFactors partialFactors, List
         connections = connections == null ? List.of() : List.copyOf(connections);
     }
 
+    /** The checks of a model without a checks block: the family's method, everything else by default. */
+    public static ChecksSpec defaultFor(DesignBasis basis) {
+        return new ChecksSpec(basis == DesignBasis.US ? CheckMethod.ASCE10 : CheckMethod.EN1993);
+    }
+
     /** The method alone, everything else by default. */
     public ChecksSpec(CheckMethod method) {
         this(method, PartialFactors.RECOMMENDED, List.of(), List.of(), null);

@@ -14,9 +14,12 @@ import java.util.List;
  * @param ice          radial ice on members and ancillaries, or null for no ice
  * @param combinations the user's factored combinations; empty for the default set of the wind method
  * @param sweepStep    azimuth step of the wind sweep, degrees; 360 is a whole number of steps
+ * @param actionFactors the partial factors for actions of the default combinations; null until
+ *                     the design basis fills it in ({@link TowerSpec} does), and then taken from
+ *                     the wind method (asce7: ASCE 7, otherwise EN 1993-3-1 Annex A class 2)
  */
 public record LoadsSpec(List<NodalLoadSpec> nodal, WindSpec wind, List<AncillarySpec> ancillaries, IceSpec ice,
-                        List<CombinationSpec> combinations, double sweepStep) {
+                        List<CombinationSpec> combinations, double sweepStep, ActionFactors actionFactors) {
 
     /** Default azimuth step of the wind sweep, degrees. */
     public static final double DEFAULT_SWEEP_STEP = 5.0;
@@ -29,9 +32,28 @@ public record LoadsSpec(List<NodalLoadSpec> nodal, WindSpec wind, List<Ancillary
         combinations = combinations == null ? List.of() : List.copyOf(combinations);
     }
 
+    /** Loads whose action factors follow the design basis (or the wind method when there is none). */
+    public LoadsSpec(List<NodalLoadSpec> nodal, WindSpec wind, List<AncillarySpec> ancillaries, IceSpec ice,
+                     List<CombinationSpec> combinations, double sweepStep) {
+        this(nodal, wind, ancillaries, ice, combinations, sweepStep, null);
+    }
+
     /** Nodal loads only: no wind, ancillaries or ice, the default combinations and sweep step. */
     public LoadsSpec(List<NodalLoadSpec> nodal) {
         this(nodal, null, List.of(), null, List.of(), DEFAULT_SWEEP_STEP);
+    }
+
+    /** These loads with the given action factors. */
+    public LoadsSpec withActionFactors(ActionFactors factors) {
+        return new LoadsSpec(nodal, wind, ancillaries, ice, combinations, sweepStep, factors);
+    }
+
+    /** The action factors, or when none were set those of the wind method: ASCE 7 for asce7, else EN 1993-3-1 class 2. */
+    public ActionFactors actionFactorsOrDefault() {
+        if (actionFactors != null) {
+            return actionFactors;
+        }
+        return ActionFactors.defaultFor(wind instanceof WindSpec.Asce7 ? DesignBasis.US : DesignBasis.EN);
     }
 
     public boolean hasWind() {
@@ -51,7 +73,7 @@ public record LoadsSpec(List<NodalLoadSpec> nodal, WindSpec wind, List<Ancillary
         List<CombinationSpec> kept = combinations.stream()
                 .filter(c -> c.factors().keySet().stream().allMatch(a -> a == LoadAction.DEAD || a == LoadAction.NODAL))
                 .toList();
-        return new LoadsSpec(nodal, null, List.of(), null, kept, sweepStep);
+        return new LoadsSpec(nodal, null, List.of(), null, kept, sweepStep, actionFactors);
     }
 
     /** A load at a node: Fx, Fy, Fz (kN) and Mx, My, Mz (kN·m). */

@@ -16,13 +16,18 @@ import tetrapod.model.Idealisation;
  *                            galvanising (0.10 = 10 %)
  * @param planBracingLevels   heights (m) of horizontal diaphragms; each must be a panel level
  * @param userSections        sections defined in the file, by name
- * @param checks              how members, connections and foundations are checked
+ * @param checks              how members, connections and foundations are checked; null for the
+ *                            default of the basis
+ * @param basis               the family of published rules every default follows; null to take it
+ *                            from the wind method, else the check method (see {@link BasisMixes#derive})
+ * @param mixedBasis          whether values of the other family are allowed (each is then a warning)
  */
 public record TowerSpec(String name, String description, Idealisation idealisation,
                         BaseSpec base, List<SegmentSpec> segments, MaterialSpec material,
                         SupportType supports, double connectionAllowance,
                         List<Double> planBracingLevels, Map<String, UserSectionSpec> userSections,
-                        ExplicitFrameSpec frame, LoadsSpec loads, ChecksSpec checks) {
+                        ExplicitFrameSpec frame, LoadsSpec loads, ChecksSpec checks, DesignBasis basis,
+                        boolean mixedBasis) {
 
     public TowerSpec {
         Objects.requireNonNull(name, "name");
@@ -31,17 +36,38 @@ public record TowerSpec(String name, String description, Idealisation idealisati
         planBracingLevels = planBracingLevels == null ? List.of() : List.copyOf(planBracingLevels);
         userSections = userSections == null ? Map.of() : Map.copyOf(userSections);
         loads = loads == null ? LoadsSpec.NONE : loads;
-        checks = checks == null ? ChecksSpec.DEFAULT : checks;
+        if (basis == null) {
+            basis = BasisMixes.derive(loads.hasWind() ? loads.wind().method() : null,
+                    checks == null ? null : checks.method(),
+                    loads.actionFactors() == null ? null : loads.actionFactors().set());
+        }
+        checks = checks == null ? ChecksSpec.defaultFor(basis) : checks;
+        loads = loads.actionFactors() == null ? loads.withActionFactors(ActionFactors.defaultFor(basis)) : loads;
     }
 
-    /** A spec with the default checks. */
+    /** A spec whose basis follows its wind or check method, mixing not allowed. */
+    public TowerSpec(String name, String description, Idealisation idealisation,
+                     BaseSpec base, List<SegmentSpec> segments, MaterialSpec material,
+                     SupportType supports, double connectionAllowance,
+                     List<Double> planBracingLevels, Map<String, UserSectionSpec> userSections,
+                     ExplicitFrameSpec frame, LoadsSpec loads, ChecksSpec checks) {
+        this(name, description, idealisation, base, segments, material, supports, connectionAllowance,
+                planBracingLevels, userSections, frame, loads, checks, null, false);
+    }
+
+    /** A spec with the default checks of its basis. */
     public TowerSpec(String name, String description, Idealisation idealisation,
                      BaseSpec base, List<SegmentSpec> segments, MaterialSpec material,
                      SupportType supports, double connectionAllowance,
                      List<Double> planBracingLevels, Map<String, UserSectionSpec> userSections,
                      ExplicitFrameSpec frame, LoadsSpec loads) {
         this(name, description, idealisation, base, segments, material, supports, connectionAllowance,
-                planBracingLevels, userSections, frame, loads, ChecksSpec.DEFAULT);
+                planBracingLevels, userSections, frame, loads, null);
+    }
+
+    /** The values of this model that belong to the other family than its basis (warnings when allowed). */
+    public List<BasisMix> basisMixes() {
+        return BasisMixes.of(this);
     }
 
     public boolean isExplicit() {
