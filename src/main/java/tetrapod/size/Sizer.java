@@ -139,9 +139,9 @@ public final class Sizer {
                 spec.userSections(), spec.frame(), spec.loads(), spec.checks());
     }
 
-    /** One design that was analysed. */
+    /** One design that was analysed; {@code requirementsMet}: every member meets every requirement. */
     private record Analysed(Map<SizingGroup, Section> design, double mass, double maxUtilisation,
-                            Map<SizingGroup, GroupState> states) { }
+                            boolean requirementsMet, Map<SizingGroup, GroupState> states) { }
 
     /** The iterations of one run. */
     private static final class Run {
@@ -177,7 +177,9 @@ public final class Sizer {
                 if (eval.envelopes().size() != membersOf.values().stream().mapToInt(List::size).sum()) {
                     throw new IllegalStateException("the tower's members changed with its sections");
                 }
-                Analysed a = new Analysed(design, current.tower().steelMass(), eval.maxUtilisation(), states(eval, design));
+                Analysed a = new Analysed(design, current.tower().steelMass(), eval.maxUtilisation(),
+                        eval.envelopes().stream().allMatch(tetrapod.check.MemberEnvelope::requirementsMet),
+                        states(eval, design));
                 SectionChooser.Step step = chooser.choose(eval, design, floors);
                 List<Map<SizingGroup, Section>> designs = new ArrayList<>();
                 analysed.forEach(x -> designs.add(x.design()));
@@ -207,9 +209,9 @@ public final class Sizer {
                 }
             } else if (outcome != Outcome.INFEASIBLE) {
                 chosen = analysed.get(analysed.size() - 1);
-                if (chosen.maxUtilisation() > options.target()) {
-                    throw new IllegalStateException("sizing settled on a design above the target: "
-                            + chosen.maxUtilisation());
+                if (chosen.maxUtilisation() > options.target() || !chosen.requirementsMet()) {
+                    throw new IllegalStateException("sizing settled on a design above the target or breaking a "
+                            + "requirement: " + chosen.maxUtilisation());
                 }
             }
             Analysed first = analysed.get(0);
@@ -251,7 +253,8 @@ public final class Sizer {
         private Analysed lightestPassing(List<Analysed> analysed) {
             Analysed best = null;
             for (Analysed a : analysed) {
-                if (a.maxUtilisation() <= options.target() && (best == null || a.mass() < best.mass())) {
+                if (a.maxUtilisation() <= options.target() && a.requirementsMet()
+                        && (best == null || a.mass() < best.mass())) {
                     best = a;
                 }
             }

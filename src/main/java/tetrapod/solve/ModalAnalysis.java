@@ -20,7 +20,7 @@ public final class ModalAnalysis {
     /** Relative change of each wanted ω² between iterations below which it has converged. */
     static final double TOLERANCE = 1e-10;
     /** ‖K φ − ω² M φ‖ / ‖ω² M φ‖ below which a wanted mode shape has converged. */
-    static final double VECTOR_TOLERANCE = 1e-8;
+    static final double VECTOR_TOLERANCE = 1e-6;
     static final int MAX_ITERATIONS = 500;
     /** Fixed seed: the same model always gives the same start vectors and so the same output. */
     private static final long SEED = 0x5EED_7E7AL;

@@ -100,10 +100,18 @@ class AnalyzeCommandTest {
     }
 
     @Test
-    void strictTurnsOverstressIntoExitOne(@TempDir Path dir) {
-        // The invented hilltop mast's top diagonals buckle under 1.1G + 1.4W (summary: OVERSTRESSED).
-        CliRun run = CliRun.of("analyze", "models/hilltop-relay-k.json", "-o", dir.toString(), "--strict");
+    void strictTurnsOverstressIntoExitOne(@TempDir Path dir) throws Exception {
+        // The ridge example with its top legs cut down from L90x7 to L50x5: they cannot carry the platform.
+        String ridge = java.nio.file.Files.readString(Path.of("models/ridge-lookout-square.json"));
+        String weak = ridge.replace("\"sections\": { \"leg\": \"L90x7\"", "\"sections\": { \"leg\": \"L50x5\"");
+        org.junit.jupiter.api.Assertions.assertNotEquals(ridge, weak);
+        Path model = dir.resolve("weak-top.json");
+        java.nio.file.Files.writeString(model, weak);
+        CliRun run = CliRun.of("analyze", model.toString(), "-o", dir.resolve("out").toString(), "--strict");
         assertTrue(run.out().contains("OVERSTRESSED"), run.out());
         assertEquals(ExitCode.OVERSTRESS, run.exitCode());
+        CliRun passing = CliRun.of("analyze", "models/ridge-lookout-square.json", "-o", dir.resolve("ok").toString(),
+                "--strict", "--quiet");
+        assertEquals(ExitCode.DONE, passing.exitCode(), passing.out());
     }
 }

@@ -16,8 +16,9 @@ import tetrapod.model.SectionShape;
  */
 final class FixtureSections implements SectionLookup {
 
-    static final List<String> NAMES = List.of("L50x5", "L60x6", "L65x7", "L70x7", "L75x8", "L80x8", "L90x8",
-            "L90x9", "L100x10", "L120x12", "L150x12", "L150x15", "L180x18");
+    static final List<String> NAMES = List.of("L50x4", "L50x5", "L60x5", "L60x6", "L65x7", "L70x6", "L70x7",
+            "L75x8", "L80x8", "L90x7", "L90x8", "L90x9", "L100x8", "L100x10", "L120x10", "L120x12", "L150x10",
+            "L150x12", "L150x15", "L180x18");
 
     @Override
     public Optional<Section> find(String name) {

@@ -60,9 +60,9 @@ class SpecReaderTest {
         assertEquals(Bracing.X, s0.bracing());
         assertEquals(Horizontals.ENDS, s0.horizontals());
         assertEquals(1, s0.redundants());
-        assertEquals("L150x15", s0.sections().get(Role.LEG));
-        assertEquals("L70x7", s0.sections().get(Role.PLAN));
-        assertEquals(Map.of(Role.LEG, "L100x10", Role.DIAGONAL, "L60x6", Role.HORIZONTAL, "L60x6"),
+        assertEquals("L150x10", s0.sections().get(Role.LEG));
+        assertEquals("L90x7", s0.sections().get(Role.PLAN));
+        assertEquals(Map.of(Role.LEG, "L90x7", Role.DIAGONAL, "L70x6", Role.HORIZONTAL, "L90x7"),
                 spec.segments().get(2).sections());
         assertEquals(MaterialSpec.grade("S355"), spec.material());
         assertEquals(SupportType.PINNED, spec.supports());
@@ -187,12 +187,12 @@ class SpecReaderTest {
     @Test
     void unknownSectionSuggestsUserSectionsFirst() {
         String json = tower("{ \"height\": 8.0, \"panels\": 4, \"bracing\": \"x\","
-                        + " \"sections\": { \"leg\": \"L100x10\", \"diagonal\": \"L60x6\", \"horizontal\": \"L60x5\" } }",
-                ", \"userSections\": { \"L60x5S\": { \"tube\": { \"d_mm\": 60.3, \"t_mm\": 3.2 } } }");
+                        + " \"sections\": { \"leg\": \"L100x10\", \"diagonal\": \"L60x6\", \"horizontal\": \"L60x3\" } }",
+                ", \"userSections\": { \"L60x3S\": { \"tube\": { \"d_mm\": 60.3, \"t_mm\": 3.2 } } }");
         List<Problem> problems = problems(json);
         assertEquals(1, problems.size(), problems::toString);
-        // one edit each from L60x5: the user's L60x5S first, then the catalogue's L50x5 and L60x6
-        assertEquals("unknown section 'L60x5'; nearest known: L60x5S, L50x5, L60x6", problems.get(0).message());
+        // one edit each from L60x3: the user's L60x3S first, then the catalogue's L60x5 and L60x6
+        assertEquals("unknown section 'L60x3'; nearest known: L60x3S, L60x5, L60x6", problems.get(0).message());
     }
 
     @Test
