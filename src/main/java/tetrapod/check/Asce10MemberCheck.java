@@ -11,10 +11,11 @@ import tetrapod.model.SectionProperties;
 import tetrapod.model.SectionShape;
 
 /**
- * Members of latticed towers by ASCE 10 (Design of Latticed Steel Transmission Structures). Its
- * stresses are design stresses at factored loads (there is no separate resistance factor), so the
- * utilisation is the factored force over F_a A, F_t A_n and the bolt values. Clause numbers are
- * those of ASCE 10-97; the constants were recalled from memory and are listed in
+ * Members of latticed towers by ASCE/SEI 10-15 (Design of Latticed Steel Transmission Structures,
+ * the edition in force; it superseded ASCE 10-97). Its stresses are design stresses at factored
+ * loads (there is no separate resistance factor), so the utilisation is the factored force over
+ * F_a A, F_t A_n and the bolt values. The clause numbers and constants were recalled from memory
+ * of the 10-97 text, whose numbering 10-15 keeps as far as recalled; they are listed in
  * docs/methods.md (Checks) to be checked against the printed standard.
  */
 public final class Asce10MemberCheck implements MemberCheck {
@@ -57,33 +58,34 @@ public final class Asce10MemberCheck implements MemberCheck {
         List<CheckResult> out = new ArrayList<>();
         Slenderness s = slenderness(in);
 
+        // F_cr replaces F_y wherever compression is checked: the member (3.6) and axial force with bending (3.12)
+        double fcr = section.shape() instanceof SectionShape.Angle a
+                ? localBucklingStress((a.legA() - a.t() - a.r1()) / a.t(), fy, e) : fy;
         if (f.axial() >= 0) {
             out.add(tension(member, in.connection(), f.tension(), fy));
         } else {
-            double fcr = fy;
             if (section.shape() instanceof SectionShape.Angle angle) {
                 double w = angle.legA() - angle.t() - angle.r1();
                 double ratio = w / angle.t();
-                fcr = localBucklingStress(ratio, fy, e);
                 double limit = widthThicknessLimit(fy);
                 if (ratio > limit) {
                     out.add(new CheckResult(CheckMode.LOCAL_BUCKLING, CheckResult.ratio(f.compression(), fcr * p.area()),
-                            "ASCE 10-97 3.6 (3.6-5), (3.6-6) (recalled)",
+                            "ASCE/SEI 10-15 3.6 (3.6-5), (3.6-6) (recalled)",
                             String.format(Locale.ROOT, "w/t = %.2f > (w/t)lim = %.2f, F_cr = %.1f MPa", ratio, limit,
                                     fcr / 1e6)));
                 }
                 out.add(new CheckResult(CheckMode.WIDTH_THICKNESS, ratio / MAX_WIDTH_THICKNESS,
-                        "ASCE 10-97 3.7.3 w/t ≤ 25 (recalled)", String.format(Locale.ROOT, "w/t = %.2f", ratio)));
+                        "ASCE/SEI 10-15 3.7.3 w/t ≤ 25 (recalled)", String.format(Locale.ROOT, "w/t = %.2f", ratio)));
             }
             double fa = Asce10Slenderness.fa(s.klOverR(), fcr, e);
             out.add(new CheckResult(CheckMode.COMPRESSION_BUCKLING, CheckResult.ratio(f.compression(), fa * p.area()),
-                    "ASCE 10-97 3.6 (3.6-1)-(3.6-3), " + (s.curve() == 0 ? "3.7.4 leg KL/r = L/r (3.7-3)"
+                    "ASCE/SEI 10-15 3.6 (3.6-1)-(3.6-3), " + (s.curve() == 0 ? "3.7.4 leg KL/r = L/r (3.7-3)"
                             : "3.7.4 curve " + s.curve()),
                     String.format(Locale.ROOT, "L/r = %.1f, KL/r = %.1f, C_c = %.1f, F_a = %.1f MPa, P_a = %.1f kN",
                             s.lOverR(), s.klOverR(), Asce10Slenderness.cc(fcr, e), fa / 1e6, fa * p.area() / 1e3)));
         }
         if (f.hasMoments()) {
-            CheckResult combined = bending(in, s, fy, e);
+            CheckResult combined = bending(in, s, fy, fcr, e);
             if (combined != null) {
                 out.add(combined);
             }
@@ -150,7 +152,7 @@ public final class Asce10MemberCheck implements MemberCheck {
         boolean oneLeg = En1993MemberCheck.connectedByOneLeg(member);
         double ft = oneLeg ? 0.9 * fy : fy;
         return new CheckResult(CheckMode.NET_SECTION, CheckResult.ratio(n, ft * net),
-                "ASCE 10-97 3.10.1 (recalled)" + (oneLeg ? ", angle by one leg F_t = 0.9 F_y" : ""),
+                "ASCE/SEI 10-15 3.10.1 (recalled)" + (oneLeg ? ", angle by one leg F_t = 0.9 F_y" : ""),
                 String.format(Locale.ROOT, "A_n = %.0f mm², P_t = %.1f kN%s", net * 1e6, ft * net / 1e3,
                         c.assumed() ? " (assumed connection)" : ""));
     }
@@ -181,7 +183,7 @@ public final class Asce10MemberCheck implements MemberCheck {
             limit = TENSION_LIMIT;
             what = "tension member L/r";
         }
-        return new CheckResult(CheckMode.SLENDERNESS_LIMIT, value / limit, "ASCE 10-97 3.7.3, 3.10 (recalled)",
+        return new CheckResult(CheckMode.SLENDERNESS_LIMIT, value / limit, "ASCE/SEI 10-15 3.7.3, 3.10 (recalled)",
                 String.format(Locale.ROOT, "%s = %.1f, limit %.0f", what, value, limit));
     }
 
@@ -191,7 +193,7 @@ public final class Asce10MemberCheck implements MemberCheck {
      * lateral-torsional reduction, assumed) and C_m = 0.6 + 0.4ψ ≥ 0.4 (recalled). x = u–u (local
      * y), y = v–v (local z).
      */
-    private static CheckResult bending(MemberCheckInput in, Slenderness s, double fy, double e) {
+    private static CheckResult bending(MemberCheckInput in, Slenderness s, double fy, double fcr, double e) {
         Section section = in.member().section();
         SectionProperties p = section.properties();
         Optional<ElasticModuli> moduli = ElasticModuli.of(section);
@@ -208,7 +210,7 @@ public final class Asce10MemberCheck implements MemberCheck {
         double value = eq2;
         String note = String.format(Locale.ROOT, "(3.12-2) %.3f", eq2);
         if (f.inCompression()) {
-            double pa = Asce10Slenderness.fa(s.klOverR(), fy, e) * p.area();
+            double pa = Asce10Slenderness.fa(s.klOverR(), fcr, e) * p.area();  // F_cr for a slender angle leg, as in 3.6
             double klx = in.buckling().geometricAxis().length();
             double kly = in.buckling().minorAxis().length();
             double pex = Math.PI * Math.PI * e * p.iu() / (klx * klx);
@@ -224,6 +226,6 @@ public final class Asce10MemberCheck implements MemberCheck {
             value = Math.max(eq1, eq2);
             note = String.format(Locale.ROOT, "(3.12-1) %.3f, (3.12-2) %.3f", eq1, eq2);
         }
-        return new CheckResult(CheckMode.COMBINED, value, "ASCE 10-97 3.12 (3.12-1), (3.12-2)", note);
+        return new CheckResult(CheckMode.COMBINED, value, "ASCE/SEI 10-15 3.12 (3.12-1), (3.12-2)", note);
     }
 }

@@ -141,4 +141,25 @@ class Asce10MemberCheckTest {
                 Connection.assumed(Role.LEG), MemberForces.axial(-10e3)));
         assertEquals(154.58 / 150, find(r, CheckMode.SLENDERNESS_LIMIT).utilisation(), 1e-3);
     }
+
+    /**
+     * A slender angle leg (L150x10 in S355: w/t = (150 − 10 − 16)/10 = 12.4 > (w/t)lim = 80/√51.49 =
+     * 11.15) replaces F_y by F_cr in the compression check (3.6-5); the check of axial force with
+     * bending (3.12-1) must use the same reduced stress (issue 12): with a negligible moment its
+     * P/P_a term equals the compression check's utilisation.
+     */
+    @Test
+    void axialForceWithBendingUsesTheStressReducedForLocalBuckling() {
+        var shape = new tetrapod.model.SectionShape.Angle(0.150, 0.150, 0.010, 0.016, 0.008);
+        var props = new tetrapod.model.SectionProperties(29.3e-4, 624e-8, 624e-8, 990e-8, 258e-8, 9.7e-8, 0.0403,
+                0.0403, 1.0, 23.0);
+        var l150x10 = new tetrapod.model.Section("L150x10", shape, props);
+        MemberCheckResult r = new Asce10MemberCheck().check(new MemberCheckInput(
+                Fixtures.member(4, Role.DIAGONAL, l150x10), Fixtures.S355, diagonalLengths(), twoBolts(),
+                new MemberForces(-100e3, 0, 0, 1e-3, -1e-3)));
+        double buckling = find(r, CheckMode.COMPRESSION_BUCKLING).utilisation();
+        assertTrue(r.checks().stream().anyMatch(c -> c.mode() == CheckMode.LOCAL_BUCKLING), "the leg is slender");
+        CheckResult combined = find(r, CheckMode.COMBINED);
+        assertEquals(buckling, combined.utilisation(), 1e-6 * buckling, combined.note());
+    }
 }
