@@ -21,14 +21,25 @@ import tetrapod.model.spec.MaterialSpec;
 import tetrapod.model.spec.SegmentSpec;
 import tetrapod.model.spec.SupportType;
 import tetrapod.model.spec.TowerSpec;
+import tetrapod.common.ProgressListener;
+import tetrapod.model.spec.LoadsSpec;
+import tetrapod.model.spec.TerrainCategory;
+import tetrapod.model.spec.WindSpec;
+import tetrapod.size.Sizer;
+import tetrapod.size.SizingModel;
+import tetrapod.size.SizingOptions;
+import tetrapod.size.SizingResult;
 
 /**
  * Prints a valid starter spec: equal segments tapering linearly from the base width to the top
- * width. Its sections are starting values only, lighter going up; size them before relying on them.
+ * width, EN 1991-1-4 wind at the given basic speed, sections sized by {@link Sizer} to a strength
+ * utilisation of at most 0.9 with every requirement met (unless {@code --no-size}). An invented
+ * starting point for the user's own site, loads and checks, not a design.
  */
 @Command(name = "new", mixinStandardHelpOptions = true,
-        description = "Print a starter tower spec (square base, linear taper, equal segments). "
-                + "Its sections are starting values to be checked and sized, not a design.")
+        description = "Print a starter tower spec (square base, linear taper, equal segments, EN wind) with its "
+                + "sections sized to pass its own checks (strength utilisation at most 0.9, every requirement met). "
+                + "An invented starting point: give the site's wind, ancillaries and checks before relying on it.")
 final class NewCommand implements Callable<Integer> {
 
     private static final String[] LEGS = {"L150x15", "L120x12", "L100x10", "L90x9", "L80x8", "L70x7"};
@@ -67,15 +78,45 @@ final class NewCommand implements Callable<Integer> {
     @Option(names = "--material", description = "Steel grade (default: ${DEFAULT-VALUE}).", defaultValue = "S355")
     String material;
 
+    @Option(names = "--wind-speed", paramLabel = "M/S", defaultValue = "25",
+            description = "EN 1991-1-4 basic wind speed v_b,0, m/s, terrain category II (default: ${DEFAULT-VALUE}).")
+    double windSpeed;
+
+    @Option(names = "--no-size", description = "Print the starting sections as they are, without sizing them.")
+    boolean noSize;
+
     @Spec
     CommandSpec spec;
+
+    /** Strength utilisation the starter's sections are sized to. */
+    static final double TARGET = 0.9;
 
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        out.print(SpecWriter.write(starter()));
+        TowerSpec starter = starter();
+        if (!noSize) {
+            SizingResult sized = Sizer.size(SizingModel.of(starter), SizingOptions.DEFAULT.withTarget(TARGET),
+                    ProgressListener.NONE);
+            if (sized.sizedSpec().isPresent()) {
+                starter = described(sized.sizedSpec().get(), String.format(java.util.Locale.ROOT, "Starter spec from "
+                        + "'tetrapod new': sections sized to a strength utilisation of at most %.2f with every "
+                        + "requirement met, under the wind given here; an invented starting point, not a design for "
+                        + "any site.", TARGET));
+            } else {
+                spec.commandLine().getErr().println("new: the starter's sections could not be sized ("
+                        + sized.outcome() + "); they are printed as starting values: run 'tetrapod size' on the file");
+            }
+        }
+        out.print(SpecWriter.write(starter));
         out.flush();
         return ExitCode.DONE;
+    }
+
+    private static TowerSpec described(TowerSpec s, String description) {
+        return new TowerSpec(s.name(), description, s.idealisation(), s.base(), s.segments(), s.material(),
+                s.supports(), s.connectionAllowance(), s.planBracingLevels(), s.userSections(), s.explicitFrame()
+                .orElse(null), s.loads(), s.checks());
     }
 
     TowerSpec starter() throws BadInputException {
@@ -83,6 +124,9 @@ final class NewCommand implements Callable<Integer> {
         positive(problems, "--height", height);
         positive(problems, "--base-width", baseWidth);
         positive(problems, "--top-width", topWidth);
+        if (!(windSpeed >= 10 && windSpeed <= 60)) {
+            problems.add(Problem.at("--wind-speed", "must be a basic wind speed of 10 to 60 m/s, was " + windSpeed));
+        }
         if (segments < 1) {
             problems.add(Problem.at("--segments", "must be at least 1, was " + segments));
         }
@@ -96,15 +140,17 @@ final class NewCommand implements Callable<Integer> {
         }
         List<SegmentSpec> segs = new ArrayList<>();
         for (int k = 0; k < segments; k++) {
-            double top = baseWidth + (topWidth - baseWidth) * (k + 1) / segments;
+            double top = Math.round(100 * (baseWidth + (topWidth - baseWidth) * (k + 1) / segments)) / 100.0;
             int size = Math.min(k, LEGS.length - 1);
             segs.add(new SegmentSpec(height / segments, top, top, panels, List.of(), pattern, Horizontals.ALL,
                     true, 0, Map.of(Role.LEG, LEGS[size], Role.DIAGONAL, DIAGONALS[size],
                             Role.HORIZONTAL, HORIZONTALS[size])));
         }
+        LoadsSpec loads = new LoadsSpec(List.of(), new WindSpec.En1991(windSpeed, TerrainCategory.CAT_II, List.of(),
+                1.0, 1.0, 1.0, 1.0, WindSpec.En1991.DEFAULT_AIR_DENSITY), List.of(), null, List.of(), 15.0);
         return new TowerSpec(name, "Starter spec from 'tetrapod new': sections are starting values, not a design.",
                 ideal, new BaseSpec(baseWidth, baseWidth), segs, MaterialSpec.grade(material), SupportType.PINNED,
-                0.10, List.of(), Map.of(), null, null);
+                0.10, List.of(), Map.of(), null, loads, null);
     }
 
     private static void positive(List<Problem> problems, String option, double value) {

@@ -70,6 +70,12 @@ class CommandLineTest {
         Files.writeString(spec, made.out());
         CliRun check = CliRun.of("validate", spec.toString());
         assertEquals(ExitCode.DONE, check.exitCode(), check.err());
+        // issue 12: the starter has a loads block and passes its own checks
+        assertTrue(made.out().contains("\"wind\""), made.out());
+        CliRun analysed = CliRun.of("analyze", spec.toString(), "-o", dir.resolve("out").toString(), "--quiet");
+        assertEquals(ExitCode.DONE, analysed.exitCode(), analysed.err());
+        assertTrue(analysed.out().contains("all checks pass"), analysed.out());
+        assertTrue(analysed.out().contains("requirements: every requirement is met"), analysed.out());
     }
 
     @Test
