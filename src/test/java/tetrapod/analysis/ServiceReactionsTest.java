@@ -28,27 +28,10 @@ class ServiceReactionsTest {
     private static final double D = Math.sqrt(8);
 
     private static String tower(String uplift) {
-        return """
-            { "name": "one-panel hand tower",
-              "base": { "widthX": 2.0, "widthY": 2.0 },
-              "segments": [ { "height": 3.0, "panels": 1, "bracing": "x", "horizontals": "ends",
-                  "sections": { "leg": "LEG", "diagonal": "DIAG", "horizontal": "HOR" } } ],
-              "connectionAllowance": 0.0,
-              "userSections": {
-                "LEG": { "properties": { "A_cm2": 19.2, "Iy_cm4": 177.0, "Iz_cm4": 177.0, "Iv_cm4": 73.0, "J_cm4": 6.4,
-                                         "width_mm": 100, "flatSided": true, "mass_kg_per_m": 10.0 } },
-                "DIAG": { "properties": { "A_cm2": 9.4, "Iy_cm4": 42.3, "Iz_cm4": 42.3, "Iv_cm4": 17.6, "J_cm4": 1.6,
-                                          "width_mm": 70, "flatSided": true, "mass_kg_per_m": 5.0 } },
-                "HOR": { "properties": { "A_cm2": 6.9, "Iy_cm4": 22.8, "Iz_cm4": 22.8, "Iv_cm4": 9.4, "J_cm4": 0.9,
-                                         "width_mm": 60, "flatSided": true, "mass_kg_per_m": 4.0 } } },
-              "loads": { "wind": { "method": "uniform", "pressure": 3.0, "forceCoefficient": 1.0 },
-                         "combinations": [ { "name": "strength", "dead": 1.35, "wind": 1.5 },
-                                           { "name": "uplift", "dead": 1.0, "wind": 1.5 } ],
-                         "sweepStep": 5.0 },
-              "checks": { "foundation": { "block": { "widthX": 1.0, "widthY": 1.0, "height": 0.5, "depth": 0.5 },
+        return TestTowers.handTower(3.0, """
+                { "foundation": { "block": { "widthX": 1.0, "widthY": 1.0, "height": 0.5, "depth": 0.5 },
                   "soilUnitWeight": 18.0, "frustumHalfAngle": 0.0, "allowableBearing": 200.0, "friction": 0.4,
-                  "uplift": %s } } }
-            """.formatted(uplift);
+                  "uplift": %s } }""".formatted(uplift));
     }
 
     private static FoundationEnvelope.Governing upliftOfWorstLeg(String uplift) throws Exception {
