@@ -45,7 +45,7 @@ class BadSpecsTest {
                 new Case("zero-panels.json", "segments[0].panels", 6, "must be a whole number ≥ 1, was 0", 1),
                 new Case("unknown-bracing.json", "segments[1].bracing", 9, "unknown bracing 'z'; expected one of x, k, single", 1),
                 new Case("unknown-section.json", "segments[0].sections.diagonal", 9,
-                        "unknown section 'L60x7'; nearest known: L60x6, L65x7, L70x7", 1),
+                        "unknown section 'L60x7'; nearest known: L60x5, L60x6, L65x7", 1),
                 new Case("unknown-key.json", "segments[0].hieght", 5, "unknown key; did you mean 'height'?", 2),
                 new Case("unknown-top-key.json", "conectionAllowance", 9, "unknown key; did you mean 'connectionAllowance'?", 1),
                 new Case("nan-value.json", "segments[0].topWidthY", 6, "must be a finite number in m, was NaN", 1),
