@@ -32,7 +32,7 @@ final class InputSection implements Section {
         Results r = ri.results();
         Map<String, Object> in = r.input();
         out.p("The model file as Tetrapod read it. Values marked “default” were not in the file: Tetrapod assumed "
-                + "them (the list at the end of this section gives each with its path in the file). Units are those "
+                + "them (appendix C lists each with where it belongs in the file). Units are those "
                 + "of the model file: m, kN, kPa, MPa, m/s.");
         out.element("h3", "General");
         Table general = new Table("input-general", "", List.of("key", "value", "unit", "given or assumed"));
@@ -64,7 +64,7 @@ final class InputSection implements Section {
             for (String key : List.of("wind", "ice", "nodal")) {
                 if (loads.containsKey(key)) {
                     out.element("h4", key.equals("nodal") ? "nodal loads" : key);
-                    InputTables.flat("input-" + key, r, loads.get(key), "$.loads." + key).writeTo(out);
+                    InputTables.write(out, "input-" + key, r, loads.get(key), "$.loads." + key);
                 }
                 if (key.equals("ice")) {
                     r.ice().ifPresent(ice -> out.p(designIce(ice)));
@@ -72,7 +72,7 @@ final class InputSection implements Section {
             }
             if (loads.containsKey("ancillaries")) {
                 out.element("h4", "ancillaries");
-                InputTables.flat("input-ancillaries", r, loads.get("ancillaries"), "$.loads.ancillaries").writeTo(out);
+                InputTables.write(out, "input-ancillaries", r, loads.get("ancillaries"), "$.loads.ancillaries");
             }
             if (loads.containsKey("sweepStep")) {
                 out.p("Wind swept round the tower in steps of " + InputTables.text(loads.get("sweepStep")) + "°"
@@ -88,15 +88,13 @@ final class InputSection implements Section {
 
         if (in.containsKey("checks")) {
             out.element("h3", "Check settings");
-            InputTables.flat("input-checks", r, in.get("checks"), "$.checks").writeTo(out);
+            InputTables.write(out, "input-checks", r, in.get("checks"), "$.checks");
         }
         long assumedConnections = r.checks().stream().filter(c -> c.note().contains("(assumed connection)")).count();
         if (assumedConnections > 0) {
             out.p(assumedConnections + " members have no connection in the model file and were checked with their "
                     + "role's assumed connection (their notes in the member checks say so; docs/methods-checks.md §6).");
         }
-        out.element("h3", "Everything Tetrapod assumed");
-        assumed(r).writeTo(out);
     }
 
     /** The design ice thickness the analysis used, with the rule that gave it. */
@@ -191,17 +189,6 @@ final class InputSection implements Section {
             row.add(Cell.of(c.wind() ? "every azimuth" : "no"));
             row.add(InputTables.origin(!given));
             t.row(row);
-        }
-        return t;
-    }
-
-    private static Table assumed(Results r) {
-        Table t = new Table("input-defaults", "", List.of("path in the model file", "value assumed"));
-        for (String path : r.defaults()) {
-            t.row(Cell.of(path), new Cell(InputTables.text(at(r.input(), path)), InputTables.DEFAULT_MARK, ""));
-        }
-        if (t.isEmpty()) {
-            t.row(Cell.of("(none)"), Cell.of("the model file gives every value"));
         }
         return t;
     }
