@@ -14,6 +14,7 @@ import tetrapod.model.spec.ExplicitFrameSpec;
 import tetrapod.model.spec.ChecksSpec;
 import tetrapod.model.spec.LoadsSpec;
 import tetrapod.model.spec.MaterialSpec;
+import tetrapod.model.spec.ProjectSpec;
 import tetrapod.model.spec.SegmentSpec;
 import tetrapod.model.spec.SupportType;
 import tetrapod.model.spec.TowerSpec;
@@ -30,7 +31,7 @@ import tetrapod.model.spec.UserSectionSpec;
 public final class SpecReader {
 
     static final List<String> TOP_KEYS = List.of("name", "description", "idealisation", "base", "segments",
-            "material", "supports", "connectionAllowance", "planBracingLevels", "userSections", "frame", "loads", "checks");
+            "material", "supports", "connectionAllowance", "planBracingLevels", "userSections", "frame", "loads", "checks", "project");
     static final double DEFAULT_CONNECTION_ALLOWANCE = 0.10;
 
     private SpecReader() { }
@@ -123,11 +124,12 @@ public final class SpecReader {
             ChecksSpec checks = checkFields == null ? ChecksSpec.DEFAULT
                     : new ChecksReader(problems, segmentCount).read(checkFields);
 
+            ProjectSpec project = ProjectReader.read(root.object("project", false));
             if (problems.count() > 0) {
                 return null;
             }
             return new TowerSpec(name, description, idealisation, base, segments, material, supports, allowance,
-                    planLevels, userSections, frame, loads, checks);
+                    planLevels, userSections, frame, loads, checks, project);
         }
     }
 }

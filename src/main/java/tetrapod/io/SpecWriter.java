@@ -63,6 +63,9 @@ public final class SpecWriter {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("name", spec.name());
         m.put("description", spec.description());
+        if (!spec.project().isEmpty()) {
+            m.put("project", ProjectReader.toMap(spec.project()));
+        }
         m.put("idealisation", spec.idealisation().jsonName());
         if (!spec.isExplicit()) {
             m.put("base", ordered("widthX", spec.base().widthX(), "widthY", spec.base().widthY()));

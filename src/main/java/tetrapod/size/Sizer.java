@@ -136,7 +136,7 @@ public final class Sizer {
         }
         return new TowerSpec(spec.name(), spec.description(), spec.idealisation(), spec.base(), segments,
                 spec.material(), spec.supports(), spec.connectionAllowance(), spec.planBracingLevels(),
-                spec.userSections(), spec.frame(), spec.loads(), spec.checks());
+                spec.userSections(), spec.frame(), spec.loads(), spec.checks(), spec.project());
     }
 
     /** One design that was analysed. */

@@ -17,12 +17,13 @@ import tetrapod.model.Idealisation;
  * @param planBracingLevels   heights (m) of horizontal diaphragms; each must be a panel level
  * @param userSections        sections defined in the file, by name
  * @param checks              how members, connections and foundations are checked
+ * @param project             the title block's project, structure, revision, date and names
  */
 public record TowerSpec(String name, String description, Idealisation idealisation,
                         BaseSpec base, List<SegmentSpec> segments, MaterialSpec material,
                         SupportType supports, double connectionAllowance,
                         List<Double> planBracingLevels, Map<String, UserSectionSpec> userSections,
-                        ExplicitFrameSpec frame, LoadsSpec loads, ChecksSpec checks) {
+                        ExplicitFrameSpec frame, LoadsSpec loads, ChecksSpec checks, ProjectSpec project) {
 
     public TowerSpec {
         Objects.requireNonNull(name, "name");
@@ -32,6 +33,17 @@ public record TowerSpec(String name, String description, Idealisation idealisati
         userSections = userSections == null ? Map.of() : Map.copyOf(userSections);
         loads = loads == null ? LoadsSpec.NONE : loads;
         checks = checks == null ? ChecksSpec.DEFAULT : checks;
+        project = project == null ? ProjectSpec.NONE : project;
+    }
+
+    /** A spec without a project. */
+    public TowerSpec(String name, String description, Idealisation idealisation,
+                     BaseSpec base, List<SegmentSpec> segments, MaterialSpec material,
+                     SupportType supports, double connectionAllowance,
+                     List<Double> planBracingLevels, Map<String, UserSectionSpec> userSections,
+                     ExplicitFrameSpec frame, LoadsSpec loads, ChecksSpec checks) {
+        this(name, description, idealisation, base, segments, material, supports, connectionAllowance,
+                planBracingLevels, userSections, frame, loads, checks, ProjectSpec.NONE);
     }
 
     /** A spec with the default checks. */
