@@ -56,7 +56,7 @@ final class AppendixSection implements Section {
                 MemberRow m = r.member(q.member());
                 t.row(Cell.num(Integer.toString(m.id())), Cell.of(Words.of(m.role())),
                         Cell.num(Integer.toString(m.segment())), Cell.of(m.section()), Cell.of(q.ruleLabel()),
-                        Cell.utilisation(q.ratio(), ""), Cell.of(q.note()));
+                        Cell.utilisation(q.ratio(), ""), Cell.of(Recalled.strip(q.note())));
             }
             compact(out, t);
         }

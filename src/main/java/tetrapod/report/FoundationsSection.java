@@ -32,8 +32,8 @@ final class FoundationsSection implements Section {
         Table t = new Table("foundation-table", "", List.of("node", "check", "utilisation", "clause", "case", "note"));
         for (FootingRow f : footings) {
             for (FootingCheck c : f.checks()) {
-                t.row(Cell.num(Integer.toString(f.node())), Cell.of(c.name()), Cell.utilisation(c.utilisation(), ""),
-                        Cell.of(c.clause()), Cell.caseId((c.caseId())), Cell.of(c.note()));
+                t.row(Cell.num(Integer.toString(f.node())), Cell.of(Words.of(c.name())), Cell.utilisation(c.utilisation(), ""),
+                        Cell.of(Recalled.strip(c.clause())), Cell.caseId((c.caseId())), Cell.of(Recalled.strip(c.note())));
             }
         }
         t.writeTo(out);

@@ -38,7 +38,7 @@ final class InputSection implements Section {
         Table general = new Table("input-general", "", List.of("key", "value", "unit", "given or assumed"));
         for (String key : List.of("name", "description", "idealisation", "supports", "connectionAllowance")) {
             if (in.containsKey(key)) {
-                general.row(Cell.of(key), Cell.of(InputTables.text(in.get(key))), Cell.of(InputUnits.of(key)),
+                general.row(Cell.of(Words.of(key)), Cell.of(InputTables.text(in.get(key))), Cell.of(InputUnits.of(key)),
                         InputTables.origin(r.isDefault("$." + key)));
             }
         }
@@ -49,7 +49,7 @@ final class InputSection implements Section {
             geometry(r, in).writeTo(out);
         } else {
             out.p("An explicit frame: " + r.nodeCount() + " nodes and " + r.members().size() + " members given node "
-                    + "by node in the model file (results.json model.nodes and model.members list them).");
+                    + "by node in the model file (results.json lists them).");
         }
         out.element("h3", "Sections");
         sections(r).writeTo(out);
@@ -83,7 +83,7 @@ final class InputSection implements Section {
         boolean givenCombinations = loads.containsKey("combinations");
         out.p(givenCombinations ? "The combinations of the model file."
                 : "The model file gives no combinations: Tetrapod used the default set of its wind method "
-                        + "(docs/methods.md, Combinations). These are defaults.");
+                        + "(Tetrapod's method notes, under combinations). These are defaults.");
         combinations(r, givenCombinations).writeTo(out);
 
         if (in.containsKey("checks")) {
@@ -93,7 +93,7 @@ final class InputSection implements Section {
         long assumedConnections = r.checks().stream().filter(c -> c.note().contains("(assumed connection)")).count();
         if (assumedConnections > 0) {
             out.p(assumedConnections + " members have no connection in the model file and were checked with their "
-                    + "role's assumed connection (their notes in the member checks say so; docs/methods-checks.md §6).");
+                    + "role's assumed connection (members.csv notes each).");
         }
     }
 
@@ -176,7 +176,7 @@ final class InputSection implements Section {
     private static Table combinations(Results r, boolean given) {
         List<String> actions = List.of("dead", "wind", "ice", "windOnIce", "nodal");
         List<String> header = new ArrayList<>(List.of("combination"));
-        actions.forEach(a -> header.add("factor on " + a));
+        actions.forEach(a -> header.add("factor on " + Words.of(a)));
         header.add("with wind");
         header.add("given or assumed");
         Table t = new Table("input-combinations", "", header);

@@ -43,8 +43,8 @@ final class MemberChecksSection implements Section {
             CheckRow c = g.governing;
             t.row(Cell.of(Words.of(g.role)), Cell.num(Integer.toString(g.segment)), Cell.of(String.join(", ", g.sections)),
                     Cell.num(Integer.toString(g.count)), Cell.num(Integer.toString(c.member())),
-                    Cell.utilisation(c.utilisation(), ""), Cell.of(Words.of(c.mode())), Cell.of(c.clause()),
-                    Cell.caseId(c.caseId()), Cell.of(c.note()).withClass("note"), Cell.num(Format.kN(g.tension)),
+                    Cell.utilisation(c.utilisation(), ""), Cell.of(Words.of(c.mode())), Cell.of(Recalled.strip(c.clause())),
+                    Cell.caseId(c.caseId()), Cell.of(Recalled.strip(c.note())).withClass("note"), Cell.num(Format.kN(g.tension)),
                     Cell.num(Format.kN(g.compression)));
         }
         out.open("div", "class=\"wide\"");

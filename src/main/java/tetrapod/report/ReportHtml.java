@@ -22,7 +22,7 @@ public final class ReportHtml {
     /** The sections, in order. */
     static final List<Section> SECTIONS = List.of(new SummarySection(), new InputSection(), new WindSection(),
             new ResultsSection(), new MemberChecksSection(), new RequirementsSection(), new FoundationsSection(), new HandMethodSection(),
-            new MethodNotesSection(), new CautionsSection(), new AppendixSection());
+            new MethodNotesSection(), new SourcesSection(), new CautionsSection(), new AppendixSection());
 
     private ReportHtml() { }
 

@@ -48,7 +48,7 @@ final class RequirementsSection implements Section {
         counts.forEach((rule, c) -> {
             RequirementRow w = worst.get(rule);
             summary.row(Cell.of(rule), Cell.num(Integer.toString(c[0])), Cell.num(Integer.toString(c[1])),
-                    Cell.utilisation(w.ratio(), ""), Cell.num(Integer.toString(w.member())), Cell.of(w.clause()));
+                    Cell.utilisation(w.ratio(), ""), Cell.num(Integer.toString(w.member())), Cell.of(Recalled.strip(w.clause())));
         });
         summary.writeTo(out);
         if (!broken.isEmpty()) {

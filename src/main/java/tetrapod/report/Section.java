@@ -3,7 +3,7 @@ package tetrapod.report;
 /** One numbered section of the report. */
 sealed interface Section permits SummarySection, InputSection, WindSection, ResultsSection, MemberChecksSection,
         RequirementsSection, FoundationsSection, SizingSection, HandMethodSection, MethodNotesSection, CautionsSection,
-        AppendixSection {
+        SourcesSection, AppendixSection {
 
     /** The id of the section's element, e.g. {@code summary}. */
     String id();
