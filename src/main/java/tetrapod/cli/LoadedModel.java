@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import tetrapod.common.BadInputException;
 import tetrapod.generate.Tower;
 import tetrapod.generate.TowerGenerator;
+import tetrapod.io.ProblemLines;
 import tetrapod.io.SpecReader;
 import tetrapod.load.TowerLoads;
 import tetrapod.model.Material;
@@ -19,8 +20,13 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
         TowerSpec spec = SpecReader.read(file, SectionCatalogue.standard());
         SectionCatalogue sections = SectionCatalogue.standard().with(spec.userSections());
         Material material = SteelGrades.fromSpec(spec.material());
-        Tower tower = TowerGenerator.generate(spec, sections, material);
-        TowerLoads loads = TowerLoads.build(tower, spec.loads());
-        return new LoadedModel(file, spec, sections, material, tower, loads);
+        try {
+            Tower tower = TowerGenerator.generate(spec, sections, material);
+            TowerLoads loads = TowerLoads.build(tower, spec.loads());
+            return new LoadedModel(file, spec, sections, material, tower, loads);
+        } catch (BadInputException e) {
+            // found after reading: the paths are known, the lines are looked up in the file
+            throw ProblemLines.located(file, e);
+        }
     }
 }

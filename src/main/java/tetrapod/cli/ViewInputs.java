@@ -71,8 +71,12 @@ final class ViewInputs {
             OptionalInt index = data.caseAt(a);
             if (!Double.isFinite(a)) {
                 problems.add("--azimuth: must be a number of degrees, was " + a);
+            } else if (index.isEmpty() && data.azimuths().isEmpty()) {
+                problems.add("--azimuth: the model has no wind (no loads.wind), so no case has a wind azimuth; "
+                        + "leave out --azimuth, or use --colour role to draw the tower with a wind arrow at " + deg(a));
             } else if (index.isEmpty()) {
-                problems.add("--azimuth: no case at " + deg(a) + "; cases at " + azimuths(data));
+                problems.add("--azimuth: no case solved in full with wind towards " + deg(a) + "; cases at "
+                        + azimuths(data));
             } else {
                 options = options.withCase(index.getAsInt());
             }
