@@ -52,7 +52,8 @@ final class SummarySection implements Section {
                 .raw("<img alt=\"3D view of the tower, members coloured by governing utilisation\" src=\"data:image/png;base64,")
                 .raw(Base64.getEncoder().encodeToString(png)).raw("\">")
                 .element("figcaption", "The tower in 3D, each member coloured by its governing utilisation over every "
-                        + "case; base reactions and legend as drawn by Tetrapod's renderer.")
+                        + "case. The arrows at the leg bases are the forces the supports exert on each leg (vertical and "
+                        + "horizontal) in the case of that leg's largest compression, as in the table of leg base reactions.")
                 .close("figure"));
 
         out.element("h3", "Most utilised members");
