@@ -77,7 +77,7 @@ final class AnalyzeCommand implements Callable<Integer> {
         Results results = new Results(ResultsReader.read(resultsFile));
         CsvTables.writeAll(results, folder);
         watch.end("results.json, CSV");
-        ViewData view = ResultViews.of(result);
+        ViewData view = ResultViews.of(result).withAncillaries(ResultViews.ancillaries(loaded.spec()));
         Path picture = folder.resolve("tower.png");
         String route = RenderCommand.write(view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
         watch.end("picture");

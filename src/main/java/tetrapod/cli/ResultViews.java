@@ -14,12 +14,15 @@ import tetrapod.check.MemberEnvelope;
 import tetrapod.model.Frame;
 import tetrapod.model.Member;
 import tetrapod.model.Vec3;
+import tetrapod.model.spec.AncillarySpec;
+import tetrapod.model.spec.TowerSpec;
 import tetrapod.solve.MemberEndForces;
 import tetrapod.solve.NodeDisplacement;
 import tetrapod.model.NodeForce;
 import tetrapod.view.Colouring;
 import tetrapod.view.MemberScalars;
 import tetrapod.view.NodeVector;
+import tetrapod.view.ViewAncillary;
 import tetrapod.view.ViewCase;
 import tetrapod.view.ViewData;
 
@@ -31,6 +34,19 @@ import tetrapod.view.ViewData;
 final class ResultViews {
 
     private ResultViews() { }
+
+    /** The items a model's tower carries, for drawing at their heights (m). */
+    static List<ViewAncillary> ancillaries(TowerSpec spec) {
+        List<ViewAncillary> out = new ArrayList<>();
+        for (AncillarySpec a : spec.loads().ancillaries()) {
+            if (a instanceof AncillarySpec.Point p) {
+                out.add(new ViewAncillary(p.name(), p.height(), p.height(), p.face()));
+            } else if (a instanceof AncillarySpec.Linear l) {
+                out.add(new ViewAncillary(l.name(), l.from(), l.to(), l.face()));
+            }
+        }
+        return out;
+    }
 
     /** Everything to show of {@code result}, starting with the envelope coloured by utilisation. */
     static ViewData of(AnalysisResult result) {

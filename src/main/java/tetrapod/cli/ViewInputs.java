@@ -35,12 +35,13 @@ final class ViewInputs {
      */
     static ViewData data(LoadedModel loaded, OptionalDouble azimuthDeg, boolean withResults)
             throws UnstableStructureException {
+        var items = ResultViews.ancillaries(loaded.spec());
         if (!withResults) {
-            return ViewData.geometryOnly(loaded.tower().frame(), azimuthDeg);
+            return ViewData.geometryOnly(loaded.tower().frame(), azimuthDeg).withAncillaries(items);
         }
         AnalysisResult result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
                 ProgressListener.NONE);
-        return ResultViews.of(result);
+        return ResultViews.of(result).withAncillaries(items);
     }
 
     /** Whether the colouring asked for ({@code --colour}, may be null) needs analysis results. */
