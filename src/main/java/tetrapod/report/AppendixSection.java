@@ -8,7 +8,8 @@ import tetrapod.report.Table.Cell;
 
 /**
  * The long lists, after the calculation's body, in a compact layout: every member's governing
- * check (A), every requirement not met (B) and every value Tetrapod assumed (C). The CSV files
+ * check (A), every requirement not met (B), every value Tetrapod assumed (C) and every leg base's
+ * footing checks (D). The CSV files
  * hold the same and more.
  */
 final class AppendixSection implements Section {
@@ -73,6 +74,19 @@ final class AppendixSection implements Section {
             assumed.row(Cell.of("(none)"), Cell.of("the model file gives every value"));
         }
         compact(out, assumed);
+
+        if (!r.foundations().isEmpty()) {
+            out.element("h3", "D. Every leg base's footing checks");
+            Table feet = new Table("foundation-all", "", List.of("node", "check", "utilisation", "clause", "case"));
+            for (Rows.FootingRow f : r.foundations()) {
+                for (Rows.FootingCheck c : f.checks()) {
+                    feet.row(Cell.num(Integer.toString(f.node())), Cell.of(Words.of(c.name())),
+                            Cell.utilisation(c.utilisation(), ""), Cell.of(Recalled.strip(c.clause())),
+                            Cell.caseId(c.caseId()));
+                }
+            }
+            compact(out, feet);
+        }
     }
 
     private static void compact(Html out, Table t) {

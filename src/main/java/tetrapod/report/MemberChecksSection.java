@@ -37,17 +37,18 @@ final class MemberChecksSection implements Section {
                 + "the largest tension and compression of any member of the group. Every member is listed in "
                 + "appendix A and in members.csv.");
         Table t = new Table("governing-members", "", List.of("role", "segment", "sections", "members",
-                "governing member", "utilisation", "check", "clause", "case", "values that decided it",
+                "governing member", "utilisation", "check and clause", "case", "values that decided it",
                 "largest tension in the group, kN", "largest compression in the group, kN"));
         for (Group g : groups(r)) {
             CheckRow c = g.governing;
             t.row(Cell.of(Words.of(g.role)), Cell.num(Integer.toString(g.segment)), Cell.of(String.join(", ", g.sections)),
                     Cell.num(Integer.toString(g.count)), Cell.num(Integer.toString(c.member())),
-                    Cell.utilisation(c.utilisation(), ""), Cell.of(Words.of(c.mode())), Cell.of(Recalled.strip(c.clause())),
+                    Cell.utilisation(c.utilisation(), ""),
+                    Cell.of(Words.of(c.mode()) + ": " + Recalled.strip(c.clause())).withClass("clause"),
                     Cell.caseId(c.caseId()), Cell.of(Recalled.strip(c.note())).withClass("note"), Cell.num(Format.kN(g.tension)),
                     Cell.num(Format.kN(g.compression)));
         }
-        out.open("div", "class=\"wide\"");
+        out.open("div", "class=\"wide dense\"");
         t.writeTo(out);
         out.close("div");
     }
