@@ -58,11 +58,12 @@ final class TitleBlock {
         String sha = field(source, "sha256");
         String middle = sha.isEmpty() ? "" : "model " + field(source, "file") + " SHA-256 " + sha;
         String right = field(source, "program");
+        String font = " font-family: \"DejaVu Sans\", Arial, sans-serif;";
         return "@page {\n"
-                + "  @bottom-left { content: " + cssString(left) + "; font-size: 7pt; color: #5f6368; }\n"
-                + "  @bottom-center { content: " + cssString(middle) + "; font-size: 6pt; color: #5f6368; }\n"
+                + "  @bottom-left { content: " + cssString(left) + "; font-size: 7pt; color: #5f6368;" + font + " }\n"
+                + "  @bottom-center { content: " + cssString(middle) + "; font-size: 6pt; color: #5f6368;" + font + " }\n"
                 + "  @bottom-right { content: " + cssString(right.isEmpty() ? "" : right + " · ")
-                + " \"page \" counter(page) \" of \" counter(pages); font-size: 7pt; color: #5f6368; }\n}\n";
+                + " \"page \" counter(page) \" of \" counter(pages); font-size: 7pt; color: #5f6368;" + font + " }\n}\n";
     }
 
     private String revision() {
