@@ -17,7 +17,12 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
                    TowerLoads loads) {
 
     static LoadedModel read(Path file) throws BadInputException {
-        TowerSpec spec = SpecReader.read(file, SectionCatalogue.standard());
+        TowerSpec spec;
+        try {
+            spec = SpecReader.read(file, SectionCatalogue.standard());
+        } catch (BadInputException e) {
+            throw GeometryFirst.withGeometry(file, e);
+        }
         SectionCatalogue sections = SectionCatalogue.standard().with(spec.userSections());
         Material material = SteelGrades.fromSpec(spec.material());
         try {

@@ -36,6 +36,21 @@ class MessagesTest {
         assertTrue(second.err().contains("(line " + itemLine + ")"), "expected line " + itemLine + ":\n" + second.err());
     }
 
+    /** A typo in the wind and a geometry problem: both reported in one run, each with its line. */
+    @Test
+    void aGeometryProblemIsReportedBesideAReadingProblemOfTheLoads(@TempDir Path dir) throws Exception {
+        String text = Files.readString(RIDGE).replaceFirst("\"panels\": 4", "\"panels\": 4, \"panelHeights\": [3, 3, 3, 2]")
+                .replaceFirst("\"basicSpeed\"", "\"basicSped\"");
+        Path both = dir.resolve("both.json");
+        Files.writeString(both, text);
+        CliRun run = CliRun.of("validate", both.toString());
+        assertEquals(ExitCode.BAD_INPUT, run.exitCode(), run.out() + run.err());
+        assertTrue(run.err().contains("basicSped: unknown key") && run.err().contains("(line " + lineOf(text, "basicSped")
+                + ")"), run.err());
+        assertTrue(run.err().contains("segments[0].panelHeights: ") && run.err().contains("(line "
+                + lineOf(text, "\"panelHeights\"") + ")"), run.err());
+    }
+
     @Test
     void aCsvGivenToReportIsNamedAsNotAResultsFile(@TempDir Path dir) throws Exception {
         Path csv = dir.resolve("members.csv");
