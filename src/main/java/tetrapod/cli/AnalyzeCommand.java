@@ -83,13 +83,15 @@ final class AnalyzeCommand implements Callable<Integer> {
         }
         Path folder = output != null ? output : OutputFolders.forModel(model);
         Path resultsFile = folder.resolve("results.json");
+        ResultsDocument.Source source = new ResultsDocument.Source(model.getFileName().toString(),
+                tetrapod.io.Sha256.of(model), new Version().getVersion()[0]);
         JsonOutput.write(resultsFile, ResultsDocument.build(loaded.spec(), result,
-                DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec()))));
+                DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec())), source));
         // everything else is built from the file just written, as 'tetrapod report' builds it
         Results results = new Results(ResultsReader.read(resultsFile));
         CsvTables.writeAll(results, folder);
         watch.end("results.json, CSV");
-        ViewData view = ResultViews.of(result);
+        ViewData view = ResultViews.of(result).withAncillaries(ResultViews.ancillaries(loaded.spec()));
         Path picture = folder.resolve("tower.png");
         String route = RenderCommand.write(view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
         watch.end("picture");

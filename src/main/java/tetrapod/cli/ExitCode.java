@@ -10,6 +10,11 @@ public final class ExitCode {
     public static final int BAD_INPUT = 2;
     public static final int UNSTABLE = 3;
     public static final int INTERNAL = 4;
+    /**
+     * The machine lacks what the command needs and the input is not at fault: no display for
+     * {@code view}. (5 is left free for the exit codes other sessions define.)
+     */
+    public static final int BAD_ENVIRONMENT = 6;
 
     private ExitCode() { }
 }

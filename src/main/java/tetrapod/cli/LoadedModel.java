@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import tetrapod.common.BadInputException;
 import tetrapod.generate.Tower;
 import tetrapod.generate.TowerGenerator;
+import tetrapod.io.ProblemLines;
 import tetrapod.io.SpecReader;
 import tetrapod.load.TowerLoads;
 import tetrapod.model.Material;
@@ -16,11 +17,21 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
                    TowerLoads loads) {
 
     static LoadedModel read(Path file) throws BadInputException {
-        TowerSpec spec = SpecReader.read(file, SectionCatalogue.standard());
+        TowerSpec spec;
+        try {
+            spec = SpecReader.read(file, SectionCatalogue.standard());
+        } catch (BadInputException e) {
+            throw GeometryFirst.withGeometry(file, e);
+        }
         SectionCatalogue sections = SectionCatalogue.standard().with(spec.userSections());
         Material material = SteelGrades.fromSpec(spec.material());
-        Tower tower = TowerGenerator.generate(spec, sections, material);
-        TowerLoads loads = TowerLoads.build(tower, spec.loads());
-        return new LoadedModel(file, spec, sections, material, tower, loads);
+        try {
+            Tower tower = TowerGenerator.generate(spec, sections, material);
+            TowerLoads loads = TowerLoads.build(tower, spec.loads());
+            return new LoadedModel(file, spec, sections, material, tower, loads);
+        } catch (BadInputException e) {
+            // found after reading: the paths are known, the lines are looked up in the file
+            throw ProblemLines.located(file, e);
+        }
     }
 }

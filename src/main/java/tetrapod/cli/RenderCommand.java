@@ -30,7 +30,8 @@ final class RenderCommand implements Callable<Integer> {
     Path output;
 
     @Option(names = "--azimuth", paramLabel = "DEG",
-            description = "Show the case with wind from this azimuth (0 = towards +x, 90 = towards +y).")
+            description = "Draw the wind blowing towards this azimuth, degrees (0 = towards +x, 90 = towards +y): "
+                    + "the wind arrow when coloured by role, else the case solved in full at that azimuth.")
     Double azimuth;
 
     @Option(names = "--size", paramLabel = "WxH", defaultValue = "1600x1200",

@@ -8,17 +8,21 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.OptionalDouble;
 import tetrapod.analysis.AnalysisResult;
+import tetrapod.analysis.LegBaseExtremes;
 import tetrapod.analysis.SolvedCase;
 import tetrapod.check.MemberEnvelope;
 import tetrapod.model.Frame;
 import tetrapod.model.Member;
 import tetrapod.model.Vec3;
+import tetrapod.model.spec.AncillarySpec;
+import tetrapod.model.spec.TowerSpec;
 import tetrapod.solve.MemberEndForces;
 import tetrapod.solve.NodeDisplacement;
 import tetrapod.model.NodeForce;
 import tetrapod.view.Colouring;
 import tetrapod.view.MemberScalars;
 import tetrapod.view.NodeVector;
+import tetrapod.view.ViewAncillary;
 import tetrapod.view.ViewCase;
 import tetrapod.view.ViewData;
 
@@ -30,6 +34,19 @@ import tetrapod.view.ViewData;
 final class ResultViews {
 
     private ResultViews() { }
+
+    /** The items a model's tower carries, for drawing at their heights (m). */
+    static List<ViewAncillary> ancillaries(TowerSpec spec) {
+        List<ViewAncillary> out = new ArrayList<>();
+        for (AncillarySpec a : spec.loads().ancillaries()) {
+            if (a instanceof AncillarySpec.Point p) {
+                out.add(new ViewAncillary(p.name(), p.height(), p.height(), p.face()));
+            } else if (a instanceof AncillarySpec.Linear l) {
+                out.add(new ViewAncillary(l.name(), l.from(), l.to(), l.face()));
+            }
+        }
+        return out;
+    }
 
     /** Everything to show of {@code result}, starting with the envelope coloured by utilisation. */
     static ViewData of(AnalysisResult result) {
@@ -84,8 +101,32 @@ final class ResultViews {
         scalars.put(Colouring.UTILISATION, MemberScalars.of(utilisation));
         scalars.put(Colouring.AZIMUTH, MemberScalars.of(azimuth));
         scalars.put(Colouring.AXIAL, MemberScalars.of(axial));
-        return new ViewCase("envelope over " + result.caseCount() + (result.caseCount() == 1 ? " case" : " cases"), OptionalDouble.empty(), scalars,
-                List.of(), List.of(), notes, breaks);
+        List<NodeVector> reactions = governingReactions(result);
+        return new ViewCase("envelope over " + result.caseCount() + (result.caseCount() == 1 ? " case" : " cases")
+                + (reactions.isEmpty() ? "" : "; base reactions of each leg in its case of largest compression"),
+                OptionalDouble.empty(), scalars, List.of(), reactions, notes, breaks);
+    }
+
+    /**
+     * Each leg base's reaction (the force the support exerts, N) in the case of its largest
+     * compression, which is solved in full; legs whose case is not among those solved in full are left out.
+     */
+    static List<NodeVector> governingReactions(AnalysisResult result) {
+        Map<String, SolvedCase> byId = new HashMap<>();
+        result.cases().forEach(c -> byId.put(c.id(), c));
+        List<NodeVector> out = new ArrayList<>();
+        for (LegBaseExtremes leg : result.legBases()) {
+            SolvedCase c = leg.compression().caseId() == null ? null : byId.get(leg.compression().caseId());
+            if (c == null) {
+                continue;
+            }
+            for (NodeForce r : c.solution().reactions()) {
+                if (r.node() == leg.node()) {
+                    out.add(new NodeVector(r.node(), new Vec3(r.component(0), r.component(1), r.component(2))));
+                }
+            }
+        }
+        return out;
     }
 
     private static ViewCase solved(Frame frame, SolvedCase c) {

@@ -28,7 +28,8 @@ final class ViewCommand implements Callable<Integer> {
     @Parameters(paramLabel = "MODEL.json", description = "The tower spec.")
     Path model;
 
-    @Option(names = "--azimuth", paramLabel = "DEG", description = "Start with the case with wind from this azimuth.")
+    @Option(names = "--azimuth", paramLabel = "DEG", description = "Start with the wind blowing towards this azimuth, degrees (0 = towards +x, 90 = towards +y): "
+                    + "the wind arrow when coloured by role, else the case solved in full at that azimuth.")
     Double azimuth;
 
     @Option(names = "--colour", paramLabel = "KIND", description = "Start coloured by role, or by axial, utilisation or azimuth (the model is analysed first and the window steps through the envelope and every case solved in full).")
@@ -75,7 +76,7 @@ final class ViewCommand implements Callable<Integer> {
         } catch (ViewerWindow.Unavailable e) {
             err.println("view: " + e.getMessage());
             err.println("view: 'tetrapod render " + model + " -o tower.png' draws a picture without a display");
-            return ExitCode.INTERNAL;
+            return ExitCode.BAD_ENVIRONMENT;
         }
     }
 }

@@ -35,12 +35,13 @@ final class ViewInputs {
      */
     static ViewData data(LoadedModel loaded, OptionalDouble azimuthDeg, boolean withResults)
             throws UnstableStructureException {
+        var items = ResultViews.ancillaries(loaded.spec());
         if (!withResults) {
-            return ViewData.geometryOnly(loaded.tower().frame(), azimuthDeg);
+            return ViewData.geometryOnly(loaded.tower().frame(), azimuthDeg).withAncillaries(items);
         }
         AnalysisResult result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
                 ProgressListener.NONE);
-        return ResultViews.of(result);
+        return ResultViews.of(result).withAncillaries(items);
     }
 
     /** Whether the colouring asked for ({@code --colour}, may be null) needs analysis results. */
@@ -71,8 +72,12 @@ final class ViewInputs {
             OptionalInt index = data.caseAt(a);
             if (!Double.isFinite(a)) {
                 problems.add("--azimuth: must be a number of degrees, was " + a);
+            } else if (index.isEmpty() && data.azimuths().isEmpty()) {
+                problems.add("--azimuth: the model has no wind (no loads.wind), so no case has a wind azimuth; "
+                        + "leave out --azimuth, or use --colour role to draw the tower with a wind arrow at " + deg(a));
             } else if (index.isEmpty()) {
-                problems.add("--azimuth: no case at " + deg(a) + "; cases at " + azimuths(data));
+                problems.add("--azimuth: no case solved in full with wind towards " + deg(a) + "; cases at "
+                        + azimuths(data));
             } else {
                 options = options.withCase(index.getAsInt());
             }

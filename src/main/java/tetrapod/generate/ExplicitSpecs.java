@@ -47,6 +47,7 @@ public final class ExplicitSpecs {
         return new TowerSpec(original.name(), description, original.idealisation(), null, List.of(),
                 original.material(), null, original.connectionAllowance(), List.of(),
                 original.userSections(), new ExplicitFrameSpec(nodes, members, supports), original.loads().forExplicitFrame(),
-                original.isExplicit() ? original.checks() : original.checks().withoutSegments());
+                original.isExplicit() ? original.checks() : original.checks().withoutSegments(), original.basis(),
+                original.mixedBasis(), original.project());
     }
 }

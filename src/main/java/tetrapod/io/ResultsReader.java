@@ -22,7 +22,16 @@ public final class ResultsReader {
 
     @SuppressWarnings("unchecked")
     public static Map<String, Object> read(Path file) throws BadInputException {
-        Object root = PlainJson.read(file);
+        Object root;
+        try {
+            root = PlainJson.read(file);
+        } catch (BadInputException e) {
+            if (!java.nio.file.Files.isReadable(file)) {
+                throw e;
+            }
+            throw new BadInputException(Problem.at("$", file + " is not a results file: expected the results.json "
+                    + "that 'tetrapod analyze' writes (" + e.problems().get(0).message() + ")"));
+        }
         if (!(root instanceof Map<?, ?>)) {
             throw new BadInputException(Problem.at("$", file + " is not a results file: expected a JSON object"));
         }

@@ -19,6 +19,7 @@ import tetrapod.model.spec.ExplicitFrameSpec;
 import tetrapod.model.spec.ChecksSpec;
 import tetrapod.model.spec.LoadsSpec;
 import tetrapod.model.spec.MaterialSpec;
+import tetrapod.model.spec.ProjectSpec;
 import tetrapod.model.spec.SegmentSpec;
 import tetrapod.model.spec.SupportType;
 import tetrapod.model.spec.TowerSpec;
@@ -36,7 +37,7 @@ public final class SpecReader {
 
     static final List<String> TOP_KEYS = List.of("name", "description", "idealisation", "base", "segments",
             "material", "supports", "connectionAllowance", "planBracingLevels", "userSections", "frame", "loads", "checks",
-            "basis", "mixedBasis");
+            "basis", "mixedBasis", "project");
     static final double DEFAULT_CONNECTION_ALLOWANCE = 0.10;
 
     private SpecReader() { }
@@ -134,11 +135,12 @@ public final class SpecReader {
             ChecksSpec checks = checkFields == null ? null
                     : new ChecksReader(problems, segmentCount, readingBasis).read(checkFields);
 
+            ProjectSpec project = ProjectReader.read(root.object("project", false));
             if (problems.count() > 0) {
                 return null;
             }
             TowerSpec spec = new TowerSpec(name, description, idealisation, base, segments, material, supports, allowance,
-                    planLevels, userSections, frame, loads, checks, basis, mixedBasis);
+                    planLevels, userSections, frame, loads, checks, basis, mixedBasis, project);
             if (!mixedBasis) {
                 refuseMixes(spec, basisGiven);
             }

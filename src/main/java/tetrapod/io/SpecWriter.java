@@ -66,6 +66,9 @@ public final class SpecWriter {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("name", spec.name());
         m.put("description", spec.description());
+        if (!spec.project().isEmpty()) {
+            m.put("project", ProjectReader.toMap(spec.project()));
+        }
         m.put("idealisation", spec.idealisation().jsonName());
         m.put("basis", spec.basis().jsonName());
         if (spec.mixedBasis()) {

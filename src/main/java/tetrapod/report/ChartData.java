@@ -86,9 +86,17 @@ final class ChartData {
         return List.of(List.copyOf(tension), List.copyOf(compression));
     }
 
-    /** Members per utilisation bin, per role in the order roles first appear: role → counts[BINS]. */
+    /** Members per utilisation bin, per role in the order of {@link tetrapod.model.Role}: role → counts[BINS]. */
     static Map<String, int[]> histogram(Results results) {
         Map<String, int[]> out = new LinkedHashMap<>();
+        for (tetrapod.model.Role role : tetrapod.model.Role.values()) {
+            for (CheckRow c : results.checks()) {
+                if (results.member(c.member()).role().equals(role.jsonName())) {
+                    out.computeIfAbsent(role.jsonName(), k -> new int[BINS]);
+                    break;
+                }
+            }
+        }
         for (CheckRow c : results.checks()) {
             String role = results.member(c.member()).role();
             out.computeIfAbsent(role, k -> new int[BINS])[bin(c.utilisation())]++;

@@ -31,6 +31,19 @@ final class ChartStyle {
 
     private ChartStyle() { }
 
+    /**
+     * The colour of a role (its name in results.json, or in words) in every chart: the one the 3D
+     * picture gives it ({@link tetrapod.model.RoleColours}).
+     */
+    static Color role(String role) {
+        for (tetrapod.model.Role r : tetrapod.model.Role.values()) {
+            if (r.jsonName().equals(role)) {
+                return new Color(tetrapod.model.RoleColours.rgb(r));
+            }
+        }
+        throw new IllegalArgumentException("no role '" + role + "'");
+    }
+
     static Paint series(int k) {
         return SERIES[k % SERIES.length];
     }

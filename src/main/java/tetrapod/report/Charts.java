@@ -103,7 +103,7 @@ final class Charts {
         CategoryPlot plot = chart.getCategoryPlot();
         BarRenderer renderer = (BarRenderer) plot.getRenderer();
         for (int k = 0; k < data.getRowCount(); k++) {
-            renderer.setSeriesPaint(k, ChartStyle.series(k));
+            renderer.setSeriesPaint(k, ChartStyle.role(data.getRowKey(k).toString()));
         }
         renderer.setItemMargin(0.0);
         plot.getDomainAxis().setMaximumCategoryLabelWidthRatio(1.6f);
@@ -141,7 +141,7 @@ final class Charts {
         data.addSeries(handT);
         data.addSeries(feT);
         JFreeChart chart = ChartFactory.createXYLineChart(null, "wind azimuth, degrees (0 = towards +x, 90 = towards +y)",
-                "largest leg base force, kN (uplift < 0: no leg lifts)", data, PlotOrientation.VERTICAL, true, false,
+                "largest leg base force, kN (uplift plotted positive; below 0: no leg lifts)", data, PlotOrientation.VERTICAL, true, false,
                 false);
         style(chart);
         XYPlot plot = chart.getXYPlot();

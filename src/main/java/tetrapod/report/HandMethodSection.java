@@ -43,7 +43,7 @@ final class HandMethodSection implements Section {
                 + ", the combination of the analysis' largest leg compression (" + Format.kN(c.fe()) + " kN at "
                 + Format.degrees(c.azimuthDeg()) + "°); uplift in " + u.combination() + ", the combination of its "
                 + "largest uplift (" + Format.kN(u.fe()) + " kN at " + Format.degrees(u.azimuthDeg()) + "°). "
-                + "results.json handMethodGoverning names both; handMethod gives every combination at every azimuth "
+                + "results.json names both and gives every combination at every azimuth "
                 + "of the sweep.");
         List<HandRow> all = r.hand();
         List<Double> reported = r.wind().stream().map(Rows.WindRow::azimuthDeg).toList();

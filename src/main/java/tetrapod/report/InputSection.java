@@ -32,13 +32,13 @@ final class InputSection implements Section {
         Results r = ri.results();
         Map<String, Object> in = r.input();
         out.p("The model file as Tetrapod read it. Values marked “default” were not in the file: Tetrapod assumed "
-                + "them (the list at the end of this section gives each with its path in the file). Units are those "
+                + "them (appendix C lists each with where it belongs in the file). Units are those "
                 + "of the model file: m, kN, kPa, MPa, m/s.");
         out.element("h3", "General");
         Table general = new Table("input-general", "", List.of("key", "value", "unit", "given or assumed"));
         for (String key : List.of("name", "description", "idealisation", "supports", "connectionAllowance")) {
             if (in.containsKey(key)) {
-                general.row(Cell.of(key), Cell.of(InputTables.text(in.get(key))), Cell.of(InputUnits.of(key)),
+                general.row(Cell.of(Words.of(key)), Cell.of(InputTables.text(in.get(key))), Cell.of(InputUnits.of(key)),
                         InputTables.origin(r.isDefault("$." + key)));
             }
         }
@@ -49,7 +49,7 @@ final class InputSection implements Section {
             geometry(r, in).writeTo(out);
         } else {
             out.p("An explicit frame: " + r.nodeCount() + " nodes and " + r.members().size() + " members given node "
-                    + "by node in the model file (results.json model.nodes and model.members list them).");
+                    + "by node in the model file (results.json lists them).");
         }
         out.element("h3", "Sections");
         sections(r).writeTo(out);
@@ -64,7 +64,7 @@ final class InputSection implements Section {
             for (String key : List.of("wind", "ice", "nodal")) {
                 if (loads.containsKey(key)) {
                     out.element("h4", key.equals("nodal") ? "nodal loads" : key);
-                    InputTables.flat("input-" + key, r, loads.get(key), "$.loads." + key).writeTo(out);
+                    InputTables.write(out, "input-" + key, r, loads.get(key), "$.loads." + key);
                 }
                 if (key.equals("ice")) {
                     r.ice().ifPresent(ice -> out.p(designIce(ice)));
@@ -72,7 +72,7 @@ final class InputSection implements Section {
             }
             if (loads.containsKey("ancillaries")) {
                 out.element("h4", "ancillaries");
-                InputTables.flat("input-ancillaries", r, loads.get("ancillaries"), "$.loads.ancillaries").writeTo(out);
+                InputTables.write(out, "input-ancillaries", r, loads.get("ancillaries"), "$.loads.ancillaries");
             }
             if (loads.containsKey("sweepStep")) {
                 out.p("Wind swept round the tower in steps of " + InputTables.text(loads.get("sweepStep")) + "°"
@@ -83,20 +83,18 @@ final class InputSection implements Section {
         boolean givenCombinations = loads.containsKey("combinations");
         out.p(givenCombinations ? "The combinations of the model file."
                 : "The model file gives no combinations: Tetrapod used the default set of its wind method "
-                        + "(docs/methods.md, Combinations). These are defaults.");
+                        + "(Tetrapod's method notes, under combinations). These are defaults.");
         combinations(r, givenCombinations).writeTo(out);
 
         if (in.containsKey("checks")) {
             out.element("h3", "Check settings");
-            InputTables.flat("input-checks", r, in.get("checks"), "$.checks").writeTo(out);
+            InputTables.write(out, "input-checks", r, in.get("checks"), "$.checks");
         }
         long assumedConnections = r.checks().stream().filter(c -> c.note().contains("(assumed connection)")).count();
         if (assumedConnections > 0) {
             out.p(assumedConnections + " members have no connection in the model file and were checked with their "
-                    + "role's assumed connection (their notes in the member checks say so; docs/methods-checks.md §6).");
+                    + "role's assumed connection (members.csv notes each).");
         }
-        out.element("h3", "Everything Tetrapod assumed");
-        assumed(r).writeTo(out);
     }
 
     /** The design ice thickness the analysis used, with the rule that gave it. */
@@ -178,7 +176,7 @@ final class InputSection implements Section {
     private static Table combinations(Results r, boolean given) {
         List<String> actions = List.of("dead", "wind", "ice", "windOnIce", "nodal");
         List<String> header = new ArrayList<>(List.of("combination"));
-        actions.forEach(a -> header.add("factor on " + a));
+        actions.forEach(a -> header.add("factor on " + Words.of(a)));
         header.add("with wind");
         header.add("given or assumed");
         Table t = new Table("input-combinations", "", header);
@@ -191,17 +189,6 @@ final class InputSection implements Section {
             row.add(Cell.of(c.wind() ? "every azimuth" : "no"));
             row.add(InputTables.origin(!given));
             t.row(row);
-        }
-        return t;
-    }
-
-    private static Table assumed(Results r) {
-        Table t = new Table("input-defaults", "", List.of("path in the model file", "value assumed"));
-        for (String path : r.defaults()) {
-            t.row(Cell.of(path), new Cell(InputTables.text(at(r.input(), path)), InputTables.DEFAULT_MARK, ""));
-        }
-        if (t.isEmpty()) {
-            t.row(Cell.of("(none)"), Cell.of("the model file gives every value"));
         }
         return t;
     }

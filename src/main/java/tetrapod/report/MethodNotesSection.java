@@ -52,22 +52,24 @@ final class MethodNotesSection implements Section {
         out.p("Self-weight: each member's mass per metre × length × g × (1 + connection allowance), half to each end. "
                 + (wind.isEmpty() ? "No wind." : "Wind: " + WindSection.methodName(Tree.str(wind, "method")) + "; "
                 + "formulas, clauses and Tetrapod's own rules (the force at any azimuth, the distribution to the "
-                + "nodes) are listed in docs/methods.md."));
+                + "nodes) are listed in Tetrapod's method notes."));
         out.element("h3", "Clauses used by the checks");
         Map<String, int[]> members = new TreeMap<>();
         Map<String, String> modes = new TreeMap<>();
         for (CheckRow c : r.checks()) {
-            members.computeIfAbsent(c.clause(), k -> new int[1])[0]++;
-            modes.merge(c.clause(), c.mode(), (a, b) -> a.contains(b) ? a : a + ", " + b);
+            String clause = Recalled.strip(c.clause());
+            members.computeIfAbsent(clause, k -> new int[1])[0]++;
+            modes.merge(clause, Words.of(c.mode()), (a, b) -> a.contains(b) ? a : a + ", " + b);
         }
         for (FootingRow f : r.foundations()) {
             for (FootingCheck c : f.checks()) {
-                members.computeIfAbsent(c.clause(), k -> new int[1])[0]++;
-                modes.merge(c.clause(), c.name(), (a, b) -> a.contains(b) ? a : a + ", " + b);
+                String clause = Recalled.strip(c.clause());
+                members.computeIfAbsent(clause, k -> new int[1])[0]++;
+                modes.merge(clause, "footing " + Words.of(c.name()), (a, b) -> a.contains(b) ? a : a + ", " + b);
             }
         }
         Table t = new Table("clauses", "Each clause that governs at least one member or footing check; the "
-                + "formula of each is in docs/methods-checks.md.", List.of("clause", "checks", "members and footing "
+                + "formula of each is in Tetrapod's method notes, under checks.", List.of("clause", "checks", "members and footing "
                 + "checks it governs"));
         members.forEach((clause, n) -> t.row(Cell.of(clause), Cell.of(modes.get(clause)),
                 Cell.num(Integer.toString(n[0]))));
@@ -75,11 +77,9 @@ final class MethodNotesSection implements Section {
         Map<String, Object> checks = Tree.mapOrEmpty(in, "checks");
         String method = Tree.str(checks, "method");
         out.p("asce10".equals(method)
-                ? "Member and bolt checks: ASCE 10 design stresses at factored loads (docs/methods-checks.md §5)."
+                ? "Member and bolt checks: ASCE 10 design stresses at factored loads."
                 : "Member and bolt checks: EN 1993-1-1, EN 1993-1-8 and EN 1993-3-1 with the partial factors listed "
-                        + "in the input (docs/methods-checks.md §3–4).");
-        out.p("Values that the documentation marks “recalled from memory” or “common practice” have no published "
-                + "source that could be read while Tetrapod was written; check them against the printed standard "
-                + "before relying on a result they decide.");
+                        + "in the input.");
+        out.p("The values that rest on no published source are listed, each once, in the next section.");
     }
 }

@@ -69,7 +69,10 @@ final class PolarCharts {
         plot.setAngleOffset(0);
         plot.setCounterClockwise(true);
         plot.setAngleTickUnit(new NumberTickUnit(45));
-        NumberAxis radius = new NumberAxis(kind.axisLabel);
+        // the unit goes in a title above the plot: an axis label along the radius would lie on the tick labels
+        NumberAxis radius = new NumberAxis(null);
+        chart.addSubtitle(new org.jfree.chart.title.TextTitle(kind.axisLabel + " (distance from the centre)",
+                new java.awt.Font(java.awt.Font.SANS_SERIF, java.awt.Font.PLAIN, 12)));
         radius.setAutoRangeIncludesZero(true);
         radius.setRange(0, max > 0 ? max * 1.05 : 1);
         plot.setAxis(radius);

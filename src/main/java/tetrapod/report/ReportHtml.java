@@ -21,8 +21,8 @@ public final class ReportHtml {
 
     /** The sections, in order. */
     static final List<Section> SECTIONS = List.of(new SummarySection(), new InputSection(), new WindSection(),
-            new ResultsSection(), new MemberChecksSection(), new RequirementsSection(), new FoundationsSection(), new HandMethodSection(), new NaturalModesSection(),
-            new MethodNotesSection(), new CautionsSection());
+            new ResultsSection(), new MemberChecksSection(), new RequirementsSection(), new FoundationsSection(), new HandMethodSection(),
+            new NaturalModesSection(), new MethodNotesSection(), new SourcesSection(), new CautionsSection(), new AppendixSection());
 
     private ReportHtml() { }
 
@@ -44,17 +44,19 @@ public final class ReportHtml {
         List<Section> sections = sections(sizingHistory.isPresent());
         Html out = new Html();
         String title = "Tower calculation: " + results.name();
+        TitleBlock titleBlock = new TitleBlock(results);
         out.raw("<!DOCTYPE html>\n").open("html", "lang=\"en\"").raw("\n").open("head").raw("\n")
                 .raw("<meta charset=\"utf-8\">\n")
                 .raw("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")
                 .element("title", title)
-                .open("style").raw("\n").raw(style()).close("style")
+                .open("style").raw("\n").raw(style()).raw(titleBlock.pageFooterCss()).close("style")
                 .close("head").open("body").raw("\n");
         out.open("header").element("h1", title);
         Object description = results.input().get("description");
         if (description != null && !description.toString().isBlank()) {
             out.element("p", "class=\"description\"", description.toString());
         }
+        titleBlock.write(out);
         out.element("p", "class=\"caution-line\"", "For checking by a qualified engineer against the codes that "
                 + "apply locally. Tetrapod does not certify compliance.");
         out.open("nav", "aria-label=\"Contents\"").open("ol");

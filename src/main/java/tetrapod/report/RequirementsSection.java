@@ -3,14 +3,13 @@ package tetrapod.report;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import tetrapod.report.Rows.MemberRow;
 import tetrapod.report.Rows.RequirementRow;
 import tetrapod.report.Table.Cell;
 
 /**
  * The rules that do not depend on the load (slenderness limits, bolt end/edge distances and
  * spacing, width-to-thickness limits), apart from the utilisation: per rule, how many members it
- * applies to, how many break it and the largest ratio; then every member that breaks one.
+ * applies to, how many break it and the largest ratio; the members that break one are in the appendix.
  */
 final class RequirementsSection implements Section {
 
@@ -49,20 +48,11 @@ final class RequirementsSection implements Section {
         counts.forEach((rule, c) -> {
             RequirementRow w = worst.get(rule);
             summary.row(Cell.of(rule), Cell.num(Integer.toString(c[0])), Cell.num(Integer.toString(c[1])),
-                    Cell.utilisation(w.ratio(), ""), Cell.num(Integer.toString(w.member())), Cell.of(w.clause()));
+                    Cell.utilisation(w.ratio(), ""), Cell.num(Integer.toString(w.member())), Cell.of(Recalled.strip(w.clause())));
         });
         summary.writeTo(out);
-        if (broken.isEmpty()) {
-            return;
+        if (!broken.isEmpty()) {
+            out.p("Appendix B lists every member that breaks a requirement, with the values that decided it.");
         }
-        Table t = new Table("requirements-not-met", "", List.of("member", "role", "segment", "section", "rule",
-                "ratio", "clause", "values"));
-        for (RequirementRow q : broken) {
-            MemberRow m = r.member(q.member());
-            t.row(Cell.num(Integer.toString(m.id())), Cell.of(m.role()), Cell.num(Integer.toString(m.segment())),
-                    Cell.of(m.section()), Cell.of(q.ruleLabel()), Cell.utilisation(q.ratio(), ""), Cell.of(q.clause()),
-                    Cell.of(q.note()));
-        }
-        t.writeTo(out);
     }
 }

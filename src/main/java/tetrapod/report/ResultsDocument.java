@@ -65,8 +65,32 @@ public final class ResultsDocument {
      *                  filled in (see {@link tetrapod.io.DefaultedKeys}), listed as {@code defaults}
      */
     public static Map<String, Object> build(TowerSpec spec, AnalysisResult result, List<String> defaulted) {
+        return build(spec, result, defaulted, null);
+    }
+
+    /**
+     * The model file a results document was computed from and the program that computed it, for
+     * the report's title block: the file's name, the SHA-256 of its bytes (hex) and the program
+     * with its version.
+     */
+    public record Source(String file, String sha256, String program) {
+        Map<String, Object> toMap() {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("file", file);
+            m.put("sha256", sha256);
+            m.put("program", program);
+            return m;
+        }
+    }
+
+    /** The document for {@code result} of {@code spec}, with its {@code source} when given (else none). */
+    public static Map<String, Object> build(TowerSpec spec, AnalysisResult result, List<String> defaulted,
+                                            Source source) {
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("format", FORMAT);
+        if (source != null) {
+            doc.put("source", source.toMap());
+        }
         doc.put("input", SpecWriter.toMap(spec));
         doc.put("basis", basis(spec));
         doc.put("model", model(result.model(), result.autoRestraints()));

@@ -59,7 +59,8 @@ final class SummarySection implements Section {
                 .raw("<img alt=\"3D view of the tower, members coloured by governing utilisation\" src=\"data:image/png;base64,")
                 .raw(Base64.getEncoder().encodeToString(png)).raw("\">")
                 .element("figcaption", "The tower in 3D, each member coloured by its governing utilisation over every "
-                        + "case; base reactions and legend as drawn by Tetrapod's renderer.")
+                        + "case. The arrows at the leg bases are the forces the supports exert on each leg (vertical and "
+                        + "horizontal) in the case of that leg's largest compression, as in the table of leg base reactions.")
                 .close("figure"));
 
         out.element("h3", "Most utilised members");
@@ -83,7 +84,7 @@ final class SummarySection implements Section {
             MemberRow m = r.member(c.member());
             t.row(Cell.num(Integer.toString(m.id())), Cell.of(m.role()), Cell.num(Integer.toString(m.segment())),
                     Cell.of(m.section()), Cell.utilisation(c.utilisation(), "top-" + (k + 1) + "-utilisation"),
-                    Cell.of(c.mode()), Cell.of(c.clause()), Cell.caseId((c.caseId())));
+                    Cell.of(Words.of(c.mode())), Cell.of(Recalled.strip(c.clause())), Cell.caseId((c.caseId())));
         }
         return t;
     }
@@ -93,7 +94,7 @@ final class SummarySection implements Section {
         List<CheckRow> top = r.checksByUtilisation();
         if (!top.isEmpty()) {
             CheckRow c = top.get(0);
-            t.row(Cell.of("most utilised member (" + c.member() + ", " + c.mode() + ")"),
+            t.row(Cell.of("most utilised member (" + c.member() + ", " + Words.of(c.mode()) + ")"),
                     Cell.num(Format.utilisation(c.utilisation())), Cell.caseId((c.caseId())),
                     Cell.num(Format.azimuth(c.azimuthDeg())).withId("governing-member-azimuth"));
         }
@@ -115,7 +116,7 @@ final class SummarySection implements Section {
                 }
             }
         }
-        worst.forEach((name, c) -> t.row(Cell.of("footing " + name + " (node " + where.get(name) + ")"),
+        worst.forEach((name, c) -> t.row(Cell.of("footing " + Words.of(name) + " (node " + where.get(name) + ")"),
                 Cell.num(Format.utilisation(c.utilisation())), Cell.caseId((c.caseId())),
                 Cell.num(Format.azimuth(c.azimuthDeg()))));
         return t;
@@ -161,7 +162,7 @@ final class SummarySection implements Section {
         if (steel.isEmpty()) {
             return t;
         }
-        Tree.mapOrEmpty(steel, "byRole").forEach((role, kg) -> t.row(Cell.of("bare mass of the " + role + " members"),
+        Tree.mapOrEmpty(steel, "byRole").forEach((role, kg) -> t.row(Cell.of("bare mass of the " + Words.of(role) + " members"),
                 Cell.num(Format.fixed(((Number) kg).doubleValue(), 0) + " kg")));
         t.row(Cell.of("bare steel mass"), Cell.num(Format.fixed(Tree.num(steel, "bareMass"), 0) + " kg"));
         t.row(Cell.of("total steel mass with " + Format.fixed(100 * Tree.num(steel, "connectionAllowance"), 0)

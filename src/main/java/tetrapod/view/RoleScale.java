@@ -3,30 +3,22 @@ package tetrapod.view;
 import java.util.ArrayList;
 import java.util.List;
 import tetrapod.model.Role;
+import tetrapod.model.RoleColours;
 
 /** Member role: one distinct colour per role; the value is the role's ordinal. */
 public record RoleScale() implements ColourScale {
 
-    private static final int[] COLOURS = {
-        0x2F3B52, // leg: dark slate
-        0x2A9D8F, // diagonal: teal
-        0xC98A1B, // horizontal: ochre
-        0x9C8AC4, // redundant: lavender
-        0x6F8F2F, // plan: olive
-        0x707070, // general: grey
-    };
-
-    /** The colour of {@code role}. */
+    /** The colour of {@code role} ({@link RoleColours}: the same in the report's charts). */
     public Rgb colour(Role role) {
-        return Rgb.hex(COLOURS[role.ordinal()]);
+        return Rgb.hex(RoleColours.rgb(role));
     }
 
     @Override
     public Rgb colour(double value) {
-        if (Double.isNaN(value) || value < 0 || value >= COLOURS.length) {
+        if (Double.isNaN(value) || value < 0 || value >= Role.values().length) {
             return NO_VALUE;
         }
-        return Rgb.hex(COLOURS[(int) value]);
+        return colour(Role.values()[(int) value]);
     }
 
     @Override

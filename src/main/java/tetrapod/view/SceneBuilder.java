@@ -77,6 +77,8 @@ public final class SceneBuilder {
         double gridHalf = Math.max(2.2 * baseRadius, 0.2 * size);
         if (options.grid()) {
             GroundDecorations.grid(ground, baseCentre, gridHalf);
+            // the items the tower carries go with the ground grid: the setting, not the structure
+            AncillaryGlyphs.add(deco, labels, frame, data.ancillaries(), 0.02 * size);
         }
         if (options.axes()) {
             Vec3 corner = baseCentre.minus(new Vec3(gridHalf, gridHalf, 0));  // on the left of the default view

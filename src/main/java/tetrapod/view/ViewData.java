@@ -19,8 +19,9 @@ import tetrapod.model.Support;
  * @param cases     at least one; the window steps through them in this order. Cases may offer
  *                  different colourings (e.g. only an envelope carries governing azimuths)
  * @param colouring the colouring to start with; the first case must offer it
+ * @param ancillaries the items the tower carries, drawn at their heights; may be empty
  */
-public record ViewData(Frame frame, List<ViewCase> cases, Colouring colouring) {
+public record ViewData(Frame frame, List<ViewCase> cases, Colouring colouring, List<ViewAncillary> ancillaries) {
 
     /** Two azimuths closer than this (deg) are the same. */
     private static final double SAME_AZIMUTH_DEG = 1e-6;
@@ -29,6 +30,7 @@ public record ViewData(Frame frame, List<ViewCase> cases, Colouring colouring) {
         Objects.requireNonNull(frame, "frame");
         Objects.requireNonNull(colouring, "colouring");
         cases = List.copyOf(cases);
+        ancillaries = List.copyOf(ancillaries);
         if (cases.isEmpty()) {
             throw new IllegalArgumentException("a view needs at least one case");
         }
@@ -70,6 +72,16 @@ public record ViewData(Frame frame, List<ViewCase> cases, Colouring colouring) {
         }
     }
 
+    /** A view without ancillaries. */
+    public ViewData(Frame frame, List<ViewCase> cases, Colouring colouring) {
+        this(frame, cases, colouring, List.of());
+    }
+
+    /** The same data with {@code items} drawn at their heights. */
+    public ViewData withAncillaries(List<ViewAncillary> items) {
+        return new ViewData(frame, cases, colouring, items);
+    }
+
     /** The frame alone, coloured by role, with an optional wind direction: what exists before analysis. */
     public static ViewData geometryOnly(Frame frame, OptionalDouble windAzimuthDeg) {
         String name = windAzimuthDeg.isPresent() ? "geometry, wind direction shown" : "geometry";
@@ -78,7 +90,7 @@ public record ViewData(Frame frame, List<ViewCase> cases, Colouring colouring) {
 
     /** The same data starting with another colouring (the first case must offer it). */
     public ViewData withColouring(Colouring c) {
-        return new ViewData(frame, cases, c);
+        return new ViewData(frame, cases, c, ancillaries);
     }
 
     /** Index of the first case whose wind blows from {@code azimuthDeg} (modulo 360), or empty. */

@@ -89,6 +89,11 @@ final class Chromium implements AutoCloseable {
                 "--screenshot=" + png.toAbsolutePath(), page.toUri().toString()));
     }
 
+    /** {@code page} printed to PDF as Chromium prints it (A4 by the page's own @page rule) into {@code pdf}. */
+    Run printToPdf(Path page, Path pdf) throws IOException, InterruptedException {
+        return run(List.of("--no-pdf-header-footer", "--print-to-pdf=" + pdf.toAbsolutePath(), page.toUri().toString()));
+    }
+
     private Run run(List<String> args) throws IOException, InterruptedException {
         Path profile = Files.createTempDirectory(profiles, "profile");
         List<String> command = new ArrayList<>(List.of(BINARY.toString(), "--headless", "--no-sandbox", "--disable-gpu",

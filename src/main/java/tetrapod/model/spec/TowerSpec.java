@@ -21,13 +21,14 @@ import tetrapod.model.Idealisation;
  * @param basis               the family of published rules every default follows; null to take it
  *                            from the wind method, else the check method (see {@link BasisMixes#derive})
  * @param mixedBasis          whether values of the other family are allowed (each is then a warning)
+ * @param project             the title block's project, structure, revision, date and names
  */
 public record TowerSpec(String name, String description, Idealisation idealisation,
                         BaseSpec base, List<SegmentSpec> segments, MaterialSpec material,
                         SupportType supports, double connectionAllowance,
                         List<Double> planBracingLevels, Map<String, UserSectionSpec> userSections,
                         ExplicitFrameSpec frame, LoadsSpec loads, ChecksSpec checks, DesignBasis basis,
-                        boolean mixedBasis) {
+                        boolean mixedBasis, ProjectSpec project) {
 
     public TowerSpec {
         Objects.requireNonNull(name, "name");
@@ -43,6 +44,18 @@ public record TowerSpec(String name, String description, Idealisation idealisati
         }
         checks = checks == null ? ChecksSpec.defaultFor(basis) : checks;
         loads = loads.actionFactors() == null ? loads.withActionFactors(ActionFactors.defaultFor(basis)) : loads;
+        project = project == null ? ProjectSpec.NONE : project;
+    }
+
+    /** A spec without a project. */
+    public TowerSpec(String name, String description, Idealisation idealisation,
+                     BaseSpec base, List<SegmentSpec> segments, MaterialSpec material,
+                     SupportType supports, double connectionAllowance,
+                     List<Double> planBracingLevels, Map<String, UserSectionSpec> userSections,
+                     ExplicitFrameSpec frame, LoadsSpec loads, ChecksSpec checks, DesignBasis basis,
+                     boolean mixedBasis) {
+        this(name, description, idealisation, base, segments, material, supports, connectionAllowance,
+                planBracingLevels, userSections, frame, loads, checks, basis, mixedBasis, ProjectSpec.NONE);
     }
 
     /** A spec whose basis follows its wind or check method, mixing not allowed. */

@@ -1,0 +1,78 @@
+package tetrapod.view;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.OptionalDouble;
+import org.junit.jupiter.api.Test;
+import tetrapod.model.Frame;
+import tetrapod.model.Support;
+import tetrapod.model.Vec3;
+
+/**
+ * Labels on the picture (issue 16, item 7): the reaction labels of the four leg bases, the wind
+ * and the axis labels never cover one another, in the report's picture size and a small one.
+ */
+class OverlayLayoutTest {
+
+    private final Frame frame = ViewFixtures.ridge();
+
+    @Test
+    void reactionWindAndAxisLabelsDoNotOverlap() {
+        List<Support> supports = frame.supports();
+        List<NodeVector> reactions = new ArrayList<>();
+        for (int k = 0; k < supports.size(); k++) {
+            // equal and nearly equal forces, so that labels of the same length sit side by side
+            reactions.add(new NodeVector(supports.get(k).node(), new Vec3(-30e3 - k, 25e3, 250e3 - k * 1e3)));
+        }
+        ViewCase c = new ViewCase("wind", OptionalDouble.of(225), Map.of(), List.of(), reactions, List.of());
+        ViewData data = new ViewData(frame, List.of(c), Colouring.ROLE);
+        Scene scene = SceneBuilder.build(data, SceneOptions.defaults(data).withWind(true));
+        long reactionLabels = scene.labels().stream().filter(l -> l.style() == LabelStyle.REACTION).count();
+        assertEquals(8, reactionLabels, "a vertical and a horizontal label per leg");
+        for (int[] size : new int[][] {{1600, 1200}, {640, 480}}) {
+            assertEquals(List.of(), overlaps(layout(scene, size[0], size[1])), size[0] + "x" + size[1]);
+        }
+    }
+
+    /** The test can fail: labels anchored at one point are spread apart, not drawn on top of each other. */
+    @Test
+    void labelsAtOnePointAreSpreadApart() {
+        ViewData data = ViewData.geometryOnly(frame, OptionalDouble.empty());
+        Vec3 top = frame.nodes().get(frame.nodes().size() - 1).position();
+        List<SceneLabel> same = new ArrayList<>();
+        for (int k = 0; k < 5; k++) {
+            same.add(new SceneLabel("Fz = 100.0 kN", LabelStyle.REACTION,
+                    new LabelAnchor.AtPoint(top, 0, 0, LabelAnchor.Align.CENTRE)));
+        }
+        Scene scene = SceneBuilder.build(data, SceneOptions.defaults(data)).withLabels(same);
+        List<PlacedImage> placed = layout(scene, 1600, 1200);
+        assertTrue(placed.size() >= 5);
+        assertEquals(List.of(), overlaps(placed));
+    }
+
+    private static List<PlacedImage> layout(Scene scene, int width, int height) {
+        Camera camera = Camera.framing(scene.bounds(), width, height, Camera.DEFAULT_YAW, Camera.DEFAULT_PITCH);
+        return OverlayLayout.place(scene, new Projector(camera, width, height), new LabelPainter(height));
+    }
+
+    /** Pairs of placed images whose rectangles intersect (computed here, not by the layout's own test). */
+    private static List<String> overlaps(List<PlacedImage> placed) {
+        List<String> out = new ArrayList<>();
+        for (int i = 0; i < placed.size(); i++) {
+            for (int j = i + 1; j < placed.size(); j++) {
+                PlacedImage a = placed.get(i);
+                PlacedImage b = placed.get(j);
+                boolean apartX = a.x() + a.image().getWidth() <= b.x() || b.x() + b.image().getWidth() <= a.x();
+                boolean apartY = a.y() + a.image().getHeight() <= b.y() || b.y() + b.image().getHeight() <= a.y();
+                if (!apartX && !apartY) {
+                    out.add("[" + a.x() + ", " + a.y() + "] and [" + b.x() + ", " + b.y() + "]");
+                }
+            }
+        }
+        return out;
+    }
+}
