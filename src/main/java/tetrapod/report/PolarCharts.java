@@ -44,6 +44,30 @@ final class PolarCharts {
 
     private PolarCharts() { }
 
+    /**
+     * Radius ticks at a 1-2-2.5-5 unit, at most four of them up to the largest force, and the
+     * circle half a unit beyond the last tick: the tick labels are centred on their ticks along the
+     * 0° spoke, so a last tick near the circle would put its label on the "0°" azimuth label.
+     */
+    record RadiusTicks(double unit, double upper) {
+        static RadiusTicks covering(double max) {
+            if (!(max > 0)) {
+                return new RadiusTicks(0.25, 1.125);
+            }
+            double target = max / 4;
+            double decade = Math.pow(10, Math.floor(Math.log10(target)));
+            double unit = 10 * decade;
+            for (double m : new double[] {1, 2, 2.5, 5}) {
+                if (m * decade >= target) {
+                    unit = m * decade;
+                    break;
+                }
+            }
+            double last = Math.ceil(max / unit - 1e-9) * unit;
+            return new RadiusTicks(unit, last + unit / 2);
+        }
+    }
+
     static Optional<Figure> legBases(Results r, Kind kind) {
         if (r.legSweeps().isEmpty()) {
             return Optional.empty();
@@ -73,8 +97,9 @@ final class PolarCharts {
         NumberAxis radius = new NumberAxis(null);
         chart.addSubtitle(new org.jfree.chart.title.TextTitle(kind.axisLabel + " (distance from the centre)",
                 new java.awt.Font(java.awt.Font.SANS_SERIF, java.awt.Font.PLAIN, 12)));
-        radius.setAutoRangeIncludesZero(true);
-        radius.setRange(0, max > 0 ? max * 1.05 : 1);
+        RadiusTicks ticks = RadiusTicks.covering(max);
+        radius.setTickUnit(new NumberTickUnit(ticks.unit()));
+        radius.setRange(0, ticks.upper());
         plot.setAxis(radius);
         plot.setAngleGridlinePaint(ChartStyle.GRID);
         plot.setRadiusGridlinePaint(ChartStyle.GRID);
