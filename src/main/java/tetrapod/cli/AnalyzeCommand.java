@@ -1,9 +1,11 @@
 package tetrapod.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.Set;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -14,6 +16,7 @@ import tetrapod.analysis.Analysis;
 import tetrapod.analysis.AnalysisResult;
 import tetrapod.io.DefaultedKeys;
 import tetrapod.io.JsonOutput;
+import tetrapod.io.OutputFolder;
 import tetrapod.io.ResultsReader;
 import tetrapod.io.SpecWriter;
 import tetrapod.report.CsvTables;
@@ -56,32 +59,27 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
+    /** Every file one run writes: an output folder is replaced by a set of exactly these (and what it held besides). */
+    static final Set<String> OUTPUTS = Set.of("results.json", CsvTables.MEMBERS, CsvTables.REACTIONS, CsvTables.WIND,
+            CsvTables.REQUIREMENTS, "tower.png", ReportHtml.FILE);
+
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
         StageTimes watch = new StageTimes();
         LoadedModel loaded = LoadedModel.read(model);
-        watch.end("read, generate, loads");
-        AnalysisResult result;
-        try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
-            result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
-                    StageTimes.both(progress, watch));
-        }
         Path folder = output != null ? output : OutputFolders.forModel(model);
-        Path resultsFile = folder.resolve("results.json");
-        JsonOutput.write(resultsFile, ResultsDocument.build(loaded.spec(), result,
-                DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec()))));
-        // everything else is built from the file just written, as 'tetrapod report' builds it
-        Results results = new Results(ResultsReader.read(resultsFile));
-        CsvTables.writeAll(results, folder);
-        watch.end("results.json, CSV");
-        ViewData view = ResultViews.of(result);
-        Path picture = folder.resolve("tower.png");
-        String route = RenderCommand.write(view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
-        watch.end("picture");
-        ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(java.nio.file.Files.readAllBytes(picture)),
-                SizingHistoryFile.matching(folder, results));
-        watch.end("report");
+        AnalysisResult result;
+        String route;
+        try (OutputFolder outputs = OutputFolder.open(folder, OUTPUTS)) {
+            watch.end("read, generate, loads");
+            try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
+                result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
+                        StageTimes.both(progress, watch));
+            }
+            route = write(loaded, result, outputs.staging(), watch);
+            outputs.commit();
+        }
 
         AnalysisSummary.print(out, result);
         out.println("tower.png " + route.replaceFirst("^render: ", "drawn by "));
@@ -93,5 +91,24 @@ final class AnalyzeCommand implements Callable<Integer> {
             watch.print(out);
         }
         return strict && result.maxUtilisation() > 1.0 ? ExitCode.OVERSTRESS : ExitCode.DONE;
+    }
+
+    /** Writes every output into {@code folder}; returns the line saying what drew tower.png. */
+    private String write(LoadedModel loaded, AnalysisResult result, Path folder, StageTimes watch) throws Exception {
+        Path resultsFile = folder.resolve("results.json");
+        JsonOutput.write(resultsFile, ResultsDocument.build(loaded.spec(), result,
+                DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec()))));
+        // everything else is built from the file just written, as 'tetrapod report' builds it
+        Results results = new Results(ResultsReader.read(resultsFile));
+        CsvTables.writeAll(results, folder);
+        watch.end("results.json, CSV");
+        ViewData view = ResultViews.of(result);
+        Path picture = folder.resolve("tower.png");
+        String route = RenderCommand.write(view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
+        watch.end("picture");
+        ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(Files.readAllBytes(picture)),
+                SizingHistoryFile.matching(folder, results));
+        watch.end("report");
+        return route;
     }
 }
