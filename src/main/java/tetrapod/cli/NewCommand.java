@@ -73,7 +73,7 @@ final class NewCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        out.print(SpecWriter.write(starter()));
+        SpecWriter.write(starter()).lines().forEach(out::println); // line by line: the writer escapes line breaks inside text
         out.flush();
         return ExitCode.DONE;
     }
