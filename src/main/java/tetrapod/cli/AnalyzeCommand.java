@@ -1,9 +1,11 @@
 package tetrapod.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.Set;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -16,6 +18,7 @@ import tetrapod.analysis.NaturalModes;
 import tetrapod.common.BadInputException;
 import tetrapod.io.DefaultedKeys;
 import tetrapod.io.JsonOutput;
+import tetrapod.io.OutputFolder;
 import tetrapod.io.ResultsReader;
 import tetrapod.io.SpecWriter;
 import tetrapod.report.CsvTables;
@@ -63,6 +66,10 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
+    /** Every file one run writes: an output folder is replaced by a set of exactly these (and what it held besides). */
+    static final Set<String> OUTPUTS = Set.of("results.json", CsvTables.MEMBERS, CsvTables.REACTIONS, CsvTables.WIND,
+            CsvTables.REQUIREMENTS, "tower.png", ReportHtml.FILE);
+
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
@@ -71,17 +78,37 @@ final class AnalyzeCommand implements Callable<Integer> {
             throw BadInputException.at("--modes", "must be at least 1, was " + modes);
         }
         LoadedModel loaded = LoadedModel.read(model);
-        watch.end("read, generate, loads");
-        AnalysisResult result;
-        try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
-            result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
-                    modes == null ? NaturalModes.DEFAULT_COUNT : modes, StageTimes.both(progress, watch));
-        }
-        if (modes != null && result.modes().size() < modes) {
-            throw BadInputException.at("--modes", "asked for " + modes + " modes; the structure has only "
-                    + result.modes().size() + " free translations that carry mass");
-        }
         Path folder = output != null ? output : OutputFolders.forModel(model);
+        AnalysisResult result;
+        String route;
+        try (OutputFolder outputs = OutputFolder.open(folder, OUTPUTS)) {
+            watch.end("read, generate, loads");
+            try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
+                result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
+                        modes == null ? NaturalModes.DEFAULT_COUNT : modes, StageTimes.both(progress, watch));
+            }
+            if (modes != null && result.modes().size() < modes) {
+                throw BadInputException.at("--modes", "asked for " + modes + " modes; the structure has only "
+                        + result.modes().size() + " free translations that carry mass");
+            }
+            route = write(loaded, result, outputs.staging(), watch);
+            outputs.commit();
+        }
+
+        AnalysisSummary.print(out, loaded.spec(), result);
+        out.println("tower.png " + route.replaceFirst("^render: ", "drawn by "));
+        out.println("results written to " + folder + ": results.json, " + CsvTables.MEMBERS + ", "
+                + CsvTables.REACTIONS + ", " + CsvTables.WIND + ", " + CsvTables.REQUIREMENTS + ", tower.png, " + ReportHtml.FILE);
+        if (timings) {
+            out.printf(Locale.ROOT, "timings (%d DOF, %d load cases, %d basis vectors):%n",
+                    result.model().freeDofCount(), result.caseCount(), result.responses().size());
+            watch.print(out);
+        }
+        return strict && result.maxUtilisation() > 1.0 ? ExitCode.OVERSTRESS : ExitCode.DONE;
+    }
+
+    /** Writes every output into {@code folder}; returns the line saying what drew tower.png. */
+    private String write(LoadedModel loaded, AnalysisResult result, Path folder, StageTimes watch) throws Exception {
         Path resultsFile = folder.resolve("results.json");
         ResultsDocument.Source source = new ResultsDocument.Source(model.getFileName().toString(),
                 tetrapod.io.Sha256.of(model), new Version().getVersion()[0]);
@@ -95,19 +122,9 @@ final class AnalyzeCommand implements Callable<Integer> {
         Path picture = folder.resolve("tower.png");
         String route = RenderCommand.write(view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
         watch.end("picture");
-        ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(java.nio.file.Files.readAllBytes(picture)),
+        ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(Files.readAllBytes(picture)),
                 SizingHistoryFile.matching(folder, results));
         watch.end("report");
-
-        AnalysisSummary.print(out, loaded.spec(), result);
-        out.println("tower.png " + route.replaceFirst("^render: ", "drawn by "));
-        out.println("results written to " + folder + ": results.json, " + CsvTables.MEMBERS + ", "
-                + CsvTables.REACTIONS + ", " + CsvTables.WIND + ", " + CsvTables.REQUIREMENTS + ", tower.png, " + ReportHtml.FILE);
-        if (timings) {
-            out.printf(Locale.ROOT, "timings (%d DOF, %d load cases, %d basis vectors):%n",
-                    result.model().freeDofCount(), result.caseCount(), result.responses().size());
-            watch.print(out);
-        }
-        return strict && result.maxUtilisation() > 1.0 ? ExitCode.OVERSTRESS : ExitCode.DONE;
+        return route;
     }
 }

@@ -15,6 +15,7 @@ import tetrapod.generate.ExplicitSpecs;
 import tetrapod.generate.SteelMass;
 import tetrapod.generate.Tower;
 import tetrapod.io.AtomicFiles;
+import tetrapod.io.OutputFiles;
 import tetrapod.io.SpecWriter;
 import tetrapod.model.Frame;
 import tetrapod.model.Member;
@@ -39,6 +40,8 @@ final class GeometryCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         LoadedModel loaded = LoadedModel.read(model);
+        Path target = output != null ? output : OutputFolders.forModel(model).resolve("frame.json");
+        OutputFiles.check(target);
         Tower tower = loaded.tower();
         Frame frame = tower.frame();
         PrintWriter out = spec.commandLine().getOut();
@@ -62,7 +65,6 @@ final class GeometryCommand implements Callable<Integer> {
         out.printf(Locale.ROOT, "  steel mass     %.1f kg bare; %.1f kg with the %.0f %% connection allowance%n",
                 tower.steelMass(), tower.steelMassWithAllowance(), 100 * tower.connectionAllowance());
 
-        Path target = output != null ? output : OutputFolders.forModel(model).resolve("frame.json");
         AtomicFiles.writeString(target, SpecWriter.write(ExplicitSpecs.asExplicit(loaded.spec(), frame)));
         out.println("  model written  " + target);
         return ExitCode.DONE;

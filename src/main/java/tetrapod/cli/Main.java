@@ -1,17 +1,17 @@
 package tetrapod.cli;
 
 import java.io.PrintWriter;
+import java.io.Writer;
+import java.nio.charset.Charset;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
-import tetrapod.common.BadInputException;
-import tetrapod.common.Problem;
-import tetrapod.common.UnstableStructureException;
 
 /** The {@code tetrapod} command: the only place that prints or exits. */
 @Command(name = "tetrapod", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Analysis and checking of four-leg steel lattice towers.%n"
                 + "Results must be checked by a qualified engineer against the codes that apply locally.",
+        footer = "%n" + ExitCode.HELP,
         subcommands = {AnalyzeCommand.class, SizeCommand.class, ValidateCommand.class, NewCommand.class,
                 GeometryCommand.class, RenderCommand.class, ViewCommand.class, ReportCommand.class,
                 CommandLine.HelpCommand.class})
@@ -34,42 +34,80 @@ public final class Main implements Runnable {
         if (System.getProperty("java.awt.headless") == null) {
             System.setProperty("java.awt.headless", "true");
         }
-        System.exit(commandLine().execute(args));
+        PrintWriter out = new PrintWriter(System.out, true, Charset.defaultCharset());
+        PrintWriter err = new PrintWriter(System.err, true, Charset.defaultCharset());
+        boolean debug = java.util.Arrays.asList(args).contains("--debug");
+        Thread.setDefaultUncaughtExceptionHandler((thread, e) -> Failures.report(e, SafePrintWriter.around(err), debug));
+        int code;
+        try {
+            code = commandLine(out, err).execute(args);
+        } catch (Throwable e) { // the last line: even an error while parsing the arguments gets its code and one line
+            code = Failures.report(e, SafePrintWriter.around(err), debug);
+        }
+        out.flush();
+        err.flush();
+        System.exit(code);
     }
 
-    /** The configured command line, for main and for tests (which set their own out and err). */
-    public static CommandLine commandLine() {
+    /**
+     * The configured command line writing to {@code out} and {@code err} through the escaping
+     * {@link SafePrintWriter}, for main and for tests.
+     */
+    public static CommandLine commandLine(Writer out, Writer err) {
+        SafePrintWriter safeOut = SafePrintWriter.around(out);
+        SafePrintWriter safeErr = SafePrintWriter.around(err);
         CommandLine cl = new CommandLine(new Main());
-        cl.setExecutionExceptionHandler(Main::handle);
+        cl.setOut(safeOut);
+        cl.setErr(safeErr);
+        cl.setExecutionExceptionHandler((ex, commandLine, parsed) -> Failures.report(ex, safeErr, debug(parsed)));
+        cl.setExecutionStrategy(parsed -> execute(cl, parsed, safeOut, safeErr));
         cl.setParameterExceptionHandler((ex, args) -> {
-            PrintWriter err = ex.getCommandLine().getErr();
-            err.println("tetrapod: " + ex.getMessage());
-            err.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help'.");
+            PrintWriter w = ex.getCommandLine().getErr();
+            w.println("tetrapod: " + ex.getMessage());
+            w.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help'.");
             return ExitCode.BAD_INPUT;
         });
         return cl;
     }
 
-    private static int handle(Exception ex, CommandLine cl, CommandLine.ParseResult parsed) {
-        PrintWriter err = cl.getErr();
-        if (ex instanceof BadInputException bad) {
-            for (Problem p : bad.problems()) {
-                err.println("error: " + p);
+    /** Runs the command; errors of the JVM (which picocli lets through) take the same exit path. */
+    private static int execute(CommandLine cl, CommandLine.ParseResult parsed, SafePrintWriter safeOut,
+                               SafePrintWriter safeErr) {
+        try {
+            if (!asksForHelp(parsed)) {
+                return new CommandLine.RunLast().execute(parsed);
             }
-            return ExitCode.BAD_INPUT;
+            // the help pages are the program's own multi-line text: written as they are
+            cl.setOut(safeOut.raw());
+            try {
+                return new CommandLine.RunLast().execute(parsed);
+            } finally {
+                cl.setOut(safeOut);
+            }
+        } catch (CommandLine.ExecutionException | CommandLine.ParameterException e) {
+            throw e;
+        } catch (Throwable e) {
+            return Failures.report(e, safeErr, debug(parsed));
         }
-        if (ex instanceof UnstableStructureException unstable) {
-            err.println("error: " + unstable.getMessage());
-            return ExitCode.UNSTABLE;
+    }
+
+    private static boolean asksForHelp(CommandLine.ParseResult parsed) {
+        for (CommandLine.ParseResult p = parsed; p != null; p = p.subcommand()) {
+            Object command = p.commandSpec().userObject();
+            if (p.isUsageHelpRequested() || p.isVersionHelpRequested() || command instanceof CommandLine.HelpCommand
+                    || (command instanceof Main && !p.hasSubcommand())) {
+                return true;
+            }
         }
-        err.println("internal error: " + ex);
-        boolean debug = parsed.hasMatchedOption("--debug")
-                || parsed.subcommands().stream().anyMatch(s -> s.hasMatchedOption("--debug"));
-        if (debug) {
-            ex.printStackTrace(err);
-        } else {
-            err.println("(run again with --debug for the stack trace; please report it)");
+        return false;
+    }
+
+    private static boolean debug(CommandLine.ParseResult parsed) {
+        for (CommandLine.ParseResult p = parsed; p != null; p = p.subcommand()) {
+            if (p.hasMatchedOption("--debug")) {
+                return true;
+            }
         }
-        return ExitCode.INTERNAL;
+        return false;
     }
 }

@@ -108,7 +108,7 @@ final class NewCommand implements Callable<Integer> {
                         + sized.outcome() + "); they are printed as starting values: run 'tetrapod size' on the file");
             }
         }
-        out.print(SpecWriter.write(starter));
+        SpecWriter.write(starter).lines().forEach(out::println); // line by line: the writer escapes line breaks inside text
         out.flush();
         return ExitCode.DONE;
     }

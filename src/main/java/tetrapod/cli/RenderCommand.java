@@ -10,6 +10,7 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
+import tetrapod.io.OutputFiles;
 import tetrapod.view.Picture;
 import tetrapod.view.PictureRenderer;
 import tetrapod.view.RenderRequest;
@@ -52,6 +53,7 @@ final class RenderCommand implements Callable<Integer> {
         int[] wh = ViewInputs.size(size, "--size");
         OptionalDouble az = azimuth == null ? OptionalDouble.empty() : OptionalDouble.of(azimuth);
         Path target = output != null ? output : OutputFolders.forModel(model).resolve("tower.png");
+        OutputFiles.check(target);
         // the OpenGL context comes up on its own thread while the model is read
         try (PictureRenderer renderer = PictureRenderer.start(RenderRequest.ALL_ROUTES)) {
             LoadedModel loaded = LoadedModel.read(model);

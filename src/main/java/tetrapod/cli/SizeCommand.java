@@ -19,6 +19,7 @@ import tetrapod.common.Problem;
 import tetrapod.common.ProgressListener;
 import tetrapod.common.Units;
 import tetrapod.io.JsonOutput;
+import tetrapod.io.OutputFiles;
 import tetrapod.io.SpecReader;
 import tetrapod.io.SpecWriter;
 import tetrapod.model.Role;
@@ -97,6 +98,10 @@ final class SizeCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         SizingOptions options = options();
         SizingModel sizingModel = SizingModel.of(SpecReader.read(model, SectionCatalogue.standard()));
+        Path sizedFile = output != null ? output : defaultOutput(model);
+        Path historyFile = (historyDir != null ? historyDir : OutputFolders.forModel(sizedFile)).resolve("size-history.json");
+        OutputFiles.check(sizedFile);
+        OutputFiles.check(historyFile);
         long t0 = System.nanoTime();
         SizingResult result = Sizer.size(sizingModel, options, ProgressListener.NONE);
         long nanos = System.nanoTime() - t0;
@@ -132,9 +137,7 @@ final class SizeCommand implements Callable<Integer> {
         out.printf(Locale.ROOT, "largest utilisation after sizing: %.3f (target %.3f); foundations are not sized: "
                 + "run analyze on the sized spec for them%n", result.maxUtilisationAfter(), options.target());
 
-        Path sizedFile = output != null ? output : defaultOutput(model);
         SpecWriter.write(sizedFile, result.sizedSpec().get());
-        Path historyFile = (historyDir != null ? historyDir : OutputFolders.forModel(sizedFile)).resolve("size-history.json");
         JsonOutput.write(historyFile, SizingHistory.document(sizingModel.spec().name(), result));
         out.println("sized spec written to " + sizedFile);
         out.println("history written to " + historyFile);
@@ -225,8 +228,6 @@ final class SizeCommand implements Callable<Integer> {
     }
 
     private static Path defaultOutput(Path model) {
-        String file = model.getFileName().toString();
-        String stem = file.endsWith(".json") ? file.substring(0, file.length() - 5) : file;
-        return OutputFolders.forModel(model).resolve(stem + "-sized.json");
+        return OutputFolders.forModel(model).resolve(OutputFolders.stem(model) + "-sized.json");
     }
 }

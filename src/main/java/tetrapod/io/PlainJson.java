@@ -23,9 +23,12 @@ public final class PlainJson {
 
     private PlainJson() { }
 
-    /** The file's JSON as plain values; a file that is missing, not UTF-8 or not JSON is bad input. */
+    /**
+     * The file's JSON as plain values; a file that is missing, no regular file, larger than
+     * {@link TextFiles#RESULTS_MAX_BYTES}, not UTF-8 or not JSON is bad input.
+     */
     public static Object read(Path file) throws BadInputException {
-        String text = TextFiles.readUtf8(file);
+        String text = TextFiles.readUtf8(file, TextFiles.RESULTS_MAX_BYTES, "JSON file");
         return parse(text);
     }
 

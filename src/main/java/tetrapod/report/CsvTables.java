@@ -18,7 +18,8 @@ import tetrapod.report.Rows.WindRow;
 /**
  * The tables for spreadsheets: members.csv, reactions.csv, wind.csv and requirements.csv. One header row whose
  * names carry the unit ({@code N_max_kN}), RFC 4180 quoting and CRLF line ends, numbers with a
- * point and no thousands separator, empty cells where a value does not apply.
+ * point and no thousands separator, empty cells where a value does not apply; a text cell that a
+ * spreadsheet would take for a formula starts with an apostrophe ({@link CsvText}).
  */
 public final class CsvTables {
 
@@ -60,8 +61,8 @@ public final class CsvTables {
         csv.printRecord(REQUIREMENT_HEADER);
         for (RequirementRow q : results.requirements()) {
             MemberRow m = results.member(q.member());
-            csv.printRecord(m.id(), m.role(), m.segment(), m.section(), q.ruleLabel(), fixed(q.ratio(), 4),
-                    q.met() ? "yes" : "no", q.clause(), q.note());
+            csv.printRecord(m.id(), text(m.role()), m.segment(), text(m.section()), text(q.ruleLabel()),
+                    fixed(q.ratio(), 4), q.met() ? "yes" : "no", text(q.clause()), text(q.note()));
         }
         csv.flush(); // not closed: the caller owns the stream
     }
@@ -75,11 +76,11 @@ public final class CsvTables {
         csv.printRecord(MEMBER_HEADER);
         for (CheckRow c : results.checks()) {
             MemberRow m = results.member(c.member());
-            csv.printRecord(m.id(), m.role(), m.segment(), m.panel(), m.face(), m.section(), fixed(m.length(), 4),
-                    kN(c.maxTension().value()), orEmpty(c.maxTension().caseId()),
-                    kN(-c.maxCompression().value()), orEmpty(c.maxCompression().caseId()),
-                    fixed(c.utilisation(), 4), c.mode(), c.clause(), orEmpty(results.combinationOf(c.caseId())),
-                    deg(c.azimuthDeg()), orEmpty(c.caseId()), c.note());
+            csv.printRecord(m.id(), text(m.role()), m.segment(), m.panel(), text(m.face()), text(m.section()),
+                    fixed(m.length(), 4), kN(c.maxTension().value()), text(c.maxTension().caseId()),
+                    kN(-c.maxCompression().value()), text(c.maxCompression().caseId()),
+                    fixed(c.utilisation(), 4), text(c.mode()), text(c.clause()), text(results.combinationOf(c.caseId())),
+                    deg(c.azimuthDeg()), text(c.caseId()), text(c.note()));
         }
         csv.flush(); // not closed: the caller owns the stream
     }
@@ -92,7 +93,7 @@ public final class CsvTables {
             List<Object> row = new ArrayList<>(List.of(l.node(), fixed(l.x(), 4), fixed(l.y(), 4)));
             for (Peak p : List.of(l.compression(), l.uplift(), l.shear())) {
                 row.add(p.occurs() ? kN(p.value()) : "");
-                row.add(orEmpty(results.combinationOf(p.caseId())));
+                row.add(text(results.combinationOf(p.caseId())));
                 row.add(p.occurs() ? deg(p.azimuthDeg()) : "");
             }
             csv.printRecord(row);
@@ -127,7 +128,8 @@ public final class CsvTables {
         return Format.fixed(v, decimals);
     }
 
-    private static String orEmpty(String s) {
-        return s == null ? "" : s;
+    /** A text cell: empty for null, formula characters at its start neutralised ({@link CsvText}). */
+    private static String text(String s) {
+        return CsvText.cell(s);
     }
 }

@@ -1,6 +1,5 @@
 package tetrapod.cli;
 
-import java.io.PrintWriter;
 import java.io.StringWriter;
 import picocli.CommandLine;
 
@@ -10,9 +9,7 @@ record CliRun(int exitCode, String out, String err) {
     static CliRun of(String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
-        CommandLine cl = Main.commandLine();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
+        CommandLine cl = Main.commandLine(out, err);
         int code = cl.execute(args);
         return new CliRun(code, out.toString(), err.toString());
     }

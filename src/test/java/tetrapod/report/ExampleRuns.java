@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
@@ -78,9 +77,7 @@ final class ExampleRuns {
     static Run cli(String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
-        CommandLine cl = Main.commandLine();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
+        CommandLine cl = Main.commandLine(out, err);
         int code = cl.execute(args);
         return new Run(code, out.toString(), err.toString());
     }
