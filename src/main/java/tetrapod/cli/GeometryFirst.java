@@ -53,6 +53,9 @@ final class GeometryFirst {
             }
             Map<Object, Object> geometry = new LinkedHashMap<>(root);
             NOT_GEOMETRY.forEach(geometry::remove);
+            if (!allFinite(geometry)) {
+                return List.of();   // a number beyond the double range: the reader has reported it
+            }
             spec = SpecReader.read(JsonOutput.toJson(geometry), SectionCatalogue.standard());
         } catch (BadInputException notApart) {
             return List.of();   // the geometry has reading problems of its own: already reported
@@ -64,5 +67,15 @@ final class GeometryFirst {
         } catch (BadInputException e) {
             return ProblemLines.located(file, e).problems();
         }
+    }
+
+    private static boolean allFinite(Object value) {
+        if (value instanceof Map<?, ?> map) {
+            return map.values().stream().allMatch(GeometryFirst::allFinite);
+        }
+        if (value instanceof List<?> list) {
+            return list.stream().allMatch(GeometryFirst::allFinite);
+        }
+        return !(value instanceof Double d) || Double.isFinite(d);
     }
 }

@@ -28,6 +28,7 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
         try {
             Tower tower = TowerGenerator.generate(spec, sections, material);
             TowerLoads loads = TowerLoads.build(tower, spec.loads());
+            WorkBudget.check(tower, loads);
             return new LoadedModel(file, spec, sections, material, tower, loads);
         } catch (BadInputException e) {
             // found after reading: the paths are known, the lines are looked up in the file

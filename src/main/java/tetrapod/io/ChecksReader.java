@@ -102,9 +102,9 @@ final class ChecksReader {
         int before = problems.count();
         f.allowOnly(FACTOR_KEYS);
         PartialFactors r = PartialFactors.RECOMMENDED;
-        double m0 = f.optionalNumber("gammaM0", Bound.POSITIVE, "", r.gammaM0());
-        double m1 = f.optionalNumber("gammaM1", Bound.POSITIVE, "", r.gammaM1());
-        double m2 = f.optionalNumber("gammaM2", Bound.POSITIVE, "", r.gammaM2());
+        double m0 = f.optionalNumber("gammaM0", PhysicalLimits.PARTIAL_FACTOR, "", r.gammaM0());
+        double m1 = f.optionalNumber("gammaM1", PhysicalLimits.PARTIAL_FACTOR, "", r.gammaM1());
+        double m2 = f.optionalNumber("gammaM2", PhysicalLimits.PARTIAL_FACTOR, "", r.gammaM2());
         return problems.count() == before ? new PartialFactors(m0, m1, m2) : null;
     }
 
@@ -138,8 +138,8 @@ final class ChecksReader {
         int before = problems.count();
         Role role = Choices.ROLE.required(f, "role");
         List<Integer> segments = segments(f);
-        double minor = f.optionalNumber("minorAxisFactor", Bound.POSITIVE, "", 1.0);
-        double geometric = f.optionalNumber("geometricAxisFactor", Bound.POSITIVE, "", 1.0);
+        double minor = f.optionalNumber("minorAxisFactor", PhysicalLimits.BUCKLING_FACTOR, "", 1.0);
+        double geometric = f.optionalNumber("geometricAxisFactor", PhysicalLimits.BUCKLING_FACTOR, "", 1.0);
         CrossingRule crossing = f.optionalChoice("crossing", "crossing rule", CROSSINGS, List.of(CrossingRule.values()),
                 CrossingRule.AUTO);
         if (problems.count() != before) {
@@ -155,12 +155,12 @@ final class ChecksReader {
         Integer bolts = f.requiredWhole("bolts", 1, 1000);
         double d = metricDiameter(f);
         BoltGrade grade = f.requiredChoice("grade", "bolt grade", GRADES, List.of(BoltGrade.values()));
-        double clearance = f.optionalNumber("holeClearance_mm", Bound.NON_NEGATIVE, "mm",
+        double clearance = f.optionalNumber("holeClearance_mm", PhysicalLimits.HOLE_CLEARANCE_MM, "mm",
                 Double.isNaN(d) ? 0 : ConnectionSpec.assumedHoleClearance(d));
         double d0 = (Double.isNaN(d) ? 0 : d) + (Double.isNaN(clearance) ? 0 : clearance);
-        double e1 = f.optionalNumber("endDistance_mm", Bound.POSITIVE, "mm", ConnectionSpec.ASSUMED_DISTANCE_PER_HOLE * d0);
-        double e2 = f.optionalNumber("edgeDistance_mm", Bound.POSITIVE, "mm", ConnectionSpec.ASSUMED_DISTANCE_PER_HOLE * d0);
-        double p1 = f.optionalNumber("pitch_mm", Bound.POSITIVE, "mm", ConnectionSpec.ASSUMED_PITCH_PER_HOLE * d0);
+        double e1 = f.optionalNumber("endDistance_mm", PhysicalLimits.BOLT_DISTANCE_MM, "mm", ConnectionSpec.ASSUMED_DISTANCE_PER_HOLE * d0);
+        double e2 = f.optionalNumber("edgeDistance_mm", PhysicalLimits.BOLT_DISTANCE_MM, "mm", ConnectionSpec.ASSUMED_DISTANCE_PER_HOLE * d0);
+        double p1 = f.optionalNumber("pitch_mm", PhysicalLimits.BOLT_DISTANCE_MM, "mm", ConnectionSpec.ASSUMED_PITCH_PER_HOLE * d0);
         Integer planes = f.optionalWhole("shearPlanes", 1, 2, 1);
         Boolean threads = f.optionalBool("threadsInShearPlane", true);
         Integer holes = f.optionalWhole("holesInSection", 0, 4, role == null ? 1 : ConnectionSpec.assumedHolesInSection(role));
@@ -174,7 +174,7 @@ final class ChecksReader {
 
     /** A bolt diameter that is a metric coarse size, mm; NaN (reported) otherwise. */
     private double metricDiameter(Fields f) {
-        double d = f.requiredNumber("diameter_mm", Bound.POSITIVE, "mm");
+        double d = f.requiredNumber("diameter_mm", PhysicalLimits.BOLT_DIAMETER_MM, "mm");
         if (Double.isNaN(d)) {
             return d;
         }
@@ -253,16 +253,16 @@ final class ChecksReader {
         Fields b = f.object("block", true);
         if (b != null) {
             b.allowOnly(BLOCK_KEYS);
-            double wx = b.requiredNumber("widthX", Bound.POSITIVE, "m");
-            double wy = b.requiredNumber("widthY", Bound.POSITIVE, "m");
-            double h = b.requiredNumber("height", Bound.POSITIVE, "m");
-            double depth = b.requiredNumber("depth", Bound.NON_NEGATIVE, "m");
+            double wx = b.requiredNumber("widthX", PhysicalLimits.BLOCK_SIZE, "m");
+            double wy = b.requiredNumber("widthY", PhysicalLimits.BLOCK_SIZE, "m");
+            double h = b.requiredNumber("height", PhysicalLimits.BLOCK_SIZE, "m");
+            double depth = b.requiredNumber("depth", PhysicalLimits.BLOCK_DEPTH, "m");
             if (problems.count() == before) {
                 block = new FoundationSpec.Block(wx, wy, h, depth);
             }
         }
-        double concrete = f.optionalNumber("concreteUnitWeight", Bound.POSITIVE, "kN/m³", DEFAULT_CONCRETE_UNIT_WEIGHT);
-        double soil = f.requiredNumber("soilUnitWeight", Bound.NON_NEGATIVE, "kN/m³");
+        double concrete = f.optionalNumber("concreteUnitWeight", PhysicalLimits.CONCRETE_UNIT_WEIGHT, "kN/m³", DEFAULT_CONCRETE_UNIT_WEIGHT);
+        double soil = f.requiredNumber("soilUnitWeight", PhysicalLimits.SOIL_UNIT_WEIGHT, "kN/m³");
         double angle = f.requiredNumber("frustumHalfAngle", HALF_ANGLE, "degrees");
         FoundationSpec.UpliftRule uplift = basis == DesignBasis.EN
                 ? new FoundationSpec.PartialFactor(DEFAULT_GAMMA_STABILISING)
@@ -271,9 +271,9 @@ final class ChecksReader {
         if (u != null) {
             uplift = uplift(u);
         }
-        double bearing = f.requiredNumber("allowableBearing", Bound.POSITIVE, "kPa");
-        double friction = f.requiredNumber("friction", Bound.POSITIVE, "");
-        double sliding = f.optionalNumber("slidingFactorOfSafety", Bound.POSITIVE, "", DEFAULT_FACTOR_OF_SAFETY);
+        double bearing = f.requiredNumber("allowableBearing", PhysicalLimits.BEARING, "kPa");
+        double friction = f.requiredNumber("friction", PhysicalLimits.FRICTION, "");
+        double sliding = f.optionalNumber("slidingFactorOfSafety", PhysicalLimits.FACTOR_OF_SAFETY, "", DEFAULT_FACTOR_OF_SAFETY);
         Fields r = f.object("anchorRods", false);
         FoundationSpec.AnchorRodSpec rods = r == null ? null : anchorRods(r);
         if (problems.count() != before) {
@@ -292,10 +292,10 @@ final class ChecksReader {
             return null;
         }
         if (fs) {
-            double v = u.requiredNumber("factorOfSafety", Bound.POSITIVE, "");
+            double v = u.requiredNumber("factorOfSafety", PhysicalLimits.FACTOR_OF_SAFETY, "");
             return Double.isNaN(v) ? null : new FoundationSpec.FactorOfSafety(v);
         }
-        double v = u.requiredNumber("gammaStabilising", Bound.POSITIVE, "");
+        double v = u.requiredNumber("gammaStabilising", PhysicalLimits.PARTIAL_FACTOR, "");
         return Double.isNaN(v) ? null : new FoundationSpec.PartialFactor(v);
     }
 
@@ -326,9 +326,9 @@ final class ChecksReader {
             BoltGrade grade = r.requiredChoice("grade", "anchor rod grade", ROD_GRADE_NAMES, ROD_GRADES);
             return problems.count() == before ? new FoundationSpec.RodsByGrade(count, d, grade) : null;
         }
-        double d = r.requiredNumber("diameter_mm", Bound.POSITIVE, "mm");
-        double tension = r.requiredNumber("allowableTension", Bound.POSITIVE, "MPa");
-        double shear = r.requiredNumber("allowableShear", Bound.POSITIVE, "MPa");
+        double d = r.requiredNumber("diameter_mm", PhysicalLimits.ROD_DIAMETER_MM, "mm");
+        double tension = r.requiredNumber("allowableTension", PhysicalLimits.ALLOWABLE_STRESS, "MPa");
+        double shear = r.requiredNumber("allowableShear", PhysicalLimits.ALLOWABLE_STRESS, "MPa");
         return problems.count() == before ? new FoundationSpec.RodsByAllowableStress(count, d, tension, shear) : null;
     }
 }

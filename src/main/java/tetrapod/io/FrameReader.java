@@ -68,6 +68,14 @@ final class FrameReader {
         if (array.isEmpty()) {
             problems.add(frame.path(key), "must list at least one " + what);
         }
+        int most = "members".equals(key) ? PhysicalLimits.MAX_FRAME_MEMBERS : PhysicalLimits.MAX_FRAME_NODES;
+        if (array.size() > most) {
+            problems.add(frame.path(key), "lists " + array.size() + " items; at most " + most + " are allowed");
+            if ("nodes".equals(key)) {
+                unreadableNodes.add(-1);
+            }
+            return List.of();
+        }
         List<T> items = new ArrayList<>();
         Map<Integer, String> idsSeen = new HashMap<>();
         for (int k = 0; k < array.size(); k++) {
@@ -98,9 +106,9 @@ final class FrameReader {
         int before = problems.count();
         f.allowOnly(NODE_KEYS);
         Integer id = id(f, idsSeen, "node");
-        double x = f.requiredNumber("x", Bound.ANY, "m");
-        double y = f.requiredNumber("y", Bound.ANY, "m");
-        double z = f.requiredNumber("z", Bound.ANY, "m");
+        double x = f.requiredNumber("x", PhysicalLimits.COORDINATE, "m");
+        double y = f.requiredNumber("y", PhysicalLimits.COORDINATE, "m");
+        double z = f.requiredNumber("z", PhysicalLimits.COORDINATE, "m");
         if (problems.count() > before) {
             return null;
         }
@@ -129,7 +137,7 @@ final class FrameReader {
         Role role = Choices.ROLE.optional(f, "role", Role.GENERAL);
         Boolean continuous = f.optionalBool("continuous", false);
         List<Double> orientation = f.has("orientation")
-                ? Values.numbers(f.get("orientation"), f.path("orientation"), Bound.ANY, "", problems)
+                ? Values.numbers(f.get("orientation"), f.path("orientation"), PhysicalLimits.ORIENTATION, "", problems)
                 : null;
         if (i != null && j != null) {
             checkGeometry(f, i, j, orientation);
@@ -158,6 +166,12 @@ final class FrameReader {
         Vec3 axis = b.minus(a);
         if (axis.norm() == 0) {
             problems.add(f.path(), "nodes " + i + " and " + j + " are at the same point: the member would have no length");
+            return;
+        }
+        if (axis.norm() < PhysicalLimits.MIN_MEMBER_LENGTH) {
+            problems.add(f.path(), "nodes " + i + " and " + j + " are " + Numbers.format(Math.round(axis.norm() * 1e6) / 1e3)
+                    + " mm apart; a member must be at least " + Numbers.format(PhysicalLimits.MIN_MEMBER_LENGTH * 1000)
+                    + " mm long");
             return;
         }
         if (orientation == null) {

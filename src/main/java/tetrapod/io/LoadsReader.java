@@ -89,7 +89,7 @@ final class LoadsReader {
     LoadsSpec read(Fields loads, IntPredicate nodeExists, Tower tower, DesignBasis basis) {
         int before = problems.count();
         loads.allowOnly(LOADS_KEYS);
-        JsonNode nodal = loads.array("nodal", false);
+        JsonNode nodal = tooMany(loads.array("nodal", false), loads.path("nodal"), PhysicalLimits.MAX_NODAL_LOADS);
         List<NodalLoadSpec> list = new ArrayList<>();
         if (nodal != null) {
             for (int k = 0; k < nodal.size(); k++) {
@@ -113,12 +113,14 @@ final class LoadsReader {
         } else {
             Fields windFields = loads.object("wind", false);
             wind = windFields == null ? null : wind(windFields);
-            JsonNode items = loads.array("ancillaries", false);
+            JsonNode items = tooMany(loads.array("ancillaries", false), loads.path("ancillaries"),
+                    PhysicalLimits.MAX_ANCILLARIES);
             ancillaries = items == null ? List.of() : ancillaries(items, loads.path("ancillaries"), tower.height());
             Fields iceFields = loads.object("ice", false);
             ice = iceFields == null ? null : ice(iceFields, loads.has("wind") ? windMethod(loads.get("wind")) : null);
         }
-        JsonNode combos = loads.array("combinations", false);
+        JsonNode combos = tooMany(loads.array("combinations", false), loads.path("combinations"),
+                PhysicalLimits.MAX_COMBINATIONS);
         List<CombinationSpec> combinations = combos == null ? List.of()
                 : combinations(combos, loads.path("combinations"), loads.has("wind") && tower.generated(),
                         loads.has("ice") && tower.generated());
@@ -127,6 +129,15 @@ final class LoadsReader {
         return problems.count() == before
                 ? new LoadsSpec(list, wind, ancillaries, ice, combinations, step, factors)
                 : null;
+    }
+
+    /** The array, or null (reported) when it lists more than {@code most} items. */
+    private JsonNode tooMany(JsonNode array, String path, int most) {
+        if (array != null && array.size() > most) {
+            problems.add(path, "lists " + array.size() + " items; at most " + most + " are allowed");
+            return null;
+        }
+        return array;
     }
 
     /** {@code actionFactors} (default: the basis's) and {@code reliabilityClass} (EN 1993-3-1 only, default 2). */
@@ -164,7 +175,8 @@ final class LoadsReader {
                         + array.size() + " values");
             } else {
                 for (int k = 0; k < array.size(); k++) {
-                    c[k] = Values.number(array.get(k), JsonPaths.index(path, k), Bound.ANY, k < 3 ? "kN" : "kN·m", problems);
+                    c[k] = Values.number(array.get(k), JsonPaths.index(path, k), PhysicalLimits.NODAL_FORCE,
+                            k < 3 ? "kN" : "kN·m", problems);
                 }
             }
         }
@@ -313,25 +325,25 @@ final class LoadsReader {
         Face where = face == null ? Face.NONE : face;
         String label = name == null ? "" : name;
         if (kind.equals("point")) {
-            double height = f.requiredNumber("height", Bound.NON_NEGATIVE, "m");
+            double height = f.requiredNumber("height", PhysicalLimits.HEIGHT_ON_TOWER, "m");
             aboveTop(f, "height", height, towerHeight);
-            double weight = f.requiredNumber("weight", Bound.NON_NEGATIVE, "kN");
-            double area = f.requiredNumber("area", Bound.NON_NEGATIVE, "m²");
+            double weight = f.requiredNumber("weight", PhysicalLimits.ANCILLARY_WEIGHT, "kN");
+            double area = f.requiredNumber("area", PhysicalLimits.ANCILLARY_AREA, "m²");
             double cf = f.requiredNumber("forceCoefficient", new Bound(0, false, 5, true), "");
             double shielding = f.optionalNumber("shielding", SHIELDING, "", 0.0);
             return problems.count() == before
                     ? new AncillarySpec.Point(label, height, weight, area, cf, shielding, where)
                     : null;
         }
-        double from = f.requiredNumber("from", Bound.NON_NEGATIVE, "m");
-        double to = f.requiredNumber("to", Bound.POSITIVE, "m");
+        double from = f.requiredNumber("from", PhysicalLimits.HEIGHT_ON_TOWER, "m");
+        double to = f.requiredNumber("to", PhysicalLimits.HEIGHT_ON_TOWER, "m");
         if (to <= from) {
             problems.add(f.path("to"), "must be above from (" + Numbers.format(from) + " m), was " + Numbers.shown(f.get("to")));
         } else {
             aboveTop(f, "to", to, towerHeight);
         }
-        double weight = f.requiredNumber("weight", Bound.NON_NEGATIVE, "kN/m");
-        double width = f.requiredNumber("width", Bound.NON_NEGATIVE, "m");
+        double weight = f.requiredNumber("weight", PhysicalLimits.LINEAR_WEIGHT, "kN/m");
+        double width = f.requiredNumber("width", PhysicalLimits.LINEAR_WIDTH, "m");
         double cf = f.requiredNumber("forceCoefficient", new Bound(0, false, 5, true), "");
         double shielding = f.optionalNumber("shielding", SHIELDING, "", 0.0);
         return problems.count() == before

@@ -27,11 +27,18 @@ final class MaterialReader {
         int before = problems.count();
         f.allowOnly(KEYS);
         String name = f.requiredText("name");
-        double e = f.requiredNumber("E", Bound.POSITIVE, "MPa");
-        double g = f.requiredNumber("G", Bound.POSITIVE, "MPa");
-        double fy = f.requiredNumber("fy", Bound.POSITIVE, "MPa");
-        double fu = f.requiredNumber("fu", Bound.POSITIVE, "MPa");
-        double density = f.requiredNumber("density", Bound.POSITIVE, "kg/m³");
+        double e = f.requiredNumber("E", PhysicalLimits.YOUNGS_MODULUS, "MPa");
+        double g = f.requiredNumber("G", PhysicalLimits.SHEAR_MODULUS, "MPa");
+        double fy = f.requiredNumber("fy", PhysicalLimits.STRENGTH, "MPa");
+        double fu = f.requiredNumber("fu", PhysicalLimits.STRENGTH, "MPa");
+        double density = f.requiredNumber("density", PhysicalLimits.DENSITY, "kg/m³");
+        double poisson = e / (2 * g) - 1;
+        if (poisson < PhysicalLimits.MIN_POISSON || poisson > PhysicalLimits.MAX_POISSON) {
+            // isotropic elasticity: G = E / 2(1 + ν), and 0 ≤ ν ≤ 0.5 for a metal
+            problems.add(f.path("G"), "gives Poisson's ratio E/2G − 1 = " + Numbers.format(Math.round(poisson * 1000) / 1000.0)
+                    + " with E = " + Numbers.format(e) + " MPa; G must lie from E/3 to E/2 ("
+                    + Numbers.format(Math.round(e / 3)) + " to " + Numbers.format(Math.round(e / 2)) + " MPa)");
+        }
         if (fu < fy) {
             problems.add(f.path("fu"), "must not be less than fy (" + Numbers.format(fy) + " MPa), was " + Numbers.format(fu));
         }

@@ -49,6 +49,11 @@ final class SegmentReader {
             problems.add(path, "must list at least one segment");
             return null;
         }
+        if (array.size() > PhysicalLimits.MAX_SEGMENTS) {
+            problems.add(path, "lists " + array.size() + " segments; at most " + PhysicalLimits.MAX_SEGMENTS
+                    + " are allowed (give a segment more panels instead)");
+            return null;
+        }
         int before = problems.count();
         List<SegmentSpec> segments = new ArrayList<>();
         double bottomX = base == null ? Double.NaN : base.widthX();
@@ -68,20 +73,45 @@ final class SegmentReader {
             bottomX = segment == null ? Double.NaN : segment.topWidthX();
             bottomY = segment == null ? Double.NaN : segment.topWidthY();
         }
+        if (problems.count() == before) {
+            wholeTower(segments, path);
+        }
         return problems.count() == before ? segments : null;
+    }
+
+    /** Limits on the sum of the segments: the tower's height and its number of panels. */
+    private void wholeTower(List<SegmentSpec> segments, String path) {
+        double height = segments.stream().mapToDouble(SegmentSpec::height).sum();
+        if (height > PhysicalLimits.MAX_TOWER_HEIGHT) {
+            problems.add(path, "the segments add up to a tower " + Numbers.format(height) + " m high; at most "
+                    + Numbers.format(PhysicalLimits.MAX_TOWER_HEIGHT) + " m is allowed");
+        }
+        long panels = segments.stream().mapToLong(SegmentSpec::panels).sum();
+        if (panels > PhysicalLimits.MAX_PANELS) {
+            problems.add(path, "the segments have " + panels + " panels in all; at most " + PhysicalLimits.MAX_PANELS
+                    + " are allowed (about " + PhysicalLimits.MAX_PANELS * 24 + " degrees of freedom)");
+        }
     }
 
     private SegmentSpec segment(Fields f, double bottomX, double bottomY, String above) {
         int before = problems.count();
         f.allowOnly(SEGMENT_KEYS);
-        double height = f.requiredNumber("height", Bound.POSITIVE, "m");
+        double height = f.requiredNumber("height", PhysicalLimits.SEGMENT_HEIGHT, "m");
         String meet = above.isEmpty()
                 ? "the four legs would meet in a point at the top; give the top a width"
                 : "the four legs would meet in a point at this level, and " + above + " above stands on it";
         double topX = width(f, "topWidthX", bottomX, meet);
         double topY = width(f, "topWidthY", bottomY, meet);
-        Integer panels = f.requiredWhole("panels", 1, Integer.MAX_VALUE);
+        legSlope(f, "topWidthX", bottomX, topX, height);
+        legSlope(f, "topWidthY", bottomY, topY, height);
+        Integer panels = f.requiredWhole("panels", 1, PhysicalLimits.MAX_PANELS);
         List<Double> panelHeights = panelHeights(f, height, panels);
+        if (panels != null && panelHeights != null && panelHeights.isEmpty()
+                && height / panels < PhysicalLimits.MIN_PANEL_HEIGHT) {
+            problems.add(f.path("panels"), panels + " equal panels in " + Numbers.format(height) + " m are "
+                    + Numbers.format(roundMm(height / panels)) + " m high; a panel must be at least "
+                    + Numbers.format(PhysicalLimits.MIN_PANEL_HEIGHT) + " m high");
+        }
         Bracing bracing = Choices.BRACING.required(f, "bracing");
         Horizontals horizontals = Choices.HORIZONTALS.optional(f, "horizontals", Horizontals.ALL);
         Boolean crossingConnected = f.optionalBool("crossingConnected", true);
@@ -94,7 +124,18 @@ final class SegmentReader {
                 crossingConnected, redundants, sections);
     }
 
-    /** A leg spacing > 0 m; required when {@code byDefault} is null. */
+    /** A leg may lean at most {@link PhysicalLimits#MAX_LEG_LEAN_DEGREES} from the vertical in a face. */
+    private void legSlope(Fields f, String key, double bottom, double top, double height) {
+        double lean = Math.toDegrees(Math.atan(Math.abs(top - bottom) / 2 / height));
+        if (lean > PhysicalLimits.MAX_LEG_LEAN_DEGREES) {
+            problems.add(f.has(key) ? f.path(key) : f.path("height"), "the legs go from " + Numbers.format(bottom)
+                    + " m to " + Numbers.format(top) + " m apart in " + Numbers.format(height) + " m of height, leaning "
+                    + Numbers.format(Math.round(lean * 10) / 10.0) + "° from the vertical; at most "
+                    + Numbers.format(PhysicalLimits.MAX_LEG_LEAN_DEGREES) + "° is allowed");
+        }
+    }
+
+    /** A leg spacing in {@link PhysicalLimits#LEG_SPACING}; required when {@code byDefault} is null. */
     private double width(Fields f, String key, Double byDefault, String whyZeroIsWrong) {
         if (!f.has(key)) {
             if (byDefault == null) {
@@ -108,8 +149,9 @@ final class SegmentReader {
             problems.add(f.path(key), "must be > 0 m, was " + Numbers.shown(f.get(key)) + ": " + whyZeroIsWrong);
             return Double.NaN;
         }
-        if (value < 0) {
-            problems.add(f.path(key), "must be > 0 m, was " + Numbers.shown(f.get(key)));
+        if (!Double.isNaN(value) && !PhysicalLimits.LEG_SPACING.contains(value)) {
+            problems.add(f.path(key), "must be " + PhysicalLimits.LEG_SPACING.describe("m") + ", was "
+                    + Numbers.shown(f.get(key)));
             return Double.NaN;
         }
         return value;
@@ -120,7 +162,7 @@ final class SegmentReader {
             return List.of();
         }
         String path = f.path("panelHeights");
-        List<Double> heights = Values.numbers(f.get("panelHeights"), path, Bound.POSITIVE, "m", problems);
+        List<Double> heights = Values.numbers(f.get("panelHeights"), path, PhysicalLimits.PANEL_HEIGHT, "m", problems);
         if (heights == null || panels == null) {
             return null;
         }

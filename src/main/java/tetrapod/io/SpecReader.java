@@ -18,6 +18,7 @@ import tetrapod.model.spec.DesignBasis;
 import tetrapod.model.spec.ExplicitFrameSpec;
 import tetrapod.model.spec.ChecksSpec;
 import tetrapod.model.spec.LoadsSpec;
+import tetrapod.model.spec.LoadsSpec.NodalLoadSpec;
 import tetrapod.model.spec.MaterialSpec;
 import tetrapod.model.spec.ProjectSpec;
 import tetrapod.model.spec.SegmentSpec;
@@ -108,7 +109,7 @@ public final class SpecReader {
                 supports = Choices.SUPPORT_TYPE.optional(root, "supports", SupportType.PINNED);
                 planLevels = root.has("planBracingLevels")
                         ? Values.numbers(root.get("planBracingLevels"), root.path("planBracingLevels"),
-                                Bound.NON_NEGATIVE, "m", problems)
+                                PhysicalLimits.HEIGHT_ON_TOWER, "m", problems)
                         : List.of();
             } else {
                 for (String key : List.of("supports", "planBracingLevels")) {
@@ -136,6 +137,9 @@ public final class SpecReader {
                     : new ChecksReader(problems, segmentCount, readingBasis).read(checkFields);
 
             ProjectSpec project = ProjectReader.read(root.object("project", false));
+            if (idealisation == Idealisation.TRUSS && loads != null) {
+                noMomentsOnATruss(loads.nodal());
+            }
             if (problems.count() > 0) {
                 return null;
             }
@@ -145,6 +149,18 @@ public final class SpecReader {
                 refuseMixes(spec, basisGiven);
             }
             return spec;
+        }
+
+        /** A truss has no rotations: a nodal moment would have nothing to carry it. */
+        private void noMomentsOnATruss(List<NodalLoadSpec> nodal) {
+            for (int k = 0; k < nodal.size(); k++) {
+                NodalLoadSpec f = nodal.get(k);
+                if (f.mx() != 0 || f.my() != 0 || f.mz() != 0) {
+                    problems.add("loads.nodal[" + k + "].F", "applies a moment at node " + f.node() + ", but the truss"
+                            + " idealisation has no rotations to carry it: give [Fx, Fy, Fz], or choose idealisation"
+                            + " frame or continuous-legs");
+                }
+            }
         }
 
         /** The basis of a model without the basis key: the family of its wind method, else of its check method. */

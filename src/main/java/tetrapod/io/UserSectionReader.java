@@ -77,11 +77,11 @@ final class UserSectionReader {
     private UserSectionSpec angle(Fields f) {
         int before = problems.count();
         f.allowOnly(ANGLE_KEYS);
-        double legA = f.requiredNumber("legA_mm", Bound.POSITIVE, "mm");
-        double legB = f.requiredNumber("legB_mm", Bound.POSITIVE, "mm");
-        double t = f.requiredNumber("t_mm", Bound.POSITIVE, "mm");
-        double r1 = f.requiredNumber("r1_mm", Bound.NON_NEGATIVE, "mm");
-        double r2 = f.requiredNumber("r2_mm", Bound.NON_NEGATIVE, "mm");
+        double legA = f.requiredNumber("legA_mm", PhysicalLimits.SECTION_MM, "mm");
+        double legB = f.requiredNumber("legB_mm", PhysicalLimits.SECTION_MM, "mm");
+        double t = f.requiredNumber("t_mm", PhysicalLimits.SECTION_MM, "mm");
+        double r1 = f.requiredNumber("r1_mm", PhysicalLimits.RADIUS_MM, "mm");
+        double r2 = f.requiredNumber("r2_mm", PhysicalLimits.RADIUS_MM, "mm");
         if (legB > legA) {
             problems.add(f.path("legB_mm"), "must not exceed legA_mm (" + Numbers.format(legA)
                     + " mm): give the longer leg as legA_mm");
@@ -96,8 +96,8 @@ final class UserSectionReader {
     private UserSectionSpec tube(Fields f) {
         int before = problems.count();
         f.allowOnly(TUBE_KEYS);
-        double d = f.requiredNumber("d_mm", Bound.POSITIVE, "mm");
-        double t = f.requiredNumber("t_mm", Bound.POSITIVE, "mm");
+        double d = f.requiredNumber("d_mm", PhysicalLimits.SECTION_MM, "mm");
+        double t = f.requiredNumber("t_mm", PhysicalLimits.SECTION_MM, "mm");
         if (t > d / 2) {
             problems.add(f.path("t_mm"), "must not exceed half the diameter (" + Numbers.format(d / 2)
                     + " mm), was " + Numbers.format(t));
@@ -108,14 +108,14 @@ final class UserSectionReader {
     private UserSectionSpec properties(Fields f) {
         int before = problems.count();
         f.allowOnly(PROPERTY_KEYS);
-        double area = f.requiredNumber("A_cm2", Bound.POSITIVE, "cm²");
-        double iy = f.requiredNumber("Iy_cm4", Bound.POSITIVE, "cm⁴");
-        double iz = f.requiredNumber("Iz_cm4", Bound.POSITIVE, "cm⁴");
-        double iv = f.requiredNumber("Iv_cm4", Bound.POSITIVE, "cm⁴");
-        double torsion = f.requiredNumber("J_cm4", Bound.POSITIVE, "cm⁴");
-        double width = f.requiredNumber("width_mm", Bound.POSITIVE, "mm");
+        double area = f.requiredNumber("A_cm2", PhysicalLimits.AREA_CM2, "cm²");
+        double iy = f.requiredNumber("Iy_cm4", PhysicalLimits.SECOND_MOMENT_CM4, "cm⁴");
+        double iz = f.requiredNumber("Iz_cm4", PhysicalLimits.SECOND_MOMENT_CM4, "cm⁴");
+        double iv = f.requiredNumber("Iv_cm4", PhysicalLimits.SECOND_MOMENT_CM4, "cm⁴");
+        double torsion = f.requiredNumber("J_cm4", PhysicalLimits.SECOND_MOMENT_CM4, "cm⁴");
+        double width = f.requiredNumber("width_mm", PhysicalLimits.SECTION_MM, "mm");
         Boolean flatSided = f.requiredBool("flatSided");
-        double mass = f.optionalNumber("mass_kg_per_m", Bound.POSITIVE, "kg/m", Double.NaN);
+        double mass = f.optionalNumber("mass_kg_per_m", PhysicalLimits.MASS_PER_LENGTH, "kg/m", Double.NaN);
         // The minor principal second moment is the least about any centroidal axis (Mohr's circle).
         if (iv > Math.min(iy, iz) * (1 + ROUNDING)) {
             problems.add(f.path("Iv_cm4"), "the minor principal value cannot exceed Iy_cm4 or Iz_cm4 ("

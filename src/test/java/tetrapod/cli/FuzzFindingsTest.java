@@ -9,7 +9,6 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 import java.util.stream.Stream;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.DynamicTest;
 import org.junit.jupiter.api.TestFactory;
 import org.junit.jupiter.api.io.TempDir;
@@ -17,8 +16,7 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * Every input the fuzz test ever found breaking the exit contract, kept as a file in
  * {@code src/test/resources/fuzz/findings/} ({@code validate-…} replayed through validate,
- * {@code analyze-…} through analyze). A file that {@link KnownFindings} lists is skipped with the
- * reason while it still breaks the contract, and fails once it keeps it, so that its entry is removed.
+ * {@code analyze-…} through analyze).
  */
 class FuzzFindingsTest {
 
@@ -43,11 +41,6 @@ class FuzzFindingsTest {
         CliRun run = name.startsWith("analyze-") ? CliRun.of("analyze", file.toString(), "-o", out.toString(), "--quiet")
                 : CliRun.of("validate", file.toString());
         Optional<String> broken = ExitContract.violation(run, out);
-        Optional<KnownFindings.Known> known = KnownFindings.listing(name);
-        if (known.isPresent()) {
-            assertTrue(broken.isPresent(), name + " keeps the contract now: remove it from KnownFindings." + known.get().id());
-            Assumptions.abort("known, issue 13 item 1 (" + known.get().id() + "): " + known.get().reason() + "; " + broken.get());
-        }
         assertTrue(broken.isEmpty(), name + ": " + broken.orElse(""));
     }
 }

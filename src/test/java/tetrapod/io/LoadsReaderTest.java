@@ -92,7 +92,7 @@ class LoadsReaderTest {
                 "loads.wind.terrain: unknown terrain category 'ii'; expected one of 0, I, II, III, IV; write it 'II'",
                 "loads.wind.airDensity: must be > 0 kg/m³ and ≤ 2 kg/m³, was 12",
                 "loads.ancillaries[0].height: is above the tower top (12 m), was 20",
-                "loads.ancillaries[0].weight: must be ≥ 0 kN, was -1",
+                "loads.ancillaries[0].weight: must be ≥ 0 kN and ≤ 10000 kN, was -1",
                 "loads.ancillaries[1].name: name 'x' is already used by loads.ancillaries[0]",
                 "loads.ancillaries[1].to: must be above from (5 m), was 3",
                 "loads.ancillaries[1].height: is a key of kind 'point', not of 'linear'; 'linear' takes name, from, to,"

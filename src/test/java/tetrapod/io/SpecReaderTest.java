@@ -169,7 +169,7 @@ class SpecReaderTest {
                 """;
         List<Problem> problems = problems(json);
         assertEquals(List.of(
-                new Problem("base.widthY", 3, "must be > 0 m, was -4.0"),
+                new Problem("base.widthY", 3, "must be ≥ 0.1 m and ≤ 200 m, was -4.0"),
                 new Problem("segments[0].bracing", 6, "unknown bracing 'w'; expected one of x, k, single"),
                 new Problem("connectionAllowance", 9, "must be ≥ 0 and < 1, was -0.1")), problems);
     }
