@@ -23,9 +23,9 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
         } catch (BadInputException e) {
             throw GeometryFirst.withGeometry(file, e);
         }
-        SectionCatalogue sections = SectionCatalogue.standard().with(spec.userSections());
-        Material material = SteelGrades.fromSpec(spec.material());
         try {
+            SectionCatalogue sections = SectionCatalogue.standard().with(spec.userSections());
+            Material material = SteelGrades.fromSpec(spec.material());
             Tower tower = TowerGenerator.generate(spec, sections, material);
             TowerLoads loads = TowerLoads.build(tower, spec.loads());
             WorkBudget.check(tower, loads);

@@ -50,20 +50,24 @@ final class JsonLocations {
     static JsonLocations parse(String text) throws BadInputException {
         Builder builder = new Builder();
         try (JsonParser parser = FACTORY.createParser(text)) {
-            JsonToken first = parser.nextToken();
-            if (first == null) {
-                throw new BadInputException(new Problem(JsonPaths.ROOT, 1, "the file is empty; expected a JSON object"));
+            try {
+                JsonToken first = parser.nextToken();
+                if (first == null) {
+                    throw new BadInputException(new Problem(JsonPaths.ROOT, 1, "the file is empty; expected a JSON object"));
+                }
+                JsonNode root = builder.value(parser, JsonPaths.ROOT, true);
+                if (parser.nextToken() != null) {
+                    throw new BadInputException(new Problem(JsonPaths.ROOT, line(parser),
+                            "malformed JSON: more text after the end of the top-level value"));
+                }
+                return new JsonLocations(root, builder.lines, builder.duplicates);
+            } catch (JsonProcessingException e) {
+                // a limit of the parser (nesting depth, text length) carries no location: the parser's own is used
+                int line = e.getLocation() != null && e.getLocation().getLineNr() > 0 ? e.getLocation().getLineNr()
+                        : line(parser);
+                throw new BadInputException(new Problem(JsonPaths.ROOT, Math.max(line, 0),
+                        "malformed JSON: " + MalformedJson.describe(e.getOriginalMessage())));
             }
-            JsonNode root = builder.value(parser, JsonPaths.ROOT, true);
-            if (parser.nextToken() != null) {
-                throw new BadInputException(new Problem(JsonPaths.ROOT, line(parser),
-                        "malformed JSON: more text after the end of the top-level value"));
-            }
-            return new JsonLocations(root, builder.lines, builder.duplicates);
-        } catch (JsonProcessingException e) {
-            int line = e.getLocation() == null ? 0 : e.getLocation().getLineNr();
-            throw new BadInputException(new Problem(JsonPaths.ROOT, Math.max(line, 0),
-                    "malformed JSON: " + MalformedJson.describe(e.getOriginalMessage())));
         } catch (IOException e) {
             // reading from a String cannot fail for any other reason
             throw new IllegalStateException(e);

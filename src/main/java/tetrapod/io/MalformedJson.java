@@ -11,6 +11,8 @@ final class MalformedJson {
     private static final Pattern SOURCE = Pattern.compile("\\s*\\(?(start marker )?at \\[Source:.*?\\]\\)?", Pattern.DOTALL);
     private static final Pattern VALUE_LIST = Pattern.compile("\\(?JSON String, Number.*'false'\\)?");
     private static final Pattern CODE = Pattern.compile(" \\(code \\d+[^)]*\\)");
+    private static final Pattern DEPTH = Pattern.compile("Document nesting depth \\((\\d+)\\) exceeds the maximum allowed \\((\\d+).*");
+    private static final Pattern LENGTH = Pattern.compile("(String value|Number value) length \\((\\d+)\\) exceeds the maximum allowed \\((\\d+).*");
     private static final Pattern TOKEN = Pattern.compile("Unrecognized token '(.*?)'.*", Pattern.DOTALL);
 
     private MalformedJson() { }
@@ -21,6 +23,15 @@ final class MalformedJson {
         }
         String text = SOURCE.matcher(parserMessage).replaceAll("");
         text = text.lines().findFirst().orElse("").strip();
+        Matcher depth = DEPTH.matcher(text);
+        if (depth.matches()) {
+            return "arrays and objects nested " + depth.group(1) + " deep; at most " + depth.group(2) + " levels are read";
+        }
+        Matcher length = LENGTH.matcher(text);
+        if (length.matches()) {
+            return (length.group(1).startsWith("String") ? "a text" : "a number") + " of " + length.group(2)
+                    + " characters; at most " + length.group(3) + " are read";
+        }
         Matcher token = TOKEN.matcher(text);
         if (token.matches()) {
             return "unrecognised word '" + token.group(1)

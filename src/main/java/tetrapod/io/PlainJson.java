@@ -37,7 +37,8 @@ public final class PlainJson {
         try {
             return MAPPER.readValue(json, Object.class);
         } catch (JsonProcessingException e) {
-            throw new BadInputException(Problem.at("$", MalformedJson.describe(e.getOriginalMessage())));
+            int line = e.getLocation() == null ? 0 : Math.max(e.getLocation().getLineNr(), 0);
+            throw new BadInputException(new Problem("$", line, MalformedJson.describe(e.getOriginalMessage())));
         }
     }
 }

@@ -177,7 +177,7 @@ class ExitPathTest {
         assertTrue(help.out().lines().count() > 10, help.out());
         assertFalse(help.out().contains("\\n"), help.out());
         for (String code : List.of("0 done", "1 overstressed", "2 bad input", "3 unstable", "4 internal", "5 an output",
-                "6 out of memory")) {
+                "6 bad environment", "7 out of memory")) {
             assertTrue(help.out().replaceAll("\\s+", " ").contains(code), code + " missing from " + help.out());
         }
         CliRun sub = CliRun.of("help", "analyze");

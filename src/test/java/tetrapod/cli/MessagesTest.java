@@ -36,6 +36,25 @@ class MessagesTest {
         assertTrue(second.err().contains("(line " + itemLine + ")"), "expected line " + itemLine + ":\n" + second.err());
     }
 
+    /** Issue 13: an unknown grade and a parser limit carry their lines too. */
+    @Test
+    void anUnknownGradeAndTooDeepNestingHaveTheirLines(@TempDir Path dir) throws Exception {
+        String text = Files.readString(RIDGE).replaceFirst("\"material\": \"S355\"", "\"material\": \"S999\"");
+        Path grade = dir.resolve("grade.json");
+        Files.writeString(grade, text);
+        CliRun run = CliRun.of("validate", grade.toString());
+        assertEquals(ExitCode.BAD_INPUT, run.exitCode(), run.out() + run.err());
+        assertTrue(run.err().contains("material: unknown steel grade 'S999'")
+                && run.err().contains("(line " + lineOf(text, "\"S999\"") + ")"), run.err());
+
+        Path deep = dir.resolve("deep.json");
+        Files.writeString(deep, "{ \"name\": \"x\",\n \"a\": " + "[".repeat(1500) + "]".repeat(1500) + " }");
+        CliRun nested = CliRun.of("validate", deep.toString());
+        assertEquals(ExitCode.BAD_INPUT, nested.exitCode());
+        assertEquals("error: $: malformed JSON: arrays and objects nested 1001 deep; at most 1000 levels are read (line 2)",
+                nested.err().strip());
+    }
+
     /** A typo in the wind and a geometry problem: both reported in one run, each with its line. */
     @Test
     void aGeometryProblemIsReportedBesideAReadingProblemOfTheLoads(@TempDir Path dir) throws Exception {
