@@ -203,7 +203,7 @@ final class LoadsReader {
                 TerrainCategory terrain = Choices.TERRAIN.required(f, "terrain");
                 List<Double> cdir = directionFactors(f);
                 double season = f.optionalNumber("seasonFactor", FRACTION_TO_ONE, "", 1.0);
-                double orography = f.optionalNumber("orography", new Bound(0, false, 3, true), "", 1.0);
+                double orography = f.optionalNumber("orography", PhysicalLimits.OROGRAPHY, "", 1.0);
                 double structural = f.optionalNumber("structuralFactor", upToTwo, "", 1.0);
                 double turbulence = f.optionalNumber("turbulenceFactor", upToTwo, "", 1.0);
                 double density = f.optionalNumber("airDensity", upToTwo, "kg/m³", WindSpec.En1991.DEFAULT_AIR_DENSITY);

@@ -89,6 +89,11 @@ final class PhysicalLimits {
 
     /** A nodal force component, kN, or moment, kN·m: 100 MN is beyond any load on a tower. */
     static final Bound NODAL_FORCE = closed(-100_000, 100_000);
+    /**
+     * The orography factor c_o of EN 1991-1-4 4.3.3, dimensionless: 1 on flat ground and above 1
+     * on hills (Annex A.3); the turbulence intensity divides by it (4.4), so it may not approach 0.
+     */
+    static final Bound OROGRAPHY = closed(0.5, 3);
     /** An ancillary's weight, kN (a 1,000 t item). */
     static final Bound ANCILLARY_WEIGHT = closed(0, 10_000);
     /** An ancillary's projected area, m². */
