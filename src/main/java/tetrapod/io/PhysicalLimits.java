@@ -127,6 +127,6 @@ final class PhysicalLimits {
     static final Bound SOIL_UNIT_WEIGHT = closed(0, 30);
     /** An allowable bearing pressure, kPa. */
     static final Bound BEARING = closed(1, 10_000);
-    /** A friction coefficient between footing and soil, dimensionless. */
-    static final Bound FRICTION = new Bound(0, false, 2, true);
+    /** A friction coefficient between footing and soil, dimensionless (the sliding check divides by it). */
+    static final Bound FRICTION = closed(0.05, 2);
 }

@@ -97,7 +97,7 @@ class PhysicalLimitsTest {
                 Arguments.of(RIDGE, "/loads/ancillaries/0/area", 1.7e308, "must be ≥ 0 m² and ≤ 1000 m²"),
                 Arguments.of(Path.of("models/hilltop-relay-k.json"), "/checks/foundation/anchorRods/allowableTension",
                         1e-308, "must be ≥ 1 MPa and ≤ 2000 MPa"),
-                Arguments.of(RIDGE, "/checks/foundation/friction", 0, "must be > 0 and ≤ 2"));
+                Arguments.of(RIDGE, "/checks/foundation/friction", 0, "must be ≥ 0.05 and ≤ 2"));
     }
 
     @ParameterizedTest(name = "{1} = {2}")
