@@ -26,6 +26,7 @@ import tetrapod.report.ReportHtml;
 import tetrapod.report.SizingHistoryFile;
 import tetrapod.report.Results;
 import tetrapod.report.ResultsDocument;
+import tetrapod.view.PictureRenderer;
 import tetrapod.view.RenderRequest;
 import tetrapod.view.ViewData;
 
@@ -59,7 +60,7 @@ final class AnalyzeCommand implements Callable<Integer> {
     boolean quiet;
 
     @Option(names = "--modes", paramLabel = "N",
-            description = "Natural modes to compute, at least 1 (default: 6, or fewer when the structure has fewer "
+            description = "Natural modes to compute, at least 1 (default: 12, or fewer when the structure has fewer "
                     + "free translations that carry mass).")
     Integer modes;
 
@@ -81,7 +82,10 @@ final class AnalyzeCommand implements Callable<Integer> {
         Path folder = output != null ? output : OutputFolders.forModel(model);
         AnalysisResult result;
         String route;
-        try (OutputFolder outputs = OutputFolder.open(folder, OUTPUTS)) {
+        // the OpenGL context comes up on its own thread while the analysis runs (issue 15: 2 s of llvmpipe start-up)
+        try (PictureRenderer pictures = PictureRenderer.start(RenderRequest.ALL_ROUTES);
+             OutputFolder outputs = OutputFolder.open(folder, OUTPUTS)) {
+            pictures.prepare(PICTURE_WIDTH, PICTURE_HEIGHT);
             watch.end("read, generate, loads");
             try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
                 result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
@@ -91,7 +95,7 @@ final class AnalyzeCommand implements Callable<Integer> {
                 throw BadInputException.at("--modes", "asked for " + modes + " modes; the structure has only "
                         + result.modes().size() + " free translations that carry mass");
             }
-            route = write(loaded, result, outputs.staging(), watch);
+            route = write(loaded, result, outputs.staging(), watch, pictures);
             outputs.commit();
         }
 
@@ -108,7 +112,8 @@ final class AnalyzeCommand implements Callable<Integer> {
     }
 
     /** Writes every output into {@code folder}; returns the line saying what drew tower.png. */
-    private String write(LoadedModel loaded, AnalysisResult result, Path folder, StageTimes watch) throws Exception {
+    private String write(LoadedModel loaded, AnalysisResult result, Path folder, StageTimes watch, PictureRenderer pictures)
+            throws Exception {
         Path resultsFile = folder.resolve("results.json");
         ResultsDocument.Source source = new ResultsDocument.Source(model.getFileName().toString(),
                 tetrapod.io.Sha256.of(model), new Version().getVersion()[0]);
@@ -120,7 +125,7 @@ final class AnalyzeCommand implements Callable<Integer> {
         watch.end("results.json, CSV");
         ViewData view = ResultViews.of(result).withAncillaries(ResultViews.ancillaries(loaded.spec()));
         Path picture = folder.resolve("tower.png");
-        String route = RenderCommand.write(view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
+        String route = RenderCommand.write(pictures, view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
         watch.end("picture");
         ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(Files.readAllBytes(picture)),
                 SizingHistoryFile.matching(folder, results));

@@ -74,7 +74,15 @@ final class RenderCommand implements Callable<Integer> {
      * For `analyze`, which writes tower.png from its results the same way.
      */
     static String write(ViewData data, RenderRequest request, Path file) throws IOException {
-        Picture picture = PictureRenderer.render(data, request);
+        return written(PictureRenderer.render(data, request), file);
+    }
+
+    /** As {@link #write(ViewData, RenderRequest, Path)}, by a renderer started before (its routes are used). */
+    static String write(PictureRenderer renderer, ViewData data, RenderRequest request, Path file) throws IOException {
+        return written(renderer.draw(data, request), file);
+    }
+
+    private static String written(Picture picture, Path file) throws IOException {
         ViewInputs.writePng(picture.image(), file);
         return picture.routeLine();
     }
