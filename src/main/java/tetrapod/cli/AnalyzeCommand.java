@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
@@ -19,7 +20,6 @@ import tetrapod.common.BadInputException;
 import tetrapod.io.DefaultedKeys;
 import tetrapod.io.JsonOutput;
 import tetrapod.io.OutputFolder;
-import tetrapod.io.ResultsReader;
 import tetrapod.io.SpecWriter;
 import tetrapod.report.CsvTables;
 import tetrapod.report.ReportHtml;
@@ -111,16 +111,22 @@ final class AnalyzeCommand implements Callable<Integer> {
         return strict && result.maxUtilisation() > 1.0 ? ExitCode.OVERSTRESS : ExitCode.DONE;
     }
 
+    @SuppressWarnings("unchecked")
+    private static Map<String, Object> plainDocument(Map<String, Object> document) {
+        return (Map<String, Object>) JsonOutput.plain(document);
+    }
+
     /** Writes every output into {@code folder}; returns the line saying what drew tower.png. */
     private String write(LoadedModel loaded, AnalysisResult result, Path folder, StageTimes watch, PictureRenderer pictures)
             throws Exception {
         Path resultsFile = folder.resolve("results.json");
         ResultsDocument.Source source = new ResultsDocument.Source(model.getFileName().toString(),
                 tetrapod.io.Sha256.of(model), new Version().getVersion()[0]);
-        JsonOutput.write(resultsFile, ResultsDocument.build(loaded.spec(), result,
-                DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec())), source));
-        // everything else is built from the file just written, as 'tetrapod report' builds it
-        Results results = new Results(ResultsReader.read(resultsFile));
+        Map<String, Object> document = ResultsDocument.build(loaded.spec(), result,
+                DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec())), source);
+        JsonOutput.write(resultsFile, document);
+        // everything else is built from what the file holds, as 'tetrapod report' builds it from the file
+        Results results = new Results(plainDocument(document));
         CsvTables.writeAll(results, folder);
         watch.end("results.json, CSV");
         ViewData view = ResultViews.of(result).withAncillaries(ResultViews.ancillaries(loaded.spec()));

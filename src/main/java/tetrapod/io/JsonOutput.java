@@ -66,6 +66,46 @@ public final class JsonOutput {
         AtomicFiles.writeText(file, out -> write(out, value));
     }
 
+    /**
+     * The value as {@link PlainJson} would read back what {@link #write} writes of it, without the
+     * text: maps in their written order with text keys, lists, text, booleans, null, whole numbers as
+     * {@code Integer}, {@code Long} or {@code BigInteger} by size, and other numbers as the
+     * {@code Double} their written digits parse to. Refuses what {@link #write} refuses.
+     */
+    public static Object plain(Object value) {
+        return plain(value, "$");
+    }
+
+    private static Object plain(Object value, String path) {
+        Object v = normalise(value, path);
+        if (v instanceof List<?> list) {
+            List<Object> out = new ArrayList<>(list.size());
+            for (int k = 0; k < list.size(); k++) {
+                out.add(plain(list.get(k), path));
+            }
+            return out;
+        }
+        if (v instanceof Map<?, ?> map) {
+            Map<String, Object> out = new LinkedHashMap<>();
+            for (Map.Entry<?, ?> e : map.entrySet()) {
+                out.put(String.valueOf(e.getKey()), plain(e.getValue(), path));
+            }
+            return out;
+        }
+        if (v == null || v instanceof String || v instanceof Boolean) {
+            return v;
+        }
+        String text = scalar(v, path);
+        if (v instanceof Double || v instanceof Float || !text.matches("-?\\d+")) {
+            return Double.parseDouble(text);
+        }
+        BigInteger whole = new BigInteger(text);
+        if (whole.bitLength() < Integer.SIZE) {
+            return whole.intValue();
+        }
+        return whole.bitLength() < Long.SIZE ? (Object) whole.longValue() : whole;
+    }
+
     /** Walks the value once, writing as it goes. */
     private record Printer(Writer out) {
 
