@@ -56,7 +56,7 @@ public final class JsonOutput {
 
     /** Writes the value as JSON text, ending with a newline. */
     public static void write(Writer out, Object value) throws IOException {
-        new Printer(out).value(value, "$", 0);
+        new Printer(out).value(value, Where.ROOT, 0);
         out.write('\n');
         out.flush();
     }
@@ -73,10 +73,10 @@ public final class JsonOutput {
      * {@code Double} their written digits parse to. Refuses what {@link #write} refuses.
      */
     public static Object plain(Object value) {
-        return plain(value, "$");
+        return plain(value, Where.ROOT);
     }
 
-    private static Object plain(Object value, String path) {
+    private static Object plain(Object value, Where path) {
         Object v = normalise(value, path);
         if (v instanceof List<?> list) {
             List<Object> out = new ArrayList<>(list.size());
@@ -106,10 +106,34 @@ public final class JsonOutput {
         return whole.bitLength() < Long.SIZE ? (Object) whole.longValue() : whole;
     }
 
+    /**
+     * Where a value is in the document, for messages only: built as a chain of small objects and
+     * spelt out ({@code $.cases[3].name}) only when something cannot be written.
+     */
+    private record Where(Where parent, Object key, int index) {
+        static final Where ROOT = new Where(null, null, -1);
+
+        Where at(int k) {
+            return new Where(this, null, k);
+        }
+
+        Where key(Object k) {
+            return new Where(this, k, -1);
+        }
+
+        @Override
+        public String toString() {
+            if (parent == null) {
+                return "$";
+            }
+            return parent + (key != null ? "." + key : "[" + index + "]");
+        }
+    }
+
     /** Walks the value once, writing as it goes. */
     private record Printer(Writer out) {
 
-        void value(Object value, String path, int depth) throws IOException {
+        void value(Object value, Where path, int depth) throws IOException {
             Object v = normalise(value, path);
             if (v instanceof List<?> list) {
                 list(list, path, depth);
@@ -120,7 +144,7 @@ public final class JsonOutput {
             }
         }
 
-        private void list(List<?> list, String path, int depth) throws IOException {
+        private void list(List<?> list, Where path, int depth) throws IOException {
             String inline = inline(list, path);
             if (inline != null) {
                 out.write(inline);
@@ -129,14 +153,14 @@ public final class JsonOutput {
             out.write("[\n");
             for (int k = 0; k < list.size(); k++) {
                 indent(depth + 1);
-                value(list.get(k), path + "[" + k + "]", depth + 1);
+                value(list.get(k), path.at(k), depth + 1);
                 out.write(k + 1 < list.size() ? ",\n" : "\n");
             }
             indent(depth);
             out.write("]");
         }
 
-        private void object(Map<?, ?> map, String path, int depth) throws IOException {
+        private void object(Map<?, ?> map, Where path, int depth) throws IOException {
             String inline = depth == 0 ? null : inline(map, path);
             if (inline != null) {
                 out.write(inline);
@@ -152,7 +176,7 @@ public final class JsonOutput {
                 indent(depth + 1);
                 out.write(quote(String.valueOf(e.getKey())));
                 out.write(": ");
-                value(e.getValue(), path + "." + e.getKey(), depth + 1);
+                value(e.getValue(), path.key(e.getKey()), depth + 1);
                 out.write(++k < map.size() ? ",\n" : "\n");
             }
             indent(depth);
@@ -167,7 +191,7 @@ public final class JsonOutput {
     }
 
     /** The one-line form when every member is a scalar or an array of scalars and it is short; else null. */
-    private static String inline(Object container, String path) {
+    private static String inline(Object container, Where path) {
         StringBuilder line = new StringBuilder();
         if (!appendInline(line, container, path, true) || line.length() > INLINE_WIDTH) {
             return null;
@@ -175,7 +199,7 @@ public final class JsonOutput {
         return line.toString();
     }
 
-    private static boolean appendInline(StringBuilder line, Object value, String path, boolean outer) {
+    private static boolean appendInline(StringBuilder line, Object value, Where path, boolean outer) {
         Object v = normalise(value, path);
         if (v instanceof List<?> list) {
             line.append('[');
@@ -187,7 +211,7 @@ public final class JsonOutput {
                 if (k > 0) {
                     line.append(", ");
                 }
-                if (!appendInline(line, item, path + "[" + k + "]", false) || line.length() > INLINE_WIDTH) {
+                if (!appendInline(line, item, path.at(k), false) || line.length() > INLINE_WIDTH) {
                     return false;
                 }
             }
@@ -213,7 +237,7 @@ public final class JsonOutput {
                 if (item instanceof Map<?, ?>) {
                     return false;
                 }
-                if (!appendInline(line, item, path + "." + e.getKey(), item instanceof List<?>)
+                if (!appendInline(line, item, path.key(e.getKey()), item instanceof List<?>)
                         || line.length() > INLINE_WIDTH) {
                     return false;
                 }
@@ -226,7 +250,7 @@ public final class JsonOutput {
     }
 
     /** Arrays and collections become lists, unordered maps sorted maps; anything else unchanged. */
-    private static Object normalise(Object value, String path) {
+    private static Object normalise(Object value, Where path) {
         if (value == null) {
             return null;
         }
@@ -263,7 +287,7 @@ public final class JsonOutput {
         return value;
     }
 
-    private static String scalar(Object v, String path) {
+    private static String scalar(Object v, Where path) {
         if (v == null) {
             return "null";
         }
