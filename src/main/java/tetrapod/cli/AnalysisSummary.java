@@ -35,12 +35,14 @@ final class AnalysisSummary {
 
     private AnalysisSummary() { }
 
-    static void print(PrintWriter out, TowerSpec spec, AnalysisResult r) {
+    static void print(PrintWriter out, TowerSpec spec, AnalysisResult r,
+                      java.util.Optional<tetrapod.load.En1991StructuralFactor> computed) {
         Frame frame = r.tower().frame();
         out.printf(Locale.ROOT, "%s: %s, %d nodes, %d members; %d load cases (%d combinations, sweep step %s deg)%n",
                 frame.name(), frame.idealisation().jsonName(), frame.nodes().size(), frame.members().size(),
                 r.caseCount(), r.loads().combinations().size(), CaseKey.degrees(r.loads().sweepStep()));
         basis(out, spec);
+        structuralFactor(out, spec, computed);
         if (!r.model().autoRestraints().isEmpty()) {
             double largest = r.autoRestraints().stream().mapToDouble(AutoRestraintPeak::force).max().orElse(0);
             out.printf(Locale.ROOT, "auto-restrained: %d directions where the lattice model has no stiffness; none "
@@ -125,6 +127,22 @@ final class AnalysisSummary {
             }
         }
         return out;
+    }
+
+    private static void structuralFactor(PrintWriter out, TowerSpec spec,
+                                         java.util.Optional<tetrapod.load.En1991StructuralFactor> computed) {
+        if (!(spec.loads().wind() instanceof tetrapod.model.spec.WindSpec.En1991 en)) {
+            return;
+        }
+        if (computed.isPresent()) {
+            tetrapod.load.En1991StructuralFactor f = computed.get();
+            out.printf(Locale.ROOT, "wind: c_s·c_d = %.3f computed from the tower (EN 1991-1-4 Annex B: first sway "
+                    + "%.2f Hz, δ = %.2f, B² = %.3f, R² = %.3f, k_p = %.2f)%n", f.value(), f.frequency(), f.logDecrement(),
+                    f.background(), f.resonant(), f.peakFactor());
+        } else {
+            out.printf(Locale.ROOT, "wind: c_s·c_d = %.3f as given in the model (loads.wind.structuralFactor)%n",
+                    en.structuralFactor());
+        }
     }
 
     private static void basis(PrintWriter out, TowerSpec spec) {

@@ -1,22 +1,49 @@
 package tetrapod.cli;
 
 import java.nio.file.Path;
+import java.util.Optional;
+import tetrapod.analysis.ComputedStructuralFactor;
 import tetrapod.common.BadInputException;
+import tetrapod.common.UnstableStructureException;
 import tetrapod.generate.Tower;
 import tetrapod.generate.TowerGenerator;
 import tetrapod.io.ProblemLines;
 import tetrapod.io.SpecReader;
+import tetrapod.load.En1991StructuralFactor;
 import tetrapod.load.TowerLoads;
 import tetrapod.model.Material;
 import tetrapod.model.spec.TowerSpec;
+import tetrapod.model.spec.WindSpec;
 import tetrapod.section.SectionCatalogue;
 import tetrapod.section.SteelGrades;
 
-/** A model file read, its sections and material resolved, its tower built and its loads formed. */
+/**
+ * A model file read, its sections and material resolved, its tower built and its loads formed.
+ *
+ * @param spec             the model as read, with c_s·c_d filled in where it is computed
+ * @param structuralFactor how c_s·c_d was computed from the tower, when it was
+ */
 record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Material material, Tower tower,
-                   TowerLoads loads) {
+                   TowerLoads loads, Optional<En1991StructuralFactor> structuralFactor) {
 
-    static LoadedModel read(Path file) throws BadInputException {
+    /** The model ready to analyse: an EN wind without a given c_s·c_d gets the one computed from the tower. */
+    static LoadedModel read(Path file) throws BadInputException, UnstableStructureException {
+        return load(file, true);
+    }
+
+    /**
+     * The model checked without solving anything (validate, geometry): a c_s·c_d still to be
+     * computed is taken as 1 here, for forming the loads only; their values are not used.
+     */
+    static LoadedModel checked(Path file) throws BadInputException {
+        try {
+            return load(file, false);
+        } catch (UnstableStructureException e) {
+            throw new IllegalStateException("nothing is solved when a model is only checked", e);
+        }
+    }
+
+    private static LoadedModel load(Path file, boolean resolve) throws BadInputException, UnstableStructureException {
         TowerSpec spec;
         try {
             spec = SpecReader.read(file, SectionCatalogue.standard());
@@ -27,12 +54,29 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
             SectionCatalogue sections = SectionCatalogue.standard().with(spec.userSections());
             Material material = SteelGrades.fromSpec(spec.material());
             Tower tower = TowerGenerator.generate(spec, sections, material);
+            Optional<En1991StructuralFactor> factor = Optional.empty();
+            if (resolve) {
+                WorkBudget.check(tower, TowerLoads.build(tower, unitFactor(spec).loads()));
+                ComputedStructuralFactor.Resolved resolved = ComputedStructuralFactor.resolve(spec, tower);
+                spec = resolved.spec();
+                factor = resolved.factor();
+            } else {
+                spec = unitFactor(spec);
+            }
             TowerLoads loads = TowerLoads.build(tower, spec.loads());
             WorkBudget.check(tower, loads);
-            return new LoadedModel(file, spec, sections, material, tower, loads);
+            return new LoadedModel(file, spec, sections, material, tower, loads, factor);
         } catch (BadInputException e) {
             // found after reading: the paths are known, the lines are looked up in the file
             throw ProblemLines.located(file, e);
         }
+    }
+
+    /** The spec with a c_s·c_d still to be computed taken as 1. */
+    private static TowerSpec unitFactor(TowerSpec spec) {
+        if (spec.loads().wind() instanceof WindSpec.En1991 en && en.structuralFactorComputed()) {
+            return spec.withLoads(spec.loads().withWind(en.withStructuralFactor(1.0)));
+        }
+        return spec;
     }
 }

@@ -204,7 +204,8 @@ final class LoadsReader {
                 List<Double> cdir = directionFactors(f);
                 double season = f.optionalNumber("seasonFactor", FRACTION_TO_ONE, "", 1.0);
                 double orography = f.optionalNumber("orography", PhysicalLimits.OROGRAPHY, "", 1.0);
-                double structural = f.optionalNumber("structuralFactor", upToTwo, "", 1.0);
+                // absent: computed from the tower's first sway frequency (EN 1991-1-4 Annex B)
+                double structural = f.optionalNumber("structuralFactor", upToTwo, "", Double.NaN);
                 double turbulence = f.optionalNumber("turbulenceFactor", upToTwo, "", 1.0);
                 double density = f.optionalNumber("airDensity", upToTwo, "kg/m³", WindSpec.En1991.DEFAULT_AIR_DENSITY);
                 return problems.count() == before

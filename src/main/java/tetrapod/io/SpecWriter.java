@@ -337,7 +337,9 @@ public final class SpecWriter {
             }
             m.put("seasonFactor", en.seasonFactor());
             m.put("orography", en.orography());
-            m.put("structuralFactor", en.structuralFactor());
+            if (!en.structuralFactorComputed()) {
+                m.put("structuralFactor", en.structuralFactor());
+            }
             m.put("turbulenceFactor", en.turbulenceFactor());
             m.put("airDensity", en.airDensity());
         } else if (wind instanceof WindSpec.Asce7 a) {

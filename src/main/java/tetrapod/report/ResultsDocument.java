@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.TreeMap;
 import tetrapod.analysis.AnalysisResult;
 import tetrapod.analysis.AutoRestraintPeak;
@@ -46,6 +47,8 @@ import tetrapod.solve.NodeDisplacement;
 import tetrapod.model.NodeForce;
 import tetrapod.solve.Solution;
 import tetrapod.solve.StructuralModel;
+import tetrapod.load.En1991StructuralFactor;
+import tetrapod.model.spec.WindSpec;
 
 /**
  * results.json as ordered plain values (the machine contract of DESIGN.md and
@@ -86,6 +89,12 @@ public final class ResultsDocument {
     /** The document for {@code result} of {@code spec}, with its {@code source} when given (else none). */
     public static Map<String, Object> build(TowerSpec spec, AnalysisResult result, List<String> defaulted,
                                             Source source) {
+        return build(spec, result, defaulted, source, Optional.empty());
+    }
+
+    /** As above, with how c_s·c_d was computed from the tower when it was. */
+    public static Map<String, Object> build(TowerSpec spec, AnalysisResult result, List<String> defaulted,
+                                            Source source, Optional<En1991StructuralFactor> computed) {
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("format", FORMAT);
         if (source != null) {
@@ -95,6 +104,9 @@ public final class ResultsDocument {
         doc.put("basis", basis(spec));
         doc.put("model", model(result.model(), result.autoRestraints()));
         doc.put("cases", result.cases().stream().map(ResultsDocument::solvedCase).toList());
+        if (spec.loads().wind() instanceof WindSpec.En1991 en) {
+            doc.put("structuralFactor", structuralFactor(en, computed));
+        }
         doc.put("wind", result.wind().stream().map(ResultsDocument::wind).toList());
         doc.put("sweep", sweep(result));
         doc.put("checks", result.members().stream().map(ResultsDocument::memberCheck).toList());
@@ -522,5 +534,28 @@ public final class ResultsDocument {
     /** −0.0 written as 0.0, so that equal results give equal text. */
     private static double clean(double v) {
         return v == 0 ? 0.0 : v;
+    }
+
+    /** c_s·c_d as used: given by the user, or computed by EN 1991-1-4 Annex B with its steps. */
+    private static Map<String, Object> structuralFactor(WindSpec.En1991 en, Optional<En1991StructuralFactor> computed) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("value", computed.map(En1991StructuralFactor::value).orElse(en.structuralFactor()));
+        m.put("source", computed.isPresent() ? "computed" : "given");
+        computed.ifPresent(f -> {
+            m.put("method", "EN 1991-1-4 6.3.1 (6.2) with Annex B");
+            m.put("frequencyHz", f.frequency());
+            m.put("logDecrement", f.logDecrement());
+            m.put("height", f.height());
+            m.put("width", f.width());
+            m.put("referenceHeight", f.referenceHeight());
+            m.put("turbulenceIntensity", f.turbulence());
+            m.put("meanVelocity", f.meanVelocity());
+            m.put("lengthScale", f.lengthScale());
+            m.put("background", f.background());
+            m.put("resonant", f.resonant());
+            m.put("upCrossingHz", f.upCrossing());
+            m.put("peakFactor", f.peakFactor());
+        });
+        return m;
     }
 }

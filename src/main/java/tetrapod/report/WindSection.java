@@ -33,6 +33,7 @@ final class WindSection implements Section {
                 + "reference height (the centroid of its projected member area); its force is the response factor × q "
                 + "× the force coefficient cf × the projected member area, along the wind, shared among the eight leg "
                 + "nodes of the panel. Ancillaries carry their own wind (not in this table).");
+        structuralFactor(out, Tree.mapOrEmpty(r.document(), "structuralFactor"));
         Charts.pressureProfile(r).ifPresent(f -> ReportHtml.figure(out, f));
 
         WindRow first = wind.get(0);
@@ -68,6 +69,29 @@ final class WindSection implements Section {
         }
         t.row(total);
         t.writeTo(out);
+    }
+
+    /** The response factor c_s·c_d of an EN wind: as given, or computed with its steps (EN 1991-1-4 Annex B). */
+    private static void structuralFactor(Html out, Map<String, Object> f) {
+        if (f.isEmpty()) {
+            return;
+        }
+        double value = Tree.num(f, "value");
+        if (!"computed".equals(Tree.str(f, "source"))) {
+            out.p("Structural factor c_s·c_d = " + Format.fixed(value, 3) + ", as the model gives it (not computed).");
+            return;
+        }
+        out.p("Structural factor c_s·c_d = " + Format.fixed(value, 3) + ", computed from the tower by EN 1991-1-4 "
+                + "6.3.1 (6.2) and Annex B: first sway frequency n₁ = " + Format.fixed(Tree.num(f, "frequencyHz"), 2)
+                + " Hz (of the natural modes below), logarithmic decrement δ = " + Format.fixed(Tree.num(f, "logDecrement"), 2)
+                + " (the lowest of EN 1991-1-4 Table F.2 for lattice steel towers, without aerodynamic damping: both on the"
+                + " safe side), h = " + Format.metres(Tree.num(f, "height")) + " m, b = "
+                + Format.metres(Tree.num(f, "width")) + " m at z_s = " + Format.metres(Tree.num(f, "referenceHeight"))
+                + " m, I_v(z_s) = " + Format.fixed(Tree.num(f, "turbulenceIntensity"), 3) + ", v_m(z_s) = "
+                + Format.fixed(Tree.num(f, "meanVelocity"), 1) + " m/s, L(z_s) = " + Format.fixed(Tree.num(f, "lengthScale"), 1)
+                + " m, B² = " + Format.fixed(Tree.num(f, "background"), 3) + ", R² = " + Format.fixed(Tree.num(f, "resonant"), 3)
+                + ", ν = " + Format.fixed(Tree.num(f, "upCrossingHz"), 3) + " Hz, k_p = "
+                + Format.fixed(Tree.num(f, "peakFactor"), 2) + ". A structural factor given in the model's wind replaces it.");
     }
 
     static String methodName(String method) {

@@ -79,6 +79,11 @@ public record TowerSpec(String name, String description, Idealisation idealisati
     }
 
     /** The values of this model that belong to the other family than its basis (warnings when allowed). */
+    public TowerSpec withLoads(LoadsSpec l) {
+        return new TowerSpec(name, description, idealisation, base, segments, material, supports, connectionAllowance,
+                planBracingLevels, userSections, frame, l, checks, basis, mixedBasis, project);
+    }
+
     public List<BasisMix> basisMixes() {
         return BasisMixes.of(this);
     }

@@ -19,7 +19,8 @@ public sealed interface WindSpec permits WindSpec.En1991, WindSpec.Asce7, WindSp
      *                         towards); empty for c_dir = 1 in every direction
      * @param seasonFactor     c_season
      * @param orography        orography factor c0
-     * @param structuralFactor c_s·c_d
+     * @param structuralFactor c_s·c_d as the user gave it, or NaN when it is to be computed from the
+     *                         tower's first sway frequency (EN 1991-1-4 §6.3.1, Annex B)
      * @param turbulenceFactor k_I
      * @param airDensity       ρ, kg/m³
      */
@@ -37,6 +38,16 @@ public sealed interface WindSpec permits WindSpec.En1991, WindSpec.Asce7, WindSp
         @Override
         public String method() {
             return "en1991";
+        }
+
+        /** Whether c_s·c_d is to be computed from the tower rather than taken as given. */
+        public boolean structuralFactorComputed() {
+            return Double.isNaN(structuralFactor);
+        }
+
+        public En1991 withStructuralFactor(double value) {
+            return new En1991(basicSpeed, terrain, directionFactors, seasonFactor, orography, value, turbulenceFactor,
+                    airDensity);
         }
     }
 
