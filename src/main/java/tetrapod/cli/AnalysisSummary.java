@@ -6,6 +6,9 @@ import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
+import tetrapod.model.spec.WindSpec;
+import tetrapod.load.En1991StructuralFactor;
 import tetrapod.model.spec.ActionFactorSet;
 import tetrapod.model.spec.ActionFactors;
 import tetrapod.model.spec.BasisMix;
@@ -36,7 +39,7 @@ final class AnalysisSummary {
     private AnalysisSummary() { }
 
     static void print(PrintWriter out, TowerSpec spec, AnalysisResult r,
-                      java.util.Optional<tetrapod.load.En1991StructuralFactor> computed) {
+                      Optional<En1991StructuralFactor> computed) {
         Frame frame = r.tower().frame();
         out.printf(Locale.ROOT, "%s: %s, %d nodes, %d members; %d load cases (%d combinations, sweep step %s deg)%n",
                 frame.name(), frame.idealisation().jsonName(), frame.nodes().size(), frame.members().size(),
@@ -130,12 +133,12 @@ final class AnalysisSummary {
     }
 
     private static void structuralFactor(PrintWriter out, TowerSpec spec,
-                                         java.util.Optional<tetrapod.load.En1991StructuralFactor> computed) {
-        if (!(spec.loads().wind() instanceof tetrapod.model.spec.WindSpec.En1991 en)) {
+                                         Optional<En1991StructuralFactor> computed) {
+        if (!(spec.loads().wind() instanceof WindSpec.En1991 en)) {
             return;
         }
         if (computed.isPresent()) {
-            tetrapod.load.En1991StructuralFactor f = computed.get();
+            En1991StructuralFactor f = computed.get();
             out.printf(Locale.ROOT, "wind: c_s·c_d = %.3f computed from the tower (EN 1991-1-4 Annex B: first sway "
                     + "%.2f Hz, δ = %.2f, B² = %.3f, R² = %.3f, k_p = %.2f)%n", f.value(), f.frequency(), f.logDecrement(),
                     f.background(), f.resonant(), f.peakFactor());
