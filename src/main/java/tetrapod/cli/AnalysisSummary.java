@@ -8,7 +8,9 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import tetrapod.model.spec.WindSpec;
+import tetrapod.load.Asce7GustFactor;
 import tetrapod.load.En1991StructuralFactor;
+import tetrapod.load.ResponseFactor;
 import tetrapod.model.spec.ActionFactorSet;
 import tetrapod.model.spec.ActionFactors;
 import tetrapod.model.spec.BasisMix;
@@ -39,7 +41,7 @@ final class AnalysisSummary {
     private AnalysisSummary() { }
 
     static void print(PrintWriter out, TowerSpec spec, AnalysisResult r,
-                      Optional<En1991StructuralFactor> computed) {
+                      Optional<ResponseFactor> computed) {
         Frame frame = r.tower().frame();
         out.printf(Locale.ROOT, "%s: %s, %d nodes, %d members; %d load cases (%d combinations, sweep step %s deg)%n",
                 frame.name(), frame.idealisation().jsonName(), frame.nodes().size(), frame.members().size(),
@@ -132,19 +134,21 @@ final class AnalysisSummary {
         return out;
     }
 
-    private static void structuralFactor(PrintWriter out, TowerSpec spec,
-                                         Optional<En1991StructuralFactor> computed) {
-        if (!(spec.loads().wind() instanceof WindSpec.En1991 en)) {
-            return;
-        }
-        if (computed.isPresent()) {
-            En1991StructuralFactor f = computed.get();
+    private static void structuralFactor(PrintWriter out, TowerSpec spec, Optional<ResponseFactor> computed) {
+        WindSpec wind = spec.loads().wind();
+        if (computed.isPresent() && computed.get() instanceof En1991StructuralFactor f) {
             out.printf(Locale.ROOT, "wind: c_s·c_d = %.3f computed from the tower (EN 1991-1-4 Annex B: first sway "
                     + "%.2f Hz, δ = %.2f, B² = %.3f, R² = %.3f, k_p = %.2f)%n", f.value(), f.frequency(), f.logDecrement(),
                     f.background(), f.resonant(), f.peakFactor());
-        } else {
+        } else if (computed.isPresent() && computed.get() instanceof Asce7GustFactor g) {
+            out.printf(Locale.ROOT, "wind: G = %.3f from the tower's first sway %.2f Hz (%s)%n", g.value(), g.frequency(),
+                    g.flexible() ? String.format(Locale.ROOT, "flexible, ASCE 7 26.11.5: β = %.4f, Q² = %.3f, R² = %.3f",
+                            g.dampingRatio(), g.background(), g.resonant()) : "rigid, n1 >= 1 Hz: ASCE 7 26.11.1");
+        } else if (wind instanceof WindSpec.En1991 en) {
             out.printf(Locale.ROOT, "wind: c_s·c_d = %.3f as given in the model (loads.wind.structuralFactor)%n",
                     en.structuralFactor());
+        } else if (wind instanceof WindSpec.Asce7 a) {
+            out.printf(Locale.ROOT, "wind: G = %.3f as given in the model (loads.wind.gustFactor)%n", a.gustFactor());
         }
     }
 

@@ -9,7 +9,7 @@ import tetrapod.generate.Tower;
 import tetrapod.generate.TowerGenerator;
 import tetrapod.io.ProblemLines;
 import tetrapod.io.SpecReader;
-import tetrapod.load.En1991StructuralFactor;
+import tetrapod.load.ResponseFactor;
 import tetrapod.load.TowerLoads;
 import tetrapod.model.Material;
 import tetrapod.model.spec.TowerSpec;
@@ -20,20 +20,20 @@ import tetrapod.section.SteelGrades;
 /**
  * A model file read, its sections and material resolved, its tower built and its loads formed.
  *
- * @param spec             the model as read, with c_s·c_d filled in where it is computed
- * @param structuralFactor how c_s·c_d was computed from the tower, when it was
+ * @param spec             the model as read, with the wind's c_s·c_d or G filled in where it is computed
+ * @param structuralFactor how that factor was computed from the tower, when it was
  */
 record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Material material, Tower tower,
-                   TowerLoads loads, Optional<En1991StructuralFactor> structuralFactor) {
+                   TowerLoads loads, Optional<ResponseFactor> structuralFactor) {
 
-    /** The model ready to analyse: an EN wind without a given c_s·c_d gets the one computed from the tower. */
+    /** The model ready to analyse: a wind without a given c_s·c_d (EN) or G (ASCE 7) gets one computed from the tower. */
     static LoadedModel read(Path file) throws BadInputException, UnstableStructureException {
         return load(file, true);
     }
 
     /**
      * The model checked without solving anything (validate, geometry): a c_s·c_d still to be
-     * computed is taken as 1 here, for forming the loads only; their values are not used.
+     * computed (c_s·c_d or G) is taken as 1 here, for forming the loads only; their values are not used.
      */
     static LoadedModel checked(Path file) throws BadInputException {
         try {
@@ -54,7 +54,7 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
             SectionCatalogue sections = SectionCatalogue.standard().with(spec.userSections());
             Material material = SteelGrades.fromSpec(spec.material());
             Tower tower = TowerGenerator.generate(spec, sections, material);
-            Optional<En1991StructuralFactor> factor = Optional.empty();
+            Optional<ResponseFactor> factor = Optional.empty();
             if (resolve) {
                 WorkBudget.check(tower, TowerLoads.build(tower, unitFactor(spec).loads()));
                 ComputedStructuralFactor.Resolved resolved = ComputedStructuralFactor.resolve(spec, tower);
@@ -72,10 +72,13 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
         }
     }
 
-    /** The spec with a c_s·c_d still to be computed taken as 1. */
+    /** The spec with a response factor still to be computed taken as 1. */
     private static TowerSpec unitFactor(TowerSpec spec) {
         if (spec.loads().wind() instanceof WindSpec.En1991 en && en.structuralFactorComputed()) {
             return spec.withLoads(spec.loads().withWind(en.withStructuralFactor(1.0)));
+        }
+        if (spec.loads().wind() instanceof WindSpec.Asce7 a && a.gustFactorComputed()) {
+            return spec.withLoads(spec.loads().withWind(a.withGustFactor(1.0)));
         }
         return spec;
     }

@@ -219,7 +219,8 @@ final class LoadsReader {
                 double kzt = f.optionalNumber("topographicFactor", new Bound(0, false, 5, true), "", 1.0);
                 double ke = f.optionalNumber("elevationFactor", new Bound(0, false, 1.5, true), "", 1.0);
                 double kd = f.optionalNumber("directionalityFactor", FRACTION_TO_ONE, "", 0.85);
-                double g = f.optionalNumber("gustFactor", upToTwo, "", 0.85);
+                // absent: computed from the tower's first sway frequency (ASCE 7 §26.11)
+                double g = f.optionalNumber("gustFactor", upToTwo, "", Double.NaN);
                 return problems.count() == before
                         ? new WindSpec.Asce7(edition, speed, exposure, kzt, ke, kd, g)
                         : null;

@@ -349,7 +349,9 @@ public final class SpecWriter {
             m.put("topographicFactor", a.topographicFactor());
             m.put("elevationFactor", a.elevationFactor());
             m.put("directionalityFactor", a.directionalityFactor());
-            m.put("gustFactor", a.gustFactor());
+            if (!a.gustFactorComputed()) {
+                m.put("gustFactor", a.gustFactor());
+            }
         } else {
             WindSpec.Uniform u = (WindSpec.Uniform) wind;
             m.put("pressure", u.pressure());

@@ -21,7 +21,7 @@ package tetrapod.load;
 public record En1991StructuralFactor(double height, double width, double frequency, double logDecrement,
                                      double referenceHeight, double turbulence, double meanVelocity, double lengthScale,
                                      double background, double resonant, double upCrossing, double peakFactor,
-                                     double value) {
+                                     double value) implements ResponseFactor {
 
     /** Averaging time of the mean wind velocity, s (B.4). */
     static final double AVERAGING_TIME = 600;

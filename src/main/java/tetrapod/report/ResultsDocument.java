@@ -47,7 +47,9 @@ import tetrapod.solve.NodeDisplacement;
 import tetrapod.model.NodeForce;
 import tetrapod.solve.Solution;
 import tetrapod.solve.StructuralModel;
+import tetrapod.load.Asce7GustFactor;
 import tetrapod.load.En1991StructuralFactor;
+import tetrapod.load.ResponseFactor;
 import tetrapod.model.spec.WindSpec;
 
 /**
@@ -94,7 +96,7 @@ public final class ResultsDocument {
 
     /** As above, with how c_s·c_d was computed from the tower when it was. */
     public static Map<String, Object> build(TowerSpec spec, AnalysisResult result, List<String> defaulted,
-                                            Source source, Optional<En1991StructuralFactor> computed) {
+                                            Source source, Optional<ResponseFactor> computed) {
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("format", FORMAT);
         if (source != null) {
@@ -105,7 +107,11 @@ public final class ResultsDocument {
         doc.put("model", model(result.model(), result.autoRestraints()));
         doc.put("cases", result.cases().stream().map(ResultsDocument::solvedCase).toList());
         if (spec.loads().wind() instanceof WindSpec.En1991 en) {
-            doc.put("structuralFactor", structuralFactor(en, computed));
+            doc.put("structuralFactor", structuralFactor(en,
+                    computed.filter(En1991StructuralFactor.class::isInstance).map(En1991StructuralFactor.class::cast)));
+        } else if (spec.loads().wind() instanceof WindSpec.Asce7 a) {
+            doc.put("gustFactor", gustFactor(a,
+                    computed.filter(Asce7GustFactor.class::isInstance).map(Asce7GustFactor.class::cast)));
         }
         doc.put("wind", result.wind().stream().map(ResultsDocument::wind).toList());
         doc.put("sweep", sweep(result));
@@ -534,6 +540,28 @@ public final class ResultsDocument {
     /** −0.0 written as 0.0, so that equal results give equal text. */
     private static double clean(double v) {
         return v == 0 ? 0.0 : v;
+    }
+
+    /** G as used: given by the user, or from the first sway frequency by ASCE 7 §26.11 with its steps. */
+    private static Map<String, Object> gustFactor(WindSpec.Asce7 a, Optional<Asce7GustFactor> computed) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("value", computed.map(Asce7GustFactor::value).orElse(a.gustFactor()));
+        m.put("source", computed.isEmpty() ? "given" : computed.get().flexible() ? "flexible" : "rigid");
+        computed.ifPresent(g -> {
+            m.put("method", g.flexible() ? "ASCE 7-16 26.11.5 (26.11-10)" : "ASCE 7-16 26.11.1 (rigid, n1 >= 1 Hz)");
+            m.put("frequencyHz", g.frequency());
+            m.put("dampingRatio", g.dampingRatio());
+            m.put("height", g.height());
+            m.put("width", g.width());
+            m.put("equivalentHeight", g.equivalentHeight());
+            m.put("turbulenceIntensity", g.turbulence());
+            m.put("lengthScale", g.lengthScale());
+            m.put("background", g.background());
+            m.put("meanVelocity", g.meanVelocity());
+            m.put("resonant", g.resonant());
+            m.put("resonantPeakFactor", g.resonantPeak());
+        });
+        return m;
     }
 
     /** c_s·c_d as used: given by the user, or computed by EN 1991-1-4 Annex B with its steps. */

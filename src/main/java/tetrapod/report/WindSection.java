@@ -34,6 +34,7 @@ final class WindSection implements Section {
                 + "× the force coefficient cf × the projected member area, along the wind, shared among the eight leg "
                 + "nodes of the panel. Ancillaries carry their own wind (not in this table).");
         structuralFactor(out, Tree.mapOrEmpty(r.document(), "structuralFactor"));
+        gustFactor(out, Tree.mapOrEmpty(r.document(), "gustFactor"));
         Charts.pressureProfile(r).ifPresent(f -> ReportHtml.figure(out, f));
 
         WindRow first = wind.get(0);
@@ -92,6 +93,32 @@ final class WindSection implements Section {
                 + " m, B² = " + Format.fixed(Tree.num(f, "background"), 3) + ", R² = " + Format.fixed(Tree.num(f, "resonant"), 3)
                 + ", ν = " + Format.fixed(Tree.num(f, "upCrossingHz"), 3) + " Hz, k_p = "
                 + Format.fixed(Tree.num(f, "peakFactor"), 2) + ". A structural factor given in the model's wind replaces it.");
+    }
+
+    /** The gust-effect factor G of an ASCE 7 wind: as given, rigid, or flexible with its steps (§26.11). */
+    private static void gustFactor(Html out, Map<String, Object> g) {
+        if (g.isEmpty()) {
+            return;
+        }
+        String value = Format.fixed(Tree.num(g, "value"), 3);
+        String source = Tree.str(g, "source");
+        if ("given".equals(source)) {
+            out.p("Gust-effect factor G = " + value + ", as the model gives it (not computed).");
+        } else if ("rigid".equals(source)) {
+            out.p("Gust-effect factor G = " + value + ": the tower's first sway frequency n₁ = "
+                    + Format.fixed(Tree.num(g, "frequencyHz"), 2) + " Hz is at least 1 Hz, so it is rigid and ASCE 7 "
+                    + "26.11.1 permits G = 0.85. A gust factor given in the model's wind replaces it.");
+        } else {
+            out.p("Gust-effect factor G_f = " + value + " of a flexible tower by ASCE 7-16 26.11.5 (26.11-10): n₁ = "
+                    + Format.fixed(Tree.num(g, "frequencyHz"), 2) + " Hz, damping ratio β = "
+                    + Format.fixed(Tree.num(g, "dampingRatio"), 4) + " (δ/2π of the lowest EN 1991-1-4 Table F.2 value, the"
+                    + " safe side), z̄ = " + Format.metres(Tree.num(g, "equivalentHeight")) + " m, I_z̄ = "
+                    + Format.fixed(Tree.num(g, "turbulenceIntensity"), 3) + ", L_z̄ = "
+                    + Format.fixed(Tree.num(g, "lengthScale"), 1) + " m, Q² = " + Format.fixed(Tree.num(g, "background"), 3)
+                    + ", V̄_z̄ = " + Format.fixed(Tree.num(g, "meanVelocity"), 1) + " m/s, R² = "
+                    + Format.fixed(Tree.num(g, "resonant"), 3) + ", g_R = " + Format.fixed(Tree.num(g, "resonantPeakFactor"), 2)
+                    + ". A gust factor given in the model's wind replaces it.");
+        }
     }
 
     static String methodName(String method) {

@@ -61,6 +61,20 @@ class StructuralFactorCommandTest {
         assertEquals(again.value(), value, 1e-12);
     }
 
+    /** ASCE 7: the harbour example sways above 1 Hz, so it is rigid and G = 0.85 (§26.11.1). */
+    @Test
+    void anAsceTowerSwayingAbove1HzTakesTheRigidGustFactor(@TempDir Path dir) throws Exception {
+        Path out = dir.resolve("harbour");
+        CliRun run = CliRun.of("analyze", "models/harbour-beacon-rectangular.json", "-o", out.toString(), "--quiet");
+        assertEquals(ExitCode.DONE, run.exitCode(), run.err());
+        JsonNode results = MAPPER.readTree(out.resolve("results.json").toFile());
+        JsonNode g = results.get("gustFactor");
+        assertEquals("rigid", g.get("source").asText());
+        assertEquals(0.85, g.get("value").asDouble(), 0);
+        assertTrue(g.get("frequencyHz").asDouble() >= 1.0);
+        assertTrue(run.out().contains("wind: G = 0.850 from the tower's first sway"), run.out());
+    }
+
     private static TerrainCategory terrain(String name) {
         for (TerrainCategory c : TerrainCategory.values()) {
             if (c.jsonName().equals(name)) {

@@ -53,7 +53,7 @@ class LoadsReaderTest {
     @Test
     void asce7WithItsDefaults() throws BadInputException {
         LoadsSpec loads = read("{ \"wind\": { \"method\": \"asce7\", \"speed\": 50, \"exposure\": \"B\" } }").loads();
-        assertEquals(new WindSpec.Asce7(Asce7Edition.ASCE_7_16, 50, Exposure.B, 1, 1, 0.85, 0.85), loads.wind());
+        assertEquals(new WindSpec.Asce7(Asce7Edition.ASCE_7_16, 50, Exposure.B, 1, 1, 0.85, Double.NaN), loads.wind());
     }
 
     @Test

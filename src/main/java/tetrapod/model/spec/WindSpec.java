@@ -60,7 +60,8 @@ public sealed interface WindSpec permits WindSpec.En1991, WindSpec.Asce7, WindSp
      * @param topographicFactor     K_zt
      * @param elevationFactor       K_e
      * @param directionalityFactor  K_d
-     * @param gustFactor            G
+     * @param gustFactor            G as the user gave it, or NaN when it is to be computed from the tower's
+     *                              first sway frequency (§26.11: 0.85 when rigid, G_f when flexible)
      */
     record Asce7(Asce7Edition edition, double speed, Exposure exposure, double topographicFactor,
                  double elevationFactor, double directionalityFactor, double gustFactor) implements WindSpec {
@@ -68,6 +69,15 @@ public sealed interface WindSpec permits WindSpec.En1991, WindSpec.Asce7, WindSp
         public Asce7 {
             Objects.requireNonNull(edition, "edition");
             Objects.requireNonNull(exposure, "exposure");
+        }
+
+        /** Whether G is to be computed from the tower rather than taken as given. */
+        public boolean gustFactorComputed() {
+            return Double.isNaN(gustFactor);
+        }
+
+        public Asce7 withGustFactor(double value) {
+            return new Asce7(edition, speed, exposure, topographicFactor, elevationFactor, directionalityFactor, value);
         }
 
         @Override
