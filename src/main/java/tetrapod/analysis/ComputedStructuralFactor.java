@@ -46,6 +46,15 @@ public final class ComputedStructuralFactor {
     private ComputedStructuralFactor() { }
 
     public static Resolved resolve(TowerSpec spec, Tower tower) throws BadInputException, UnstableStructureException {
+        return resolve(spec, tower, null);
+    }
+
+    /**
+     * As above, with the loads already formed from {@code spec} with the factor to compute taken as 1
+     * (only their dead loads are used, for the masses), or null to form them here.
+     */
+    public static Resolved resolve(TowerSpec spec, Tower tower, TowerLoads unitLoads)
+            throws BadInputException, UnstableStructureException {
         WindSpec wind = spec.loads().wind();
         boolean en = wind instanceof WindSpec.En1991 e && e.structuralFactorComputed();
         boolean us = wind instanceof WindSpec.Asce7 a && a.gustFactorComputed();
@@ -53,7 +62,7 @@ public final class ComputedStructuralFactor {
             return new Resolved(spec, Optional.empty());
         }
         TowerSpec unit = withFactor(spec, 1.0);
-        double frequency = firstSway(tower, TowerLoads.build(tower, unit.loads()));
+        double frequency = firstSway(tower, unitLoads != null ? unitLoads : TowerLoads.build(tower, unit.loads()));
         double height = tower.height();
         ResponseFactor factor;
         if (en) {

@@ -32,8 +32,9 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
     }
 
     /**
-     * The model checked without solving anything (validate, geometry): a c_s·c_d still to be
-     * computed (c_s·c_d or G) is taken as 1 here, for forming the loads only; their values are not used.
+     * The model checked without solving anything (validate, geometry): a response factor still to be
+     * computed (c_s·c_d or G) stays so in the spec, and is taken as 1 for forming the loads only,
+     * whose values are not used.
      */
     static LoadedModel checked(Path file) throws BadInputException {
         try {
@@ -54,17 +55,16 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
             SectionCatalogue sections = SectionCatalogue.standard().with(spec.userSections());
             Material material = SteelGrades.fromSpec(spec.material());
             Tower tower = TowerGenerator.generate(spec, sections, material);
+            TowerSpec unit = unitFactor(spec);
+            TowerLoads loads = TowerLoads.build(tower, unit.loads());
+            WorkBudget.check(tower, loads);
             Optional<ResponseFactor> factor = Optional.empty();
-            if (resolve) {
-                WorkBudget.check(tower, TowerLoads.build(tower, unitFactor(spec).loads()));
-                ComputedStructuralFactor.Resolved resolved = ComputedStructuralFactor.resolve(spec, tower);
+            if (resolve && unit != spec) {
+                ComputedStructuralFactor.Resolved resolved = ComputedStructuralFactor.resolve(spec, tower, loads);
                 spec = resolved.spec();
                 factor = resolved.factor();
-            } else {
-                spec = unitFactor(spec);
+                loads = TowerLoads.build(tower, spec.loads());
             }
-            TowerLoads loads = TowerLoads.build(tower, spec.loads());
-            WorkBudget.check(tower, loads);
             return new LoadedModel(file, spec, sections, material, tower, loads, factor);
         } catch (BadInputException e) {
             // found after reading: the paths are known, the lines are looked up in the file
