@@ -22,6 +22,7 @@ import tetrapod.load.LoadCase;
 import tetrapod.load.LoadComponent;
 import tetrapod.load.TowerLoads;
 import tetrapod.model.spec.ChecksSpec;
+import tetrapod.model.spec.LoadAction;
 import tetrapod.solve.BasisResponses;
 import tetrapod.solve.CriticalLoad;
 import tetrapod.solve.FactoredSystem;
@@ -65,6 +66,28 @@ public final class Analysis {
         }
         BasisResponses responses = BasisResponses.of(system, vectors, progress);
 
+        Pass first = pass(tower, loads, checks, model, system, basis, responses, progress, 1.0);
+        SecondOrder second = SecondOrder.of(first.cases());
+        Pass used = second.applied()
+                ? pass(tower, loads, checks, model, system, basis, responses, progress, second.amplification())
+                : first;
+        Sweep sweep = used.sweep();
+        List<NaturalMode> natural = NaturalModes.of(system, basis, modes);
+        progress.progress("natural modes", 1, 1);
+        List<AzimuthWind> wind = new ArrayList<>();
+        loads.wind().ifPresent(w -> REPORTED_AZIMUTHS.forEach(a -> wind.add(w.azimuth(a))));
+        return new AnalysisResult(tower, loads, model, used.cases(), wind, sweep.legBaseSweeps(), used.legBases(),
+                used.members(), used.foundations(), sweep.handComparisons(), responses, (int) used.total(),
+                sweep.utilisationByAzimuth(), sweep.autoRestraintPeaks(), natural, second);
+    }
+
+    /** The sweep, the checks and the cases solved in full, with the wind multiplied by {@code sway}. */
+    private record Pass(Sweep sweep, List<SolvedCase> cases, List<LegBaseExtremes> legBases,
+                        List<MemberEnvelope> members, List<FoundationEnvelope> foundations, long total) { }
+
+    private static Pass pass(Tower tower, TowerLoads loads, ChecksSpec checks, StructuralModel model,
+                             FactoredSystem system, LoadBasis basis, BasisResponses responses, ProgressListener progress,
+                             double sway) throws UnstableStructureException {
         FoundationCheck footing = checks.foundationSpec()
                 .map(f -> new FoundationCheck(f, checks.partialFactors())).orElse(null);
         LoadResultants resultants = new LoadResultants(tower.frame(),
@@ -90,7 +113,7 @@ public final class Analysis {
             for (Double azimuth : azimuthsOf(c, azimuths)) {
                 CaseKey key = new CaseKey(c, azimuth);
                 keys.put(key.id(), key);
-                sweep.add(key, basis.weights(c, azimuth, weights));
+                sweep.add(key, amplified(basis, basis.weights(c, azimuth, weights), sway));
                 progress.progress("sweep and checks", ++done, total + serviceTotal);
             }
         }
@@ -98,7 +121,7 @@ public final class Analysis {
             for (Double azimuth : azimuthsOf(c, azimuths)) {
                 CaseKey key = new CaseKey(c, azimuth);
                 keys.put(key.id(), key);
-                sweep.addService(key, basis.weights(c, azimuth, weights));
+                sweep.addService(key, amplified(basis, basis.weights(c, azimuth, weights), sway));
                 progress.progress("sweep and checks", ++done, total + serviceTotal);
             }
         }
@@ -127,17 +150,28 @@ public final class Analysis {
         List<SolvedCase> cases = new ArrayList<>(reported.size());
         int solved = 0;
         for (CaseKey key : reported.values()) {
-            cases.add(solveCase(system, loads.loadCase(key)));
+            cases.add(solveCase(system, loads.loadCase(key, sway)));
             progress.progress("cases in full", ++solved, reported.size());
         }
-        List<NaturalMode> natural = NaturalModes.of(system, basis, modes);
-        progress.progress("natural modes", 1, 1);
-        List<AzimuthWind> wind = new ArrayList<>();
-        loads.wind().ifPresent(w -> REPORTED_AZIMUTHS.forEach(a -> wind.add(w.azimuth(a))));
-        return new AnalysisResult(tower, loads, model, cases, wind, sweep.legBaseSweeps(), legBases, members,
-                foundations, sweep.handComparisons(), responses, (int) total, sweep.utilisationByAzimuth(),
-                sweep.autoRestraintPeaks(), natural);
+        return new Pass(sweep, cases, legBases, members, foundations, total);
     }
+
+    /**
+     * The weights with every wind component multiplied by {@code sway}: the horizontal loads of
+     * EN 1993-1-1 5.2.2(5)B, whose first-order effects so amplified stand for the second-order ones.
+     */
+    private static double[] amplified(LoadBasis basis, double[] weights, double sway) {
+        if (sway != 1.0) {
+            for (int j = 0; j < weights.length; j++) {
+                LoadAction a = basis.components().get(j).action();
+                if (a == LoadAction.WIND || a == LoadAction.WIND_ON_ICE) {
+                    weights[j] *= sway;
+                }
+            }
+        }
+        return weights;
+    }
+
 
     /** Adds the case where {@code e} occurred to the reported cases (after those already there). */
     private static void addGoverning(Map<String, CaseKey> reported, Map<String, CaseKey> keys, Extreme e) {

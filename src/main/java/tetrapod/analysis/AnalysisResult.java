@@ -37,7 +37,7 @@ public record AnalysisResult(Tower tower, TowerLoads loads, StructuralModel mode
                              List<MemberEnvelope> members, List<FoundationEnvelope> foundations,
                              List<HandComparison> hand, BasisResponses responses, int caseCount,
                              List<AzimuthUtilisation> utilisationByAzimuth, List<AutoRestraintPeak> autoRestraints,
-                             List<NaturalMode> modes) {
+                             List<NaturalMode> modes, SecondOrder secondOrder) {
     public AnalysisResult {
         cases = List.copyOf(cases);
         wind = List.copyOf(wind);

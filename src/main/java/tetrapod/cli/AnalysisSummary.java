@@ -22,6 +22,7 @@ import tetrapod.analysis.AutoRestraintPeak;
 import tetrapod.analysis.HandComparison;
 import tetrapod.analysis.LegBaseExtremes;
 import tetrapod.analysis.NaturalMode;
+import tetrapod.analysis.SecondOrder;
 import tetrapod.analysis.SolvedCase;
 import tetrapod.check.CheckResult;
 import tetrapod.check.Extreme;
@@ -80,25 +81,23 @@ final class AnalysisSummary {
 
     /** The smallest elastic critical load factor of the cases solved in full, and what it means. */
     private static void criticalLoad(PrintWriter out, AnalysisResult r) {
-        SolvedCase worst = null;
-        for (SolvedCase c : r.cases()) {
-            if (worst == null || c.alphaCr() < worst.alphaCr()) {
-                worst = c;
-            }
-        }
-        if (worst == null) {
+        SecondOrder so = r.secondOrder();
+        if (r.cases().isEmpty()) {
             return;
         }
-        if (Double.isInfinite(worst.alphaCr())) {
+        if (Double.isInfinite(so.alphaCr())) {
             out.println("elastic critical load factor: no case solved in full can buckle the structure as a whole");
-        } else if (worst.alphaCr() >= 10) {
+        } else if (!so.applied()) {
             out.printf(Locale.ROOT, "elastic critical load factor: smallest α_cr %.1f (case %s) ≥ 10: first-order "
-                    + "analysis suffices (EN 1993-1-1 5.2.1 (3))%n", worst.alphaCr(), worst.id());
+                    + "analysis suffices (EN 1993-1-1 5.2.1 (3))%n", so.alphaCr(), so.caseId());
         } else {
-            out.printf(Locale.ROOT, "WARNING: elastic critical load factor α_cr %.2f < 10 in case %s: second-order "
-                    + "effects matter (EN 1993-1-1 5.2.1 (3)) and are NOT included in these forces; amplify the sway "
-                    + "effects by 1/(1 - 1/α_cr) = %.3f or stiffen the tower%n", worst.alphaCr(), worst.id(),
-                    1 / (1 - 1 / worst.alphaCr()));
+            out.printf(Locale.ROOT, "second order: smallest first-order α_cr %.2f (case %s) < 10: every wind force is "
+                    + "multiplied by 1/(1 - 1/α_cr) = %.3f in the sweep, the checks and the cases above "
+                    + "(EN 1993-1-1 5.2.2 (5)B)%n", so.alphaCr(), so.caseId(), so.amplification());
+            if (so.beyondAmplification()) {
+                out.printf(Locale.ROOT, "WARNING: α_cr %.2f < 3: EN 1993-1-1 5.2.2 (6)B asks for a second-order analysis;"
+                        + " the amplification is outside its range: stiffen the tower%n", so.alphaCr());
+            }
         }
     }
 

@@ -285,16 +285,21 @@ public final class TowerLoads {
 
     /** The factored load vector of one case, formed directly. */
     public LoadCase loadCase(CaseKey key) {
+        return loadCase(key, 1.0);
+    }
+
+    /** As {@link #loadCase(CaseKey)}, with every wind force multiplied by {@code sway} (second-order amplification). */
+    public LoadCase loadCase(CaseKey key, double sway) {
         Combination c = key.combination();
         NodalLoads sum = new NodalLoads();
         sum.add(dead, c.factor(LoadAction.DEAD));
         sum.add(ice, c.factor(LoadAction.ICE));
         sum.add(nodal, c.factor(LoadAction.NODAL));
         if (c.factor(LoadAction.WIND) != 0) {
-            sum.add(wind.at(key.azimuthDeg()), c.factor(LoadAction.WIND));
+            sum.add(wind.at(key.azimuthDeg()), c.factor(LoadAction.WIND) * sway);
         }
         if (c.factor(LoadAction.WIND_ON_ICE) != 0) {
-            sum.add(windOnIce.at(key.azimuthDeg()), c.factor(LoadAction.WIND_ON_ICE));
+            sum.add(windOnIce.at(key.azimuthDeg()), c.factor(LoadAction.WIND_ON_ICE) * sway);
         }
         return new LoadCase(key.id(), c.name(), key.azimuthDeg(), sum.toList());
     }

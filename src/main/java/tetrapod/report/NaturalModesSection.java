@@ -1,6 +1,7 @@
 package tetrapod.report;
 
 import java.util.List;
+import java.util.Map;
 import java.util.Locale;
 import tetrapod.report.Rows.ModeRow;
 import tetrapod.report.Table.Cell;
@@ -20,15 +21,25 @@ final class NaturalModesSection implements Section {
 
     @Override
     public void write(Html out, ReportInput ri) {
-        out.p(ri.results().smallestAlphaCr().map(a -> String.format(Locale.ROOT, "Elastic critical load factor: the "
-                + "smallest over the cases solved in full is α_cr = %s (case %s), from the geometric stiffness of the "
-                + "members' axial forces (chord rotation, P-Δ; a bracing member split at nodes only its bending holds "
-                + "taken as one line). %s", Format.fixed(a.getValue(), 1), a.getKey(), a.getValue() >= 10
-                ? "At 10 or more a first-order analysis suffices (EN 1993-1-1 5.2.1 (3))."
-                : "Below 10 second-order effects matter (EN 1993-1-1 5.2.1 (3)) and are NOT included in the forces "
-                + "of this report; amplify the sway effects by 1/(1 − 1/α_cr) = " + Format.fixed(1 / (1 - 1 / a.getValue()), 3)
-                + " or stiffen the tower.")).orElse("Elastic critical load factor: no case solved in full can buckle the "
-                + "structure as a whole."));
+        Map<String, Object> so = Tree.mapOrEmpty(ri.results().document(), "secondOrder");
+        Double alpha = Tree.numOrNull(so, "alphaCr");
+        if (alpha == null) {
+            out.p("Elastic critical load factor: no case solved in full can buckle the structure as a whole.");
+        } else {
+            String first = "Elastic critical load factor: the smallest over the first-order cases solved in full is α_cr = "
+                    + Format.fixed(alpha, 1) + " (case " + Tree.str(so, "case") + "), from the geometric stiffness of the "
+                    + "members' axial forces (chord rotation, P-Δ; a bracing member split at nodes only its bending holds "
+                    + "taken as one line). ";
+            if (!Tree.bool(so, "applied")) {
+                out.p(first + "At 10 or more a first-order analysis suffices (EN 1993-1-1 5.2.1 (3)).");
+            } else {
+                out.p(first + "Below 10 second-order effects matter (EN 1993-1-1 5.2.1 (3)): by 5.2.2 (5)B every wind "
+                        + "force is multiplied by 1/(1 − 1/α_cr) = " + Format.fixed(Tree.num(so, "amplification"), 3)
+                        + " in the sweep, the checks and the cases of this report (the wind tables show the wind itself)."
+                        + (Tree.bool(so, "beyondAmplification") ? " α_cr is below 3, where 5.2.2 (6)B asks for a "
+                        + "second-order analysis instead: the amplification is outside its range; stiffen the tower." : ""));
+            }
+        }
         List<ModeRow> modes = ri.results().modes();
         if (modes.isEmpty()) {
             out.p("No natural modes were computed (nothing carries mass).");

@@ -17,6 +17,7 @@ import tetrapod.model.Material;
 import tetrapod.model.spec.LoadAction;
 import tetrapod.analysis.HandComparison;
 import tetrapod.analysis.NaturalMode;
+import tetrapod.analysis.SecondOrder;
 import tetrapod.analysis.HandGoverning;
 import tetrapod.load.Asce7Ice;
 import tetrapod.analysis.LegBaseExtremes;
@@ -113,6 +114,7 @@ public final class ResultsDocument {
             doc.put("gustFactor", gustFactor(a,
                     computed.filter(Asce7GustFactor.class::isInstance).map(Asce7GustFactor.class::cast)));
         }
+        doc.put("secondOrder", secondOrder(result.secondOrder()));
         doc.put("wind", result.wind().stream().map(ResultsDocument::wind).toList());
         doc.put("sweep", sweep(result));
         doc.put("checks", result.members().stream().map(ResultsDocument::memberCheck).toList());
@@ -540,6 +542,17 @@ public final class ResultsDocument {
     /** −0.0 written as 0.0, so that equal results give equal text. */
     private static double clean(double v) {
         return v == 0 ? 0.0 : v;
+    }
+
+    /** EN 1993-1-1 5.2.2(5)B: the smallest first-order α_cr and the wind amplification it asked for. */
+    private static Map<String, Object> secondOrder(SecondOrder so) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("alphaCr", Double.isFinite(so.alphaCr()) ? so.alphaCr() : null);
+        m.put("case", so.caseId());
+        m.put("amplification", so.amplification());
+        m.put("applied", so.applied());
+        m.put("beyondAmplification", so.beyondAmplification());
+        return m;
     }
 
     /** G as used: given by the user, or from the first sway frequency by ASCE 7 §26.11 with its steps. */
