@@ -88,6 +88,8 @@ public final class Analysis {
     private static Pass pass(Tower tower, TowerLoads loads, ChecksSpec checks, StructuralModel model,
                              FactoredSystem system, LoadBasis basis, BasisResponses responses, ProgressListener progress,
                              double sway) throws UnstableStructureException {
+        String sweeping = sway == 1.0 ? "sweep and checks" : "sweep and checks, second order";
+        String solving = sway == 1.0 ? "cases in full" : "cases in full, second order";
         FoundationCheck footing = checks.foundationSpec()
                 .map(f -> new FoundationCheck(f, checks.partialFactors())).orElse(null);
         LoadResultants resultants = new LoadResultants(tower.frame(),
@@ -114,7 +116,7 @@ public final class Analysis {
                 CaseKey key = new CaseKey(c, azimuth);
                 keys.put(key.id(), key);
                 sweep.add(key, amplified(basis, basis.weights(c, azimuth, weights), sway));
-                progress.progress("sweep and checks", ++done, total + serviceTotal);
+                progress.progress(sweeping, ++done, total + serviceTotal);
             }
         }
         for (Combination c : service) {
@@ -122,7 +124,7 @@ public final class Analysis {
                 CaseKey key = new CaseKey(c, azimuth);
                 keys.put(key.id(), key);
                 sweep.addService(key, amplified(basis, basis.weights(c, azimuth, weights), sway));
-                progress.progress("sweep and checks", ++done, total + serviceTotal);
+                progress.progress(sweeping, ++done, total + serviceTotal);
             }
         }
 
@@ -151,7 +153,7 @@ public final class Analysis {
         int solved = 0;
         for (CaseKey key : reported.values()) {
             cases.add(solveCase(system, loads.loadCase(key, sway)));
-            progress.progress("cases in full", ++solved, reported.size());
+            progress.progress(solving, ++solved, reported.size());
         }
         return new Pass(sweep, cases, legBases, members, foundations, total);
     }
@@ -171,7 +173,6 @@ public final class Analysis {
         }
         return weights;
     }
-
 
     /** Adds the case where {@code e} occurred to the reported cases (after those already there). */
     private static void addGoverning(Map<String, CaseKey> reported, Map<String, CaseKey> keys, Extreme e) {
