@@ -129,7 +129,7 @@ final class AnalyzeCommand implements Callable<Integer> {
         Results results = new Results(plainDocument(document));
         CsvTables.writeAll(results, folder);
         watch.end("results.json, CSV");
-        ViewData view = ResultViews.of(result).withAncillaries(ResultViews.ancillaries(loaded.spec()));
+        ViewData view = ResultViews.of(result, loaded.spec().checks()).withAncillaries(ResultViews.ancillaries(loaded.spec()));
         Path picture = folder.resolve("tower.png");
         String route = RenderCommand.write(pictures, view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
         watch.end("picture");
