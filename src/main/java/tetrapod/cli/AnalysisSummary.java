@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import tetrapod.model.spec.WindSpec;
+import tetrapod.analysis.ComputedStructuralFactor;
 import tetrapod.load.Asce7GustFactor;
 import tetrapod.load.En1991StructuralFactor;
 import tetrapod.load.ResponseFactor;
@@ -42,7 +43,7 @@ final class AnalysisSummary {
     private AnalysisSummary() { }
 
     static void print(PrintWriter out, TowerSpec spec, AnalysisResult r,
-                      Optional<ResponseFactor> computed) {
+                      ComputedStructuralFactor.Resolved computed) {
         Frame frame = r.tower().frame();
         out.printf(Locale.ROOT, "%s: %s, %d nodes, %d members; %d load cases (%d combinations, sweep step %s deg)%n",
                 frame.name(), frame.idealisation().jsonName(), frame.nodes().size(), frame.members().size(),
@@ -133,22 +134,42 @@ final class AnalysisSummary {
         return out;
     }
 
-    private static void structuralFactor(PrintWriter out, TowerSpec spec, Optional<ResponseFactor> computed) {
+    private static void structuralFactor(PrintWriter out, TowerSpec spec, ComputedStructuralFactor.Resolved factor) {
         WindSpec wind = spec.loads().wind();
-        if (computed.isPresent() && computed.get() instanceof En1991StructuralFactor f) {
-            out.printf(Locale.ROOT, "wind: c_s·c_d = %.3f computed from the tower (EN 1991-1-4 Annex B: first sway "
-                    + "%.2f Hz, δ = %.2f, B² = %.3f, R² = %.3f, k_p = %.2f)%n", f.value(), f.frequency(), f.logDecrement(),
-                    f.background(), f.resonant(), f.peakFactor());
-        } else if (computed.isPresent() && computed.get() instanceof Asce7GustFactor g) {
-            out.printf(Locale.ROOT, "wind: G = %.3f from the tower's first sway %.2f Hz (%s)%n", g.value(), g.frequency(),
-                    g.flexible() ? String.format(Locale.ROOT, "flexible, ASCE 7 26.11.5: β = %.4f, Q² = %.3f, R² = %.3f",
-                            g.dampingRatio(), g.background(), g.resonant()) : "rigid, n1 >= 1 Hz: ASCE 7 26.11.1");
-        } else if (wind instanceof WindSpec.En1991 en) {
-            out.printf(Locale.ROOT, "wind: c_s·c_d = %.3f as given in the model (loads.wind.structuralFactor)%n",
-                    en.structuralFactor());
-        } else if (wind instanceof WindSpec.Asce7 a) {
-            out.printf(Locale.ROOT, "wind: G = %.3f as given in the model (loads.wind.gustFactor)%n", a.gustFactor());
+        Optional<ResponseFactor> computed = factor.computed();
+        if (!factor.given() && computed.isPresent()) {
+            out.printf(Locale.ROOT, "wind: %s computed from the tower (%s)%n", value(computed.get()), steps(computed.get()));
+            return;
         }
+        String given = wind instanceof WindSpec.En1991 en
+                ? String.format(Locale.ROOT, "c_s·c_d = %.3f as given in the model (loads.wind.structuralFactor)",
+                        en.structuralFactor())
+                : wind instanceof WindSpec.Asce7 a
+                ? String.format(Locale.ROOT, "G = %.3f as given in the model (loads.wind.gustFactor)", a.gustFactor())
+                : null;
+        if (given == null) {
+            return;
+        }
+        out.println("wind: " + given + computed.map(c -> String.format(Locale.ROOT,
+                "; computed from the tower it would be %.3f (%s)", c.value(), steps(c))).orElse(""));
+    }
+
+    private static String value(ResponseFactor f) {
+        return String.format(Locale.ROOT, f instanceof En1991StructuralFactor ? "c_s·c_d = %.3f" : "G = %.3f", f.value());
+    }
+
+    /** How a computed factor came about, in a few numbers. */
+    private static String steps(ResponseFactor f) {
+        if (f instanceof En1991StructuralFactor e) {
+            return String.format(Locale.ROOT, "EN 1991-1-4 Annex B: first sway %.2f Hz, δ = δ_s %.3f + δ_a %.3f, "
+                    + "B² = %.3f, R² = %.3f, k_p = %.2f", e.frequency(), e.structuralDamping(), e.aerodynamicDamping(),
+                    e.background(), e.resonant(), e.peakFactor());
+        }
+        Asce7GustFactor g = (Asce7GustFactor) f;
+        return String.format(Locale.ROOT, "first sway %.2f Hz, %s", g.frequency(), g.flexible()
+                ? String.format(Locale.ROOT, "flexible, ASCE 7 26.11.5: β = %.4f, Q² = %.3f, R² = %.3f",
+                        g.dampingRatio(), g.background(), g.resonant())
+                : "rigid, n1 >= 1 Hz: ASCE 7 26.11.1");
     }
 
     private static void basis(PrintWriter out, TowerSpec spec) {

@@ -78,7 +78,7 @@ final class AnalyzeCommand implements Callable<Integer> {
         if (modes != null && modes < 1) {
             throw BadInputException.at("--modes", "must be at least 1, was " + modes);
         }
-        LoadedModel loaded = LoadedModel.read(model);
+        LoadedModel loaded = LoadedModel.forAnalysis(model);
         Path folder = output != null ? output : OutputFolders.forModel(model);
         AnalysisResult result;
         String route;
@@ -99,7 +99,7 @@ final class AnalyzeCommand implements Callable<Integer> {
             outputs.commit();
         }
 
-        AnalysisSummary.print(out, loaded.spec(), result, loaded.structuralFactor());
+        AnalysisSummary.print(out, loaded.spec(), result, loaded.responseFactor());
         out.println("tower.png " + route.replaceFirst("^render: ", "drawn by "));
         out.println("results written to " + folder + ": results.json, " + CsvTables.MEMBERS + ", "
                 + CsvTables.REACTIONS + ", " + CsvTables.WIND + ", " + CsvTables.REQUIREMENTS + ", tower.png, " + ReportHtml.FILE);
@@ -123,7 +123,7 @@ final class AnalyzeCommand implements Callable<Integer> {
         ResultsDocument.Source source = new ResultsDocument.Source(model.getFileName().toString(),
                 tetrapod.io.Sha256.of(model), new Version().getVersion()[0]);
         Map<String, Object> document = ResultsDocument.build(loaded.spec(), result,
-                DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec())), source, loaded.structuralFactor());
+                DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec())), source, loaded.responseFactor());
         JsonOutput.write(resultsFile, document);
         // everything else is built from what the file holds, as 'tetrapod report' builds it from the file
         Results results = new Results(plainDocument(document));

@@ -9,7 +9,6 @@ import tetrapod.generate.Tower;
 import tetrapod.generate.TowerGenerator;
 import tetrapod.io.ProblemLines;
 import tetrapod.io.SpecReader;
-import tetrapod.load.ResponseFactor;
 import tetrapod.load.TowerLoads;
 import tetrapod.model.Material;
 import tetrapod.model.spec.TowerSpec;
@@ -20,15 +19,23 @@ import tetrapod.section.SteelGrades;
 /**
  * A model file read, its sections and material resolved, its tower built and its loads formed.
  *
- * @param spec             the model as read, with the wind's c_s·c_d or G filled in where it is computed
- * @param structuralFactor how that factor was computed from the tower, when it was
+ * @param spec           the model as read, with the wind's c_s·c_d or G filled in where it is computed
+ * @param responseFactor the factor the wind uses, and the one computed from the tower when it was
  */
 record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Material material, Tower tower,
-                   TowerLoads loads, Optional<ResponseFactor> structuralFactor) {
+                   TowerLoads loads, ComputedStructuralFactor.Resolved responseFactor) {
 
     /** The model ready to analyse: a wind without a given c_s·c_d (EN) or G (ASCE 7) gets one computed from the tower. */
     static LoadedModel read(Path file) throws BadInputException, UnstableStructureException {
-        return load(file, true);
+        return load(file, true, false);
+    }
+
+    /**
+     * As {@link #read(Path)}, with the response factor computed from the tower also when the model
+     * gives one, so that analyze reports the computed value beside the user's.
+     */
+    static LoadedModel forAnalysis(Path file) throws BadInputException, UnstableStructureException {
+        return load(file, true, true);
     }
 
     /**
@@ -38,13 +45,14 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
      */
     static LoadedModel checked(Path file) throws BadInputException {
         try {
-            return load(file, false);
+            return load(file, false, false);
         } catch (UnstableStructureException e) {
             throw new IllegalStateException("nothing is solved when a model is only checked", e);
         }
     }
 
-    private static LoadedModel load(Path file, boolean resolve) throws BadInputException, UnstableStructureException {
+    private static LoadedModel load(Path file, boolean resolve, boolean alsoWhenGiven)
+            throws BadInputException, UnstableStructureException {
         TowerSpec spec;
         try {
             spec = SpecReader.read(file, SectionCatalogue.standard());
@@ -58,12 +66,14 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
             TowerSpec unit = unitFactor(spec);
             TowerLoads loads = TowerLoads.build(tower, unit.loads());
             WorkBudget.check(tower, loads);
-            Optional<ResponseFactor> factor = Optional.empty();
-            if (resolve && unit != spec) {
-                ComputedStructuralFactor.Resolved resolved = ComputedStructuralFactor.resolve(spec, tower, loads);
-                spec = resolved.spec();
-                factor = resolved.factor();
-                loads = TowerLoads.build(tower, spec.loads());
+            ComputedStructuralFactor.Resolved factor = new ComputedStructuralFactor.Resolved(spec, Optional.empty(),
+                    unit == spec);
+            if (resolve && (unit != spec || alsoWhenGiven)) {
+                factor = ComputedStructuralFactor.resolve(spec, tower, loads, alsoWhenGiven);
+                if (factor.spec() != spec) {
+                    spec = factor.spec();
+                    loads = TowerLoads.build(tower, spec.loads());
+                }
             }
             return new LoadedModel(file, spec, sections, material, tower, loads, factor);
         } catch (BadInputException e) {

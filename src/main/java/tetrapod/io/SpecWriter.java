@@ -342,6 +342,7 @@ public final class SpecWriter {
             }
             m.put("turbulenceFactor", en.turbulenceFactor());
             m.put("airDensity", en.airDensity());
+            m.put("structuralDamping", en.structuralDamping());
         } else if (wind instanceof WindSpec.Asce7 a) {
             m.put("edition", a.edition().jsonName());
             m.put("speed", a.speed());
@@ -352,6 +353,7 @@ public final class SpecWriter {
             if (!a.gustFactorComputed()) {
                 m.put("gustFactor", a.gustFactor());
             }
+            m.put("dampingRatio", a.dampingRatio());
         } else {
             WindSpec.Uniform u = (WindSpec.Uniform) wind;
             m.put("pressure", u.pressure());

@@ -8,6 +8,7 @@ import java.util.Optional;
 import java.util.TreeMap;
 import tetrapod.analysis.AnalysisResult;
 import tetrapod.analysis.AutoRestraintPeak;
+import tetrapod.analysis.ComputedStructuralFactor;
 import tetrapod.analysis.AzimuthUtilisation;
 import tetrapod.generate.SteelMass;
 import tetrapod.generate.Tower;
@@ -92,12 +93,14 @@ public final class ResultsDocument {
     /** The document for {@code result} of {@code spec}, with its {@code source} when given (else none). */
     public static Map<String, Object> build(TowerSpec spec, AnalysisResult result, List<String> defaulted,
                                             Source source) {
-        return build(spec, result, defaulted, source, Optional.empty());
+        return build(spec, result, defaulted, source, new ComputedStructuralFactor.Resolved(spec, Optional.empty(), true));
     }
 
-    /** As above, with how c_s·c_d was computed from the tower when it was. */
+    /** As above, with the wind's response factor as used and as computed from the tower. */
     public static Map<String, Object> build(TowerSpec spec, AnalysisResult result, List<String> defaulted,
-                                            Source source, Optional<ResponseFactor> computed) {
+                                            Source source, ComputedStructuralFactor.Resolved factor) {
+        Optional<ResponseFactor> computed = factor.computed();
+        boolean given = factor.given();
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("format", FORMAT);
         if (source != null) {
@@ -108,10 +111,10 @@ public final class ResultsDocument {
         doc.put("model", model(result.model(), result.autoRestraints()));
         doc.put("cases", result.cases().stream().map(ResultsDocument::solvedCase).toList());
         if (spec.loads().wind() instanceof WindSpec.En1991 en) {
-            doc.put("structuralFactor", structuralFactor(en,
+            doc.put("structuralFactor", structuralFactor(en, given,
                     computed.filter(En1991StructuralFactor.class::isInstance).map(En1991StructuralFactor.class::cast)));
         } else if (spec.loads().wind() instanceof WindSpec.Asce7 a) {
-            doc.put("gustFactor", gustFactor(a,
+            doc.put("gustFactor", gustFactor(a, given,
                     computed.filter(Asce7GustFactor.class::isInstance).map(Asce7GustFactor.class::cast)));
         }
         doc.put("secondOrder", secondOrder(result.secondOrder()));
@@ -555,12 +558,17 @@ public final class ResultsDocument {
         return m;
     }
 
-    /** G as used: given by the user, or from the first sway frequency by ASCE 7 §26.11 with its steps. */
-    private static Map<String, Object> gustFactor(WindSpec.Asce7 a, Optional<Asce7GustFactor> computed) {
+    /**
+     * G as used: given by the user, or from the first sway frequency by ASCE 7 §26.11; with the
+     * computed value and its steps whenever it was computed (beside a given one too).
+     */
+    private static Map<String, Object> gustFactor(WindSpec.Asce7 a, boolean given, Optional<Asce7GustFactor> computed) {
         Map<String, Object> m = new LinkedHashMap<>();
-        m.put("value", computed.map(Asce7GustFactor::value).orElse(a.gustFactor()));
-        m.put("source", computed.isEmpty() ? "given" : computed.get().flexible() ? "flexible" : "rigid");
+        m.put("value", given || computed.isEmpty() ? a.gustFactor() : computed.get().value());
+        m.put("source", given || computed.isEmpty() ? "given" : computed.get().flexible() ? "flexible" : "rigid");
         computed.ifPresent(g -> {
+            m.put("computed", g.value());
+            m.put("flexible", g.flexible());
             m.put("method", g.flexible() ? "ASCE 7-16 26.11.5 (26.11-10)" : "ASCE 7-16 26.11.1 (rigid, n1 >= 1 Hz)");
             m.put("frequencyHz", g.frequency());
             m.put("dampingRatio", g.dampingRatio());
@@ -577,14 +585,21 @@ public final class ResultsDocument {
         return m;
     }
 
-    /** c_s·c_d as used: given by the user, or computed by EN 1991-1-4 Annex B with its steps. */
-    private static Map<String, Object> structuralFactor(WindSpec.En1991 en, Optional<En1991StructuralFactor> computed) {
+    /**
+     * c_s·c_d as used: given by the user, or computed by EN 1991-1-4 Annex B; with the computed value
+     * and its steps whenever it was computed (beside a given one too).
+     */
+    private static Map<String, Object> structuralFactor(WindSpec.En1991 en, boolean given,
+                                                        Optional<En1991StructuralFactor> computed) {
         Map<String, Object> m = new LinkedHashMap<>();
-        m.put("value", computed.map(En1991StructuralFactor::value).orElse(en.structuralFactor()));
-        m.put("source", computed.isPresent() ? "computed" : "given");
+        m.put("value", given || computed.isEmpty() ? en.structuralFactor() : computed.get().value());
+        m.put("source", given || computed.isEmpty() ? "given" : "computed");
         computed.ifPresent(f -> {
-            m.put("method", "EN 1991-1-4 6.3.1 (6.2) with Annex B");
+            m.put("computed", f.value());
+            m.put("method", "EN 1991-1-4 6.3.1 (6.2) with Annex B, damping F.5");
             m.put("frequencyHz", f.frequency());
+            m.put("structuralDamping", f.structuralDamping());
+            m.put("aerodynamicDamping", f.aerodynamicDamping());
             m.put("logDecrement", f.logDecrement());
             m.put("height", f.height());
             m.put("width", f.width());

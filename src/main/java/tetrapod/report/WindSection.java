@@ -72,52 +72,79 @@ final class WindSection implements Section {
         t.writeTo(out);
     }
 
-    /** The response factor c_s·c_d of an EN wind: as given, or computed with its steps (EN 1991-1-4 Annex B). */
+    /**
+     * The response factor c_s·c_d of an EN wind: computed with its steps, or the user's value marked as
+     * such with what the computation gives beside it (EN 1991-1-4 Annex B, damping F.5).
+     */
     private static void structuralFactor(Html out, Map<String, Object> f) {
         if (f.isEmpty()) {
             return;
         }
-        double value = Tree.num(f, "value");
-        if (!"computed".equals(Tree.str(f, "source"))) {
-            out.p("Structural factor c_s·c_d = " + Format.fixed(value, 3) + ", as the model gives it (not computed).");
+        String value = Format.fixed(Tree.num(f, "value"), 3);
+        boolean given = "given".equals(Tree.str(f, "source"));
+        if (!f.containsKey("computed")) {
+            out.p("Structural factor c_s·c_d = " + value + ": the user's value (the model's wind gives it; not computed).");
             return;
         }
-        out.p("Structural factor c_s·c_d = " + Format.fixed(value, 3) + ", computed from the tower by EN 1991-1-4 "
-                + "6.3.1 (6.2) and Annex B: first sway frequency n₁ = " + Format.fixed(Tree.num(f, "frequencyHz"), 2)
-                + " Hz (of the natural modes below), logarithmic decrement δ = " + Format.fixed(Tree.num(f, "logDecrement"), 2)
-                + " (the lowest of EN 1991-1-4 Table F.2 for lattice steel towers, without aerodynamic damping: both on the"
-                + " safe side), h = " + Format.metres(Tree.num(f, "height")) + " m, b = "
+        String steps = "by EN 1991-1-4 6.3.1 (6.2) and Annex B: first sway frequency n₁ = "
+                + Format.fixed(Tree.num(f, "frequencyHz"), 2) + " Hz (of the natural modes below), logarithmic decrement "
+                + "δ = δ_s + δ_a = " + Format.fixed(Tree.num(f, "structuralDamping"), 3) + " + "
+                + Format.fixed(Tree.num(f, "aerodynamicDamping"), 3) + " = " + Format.fixed(Tree.num(f, "logDecrement"), 3)
+                + " (δ_s structural, EN 1991-1-4 Table F.2 for lattice steel towers, from the model or its lowest value; "
+                + "δ_a aerodynamic, F.16 with the drag and the mass of the tower weighted by its own sway mode), h = "
+                + Format.metres(Tree.num(f, "height")) + " m, b = "
                 + Format.metres(Tree.num(f, "width")) + " m at z_s = " + Format.metres(Tree.num(f, "referenceHeight"))
                 + " m, I_v(z_s) = " + Format.fixed(Tree.num(f, "turbulenceIntensity"), 3) + ", v_m(z_s) = "
                 + Format.fixed(Tree.num(f, "meanVelocity"), 1) + " m/s, L(z_s) = " + Format.fixed(Tree.num(f, "lengthScale"), 1)
                 + " m, B² = " + Format.fixed(Tree.num(f, "background"), 3) + ", R² = " + Format.fixed(Tree.num(f, "resonant"), 3)
                 + ", ν = " + Format.fixed(Tree.num(f, "upCrossingHz"), 3) + " Hz, k_p = "
-                + Format.fixed(Tree.num(f, "peakFactor"), 2) + ". A structural factor given in the model's wind replaces it.");
+                + Format.fixed(Tree.num(f, "peakFactor"), 2) + ".";
+        if (given) {
+            out.p("Structural factor c_s·c_d = " + value + ": the user's value (the model's wind gives it), used by every "
+                    + "wind force; computed from the tower it would be " + Format.fixed(Tree.num(f, "computed"), 3) + ", "
+                    + steps);
+        } else {
+            out.p("Structural factor c_s·c_d = " + value + ", computed from the tower " + steps
+                    + " A structural factor given in the model's wind replaces it.");
+        }
     }
 
-    /** The gust-effect factor G of an ASCE 7 wind: as given, rigid, or flexible with its steps (§26.11). */
+    /**
+     * The gust-effect factor G of an ASCE 7 wind: rigid, flexible with its steps, or the user's value
+     * marked as such with what the computation gives beside it (§26.11).
+     */
     private static void gustFactor(Html out, Map<String, Object> g) {
         if (g.isEmpty()) {
             return;
         }
         String value = Format.fixed(Tree.num(g, "value"), 3);
         String source = Tree.str(g, "source");
-        if ("given".equals(source)) {
-            out.p("Gust-effect factor G = " + value + ", as the model gives it (not computed).");
-        } else if ("rigid".equals(source)) {
-            out.p("Gust-effect factor G = " + value + ": the tower's first sway frequency n₁ = "
+        if (!g.containsKey("computed")) {
+            out.p("Gust-effect factor G = " + value + ": the user's value (the model's wind gives it; not computed).");
+            return;
+        }
+        String computed;
+        if (!Tree.bool(g, "flexible")) {
+            computed = "G = " + Format.fixed(Tree.num(g, "computed"), 3) + ": the tower's first sway frequency n₁ = "
                     + Format.fixed(Tree.num(g, "frequencyHz"), 2) + " Hz is at least 1 Hz, so it is rigid and ASCE 7 "
-                    + "26.11.1 permits G = 0.85. A gust factor given in the model's wind replaces it.");
+                    + "26.11.1 permits G = 0.85.";
         } else {
-            out.p("Gust-effect factor G_f = " + value + " of a flexible tower by ASCE 7-16 26.11.5 (26.11-10): n₁ = "
-                    + Format.fixed(Tree.num(g, "frequencyHz"), 2) + " Hz, damping ratio β = "
-                    + Format.fixed(Tree.num(g, "dampingRatio"), 4) + " (δ/2π of the lowest EN 1991-1-4 Table F.2 value, the"
-                    + " safe side), z̄ = " + Format.metres(Tree.num(g, "equivalentHeight")) + " m, I_z̄ = "
+            computed = "G_f = " + Format.fixed(Tree.num(g, "computed"), 3) + " of a flexible tower by ASCE 7-16 26.11.5 "
+                    + "(26.11-10): n₁ = " + Format.fixed(Tree.num(g, "frequencyHz"), 2) + " Hz, damping ratio β = "
+                    + Format.fixed(Tree.num(g, "dampingRatio"), 4) + " (from the model, or δ/2π of the lowest EN 1991-1-4 "
+                    + "Table F.2 value for lattice steel towers, the safe side), z̄ = "
+                    + Format.metres(Tree.num(g, "equivalentHeight")) + " m, I_z̄ = "
                     + Format.fixed(Tree.num(g, "turbulenceIntensity"), 3) + ", L_z̄ = "
                     + Format.fixed(Tree.num(g, "lengthScale"), 1) + " m, Q² = " + Format.fixed(Tree.num(g, "background"), 3)
                     + ", V̄_z̄ = " + Format.fixed(Tree.num(g, "meanVelocity"), 1) + " m/s, R² = "
                     + Format.fixed(Tree.num(g, "resonant"), 3) + ", g_R = " + Format.fixed(Tree.num(g, "resonantPeakFactor"), 2)
-                    + ". A gust factor given in the model's wind replaces it.");
+                    + ".";
+        }
+        if ("given".equals(source)) {
+            out.p("Gust-effect factor G = " + value + ": the user's value (the model's wind gives it), used by every wind "
+                    + "force; computed from the tower it would be " + computed);
+        } else {
+            out.p("Gust-effect factor " + computed + " A gust factor given in the model's wind replaces it.");
         }
     }
 

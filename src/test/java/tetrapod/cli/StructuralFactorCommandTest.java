@@ -37,6 +37,9 @@ class StructuralFactorCommandTest {
         assertEquals("given", given.at("/structuralFactor/source").asText());
         assertEquals(1.0, given.at("/structuralFactor/value").asDouble(), 0);
         double value = factor.get("value").asDouble();
+        // the user's value is used, and the computation beside it is the same tower's (the factor changes no mass)
+        assertEquals(value, given.at("/structuralFactor/computed").asDouble(), 0);
+        assertEquals(value, factor.get("computed").asDouble(), 0);
         for (int a = 0; a < computed.get("wind").size(); a++) {
             JsonNode p = computed.get("wind").get(a).get("panels");
             JsonNode q = given.get("wind").get(a).get("panels");
@@ -58,6 +61,8 @@ class StructuralFactorCommandTest {
                 wind.path("turbulenceFactor").asDouble(1), wind.path("airDensity").asDouble(1.25), 1.0, java.util.List.of());
         En1991StructuralFactor again = En1991StructuralFactor.of(profile, factor.get("height").asDouble(),
                 factor.get("width").asDouble(), firstSway, factor.get("logDecrement").asDouble());
+        assertEquals(factor.get("structuralDamping").asDouble() + factor.get("aerodynamicDamping").asDouble(),
+                factor.get("logDecrement").asDouble(), 1e-15);   // EN 1991-1-4 (F.15)
         assertEquals(again.value(), value, 1e-12);
     }
 
@@ -72,7 +77,7 @@ class StructuralFactorCommandTest {
         assertEquals("rigid", g.get("source").asText());
         assertEquals(0.85, g.get("value").asDouble(), 0);
         assertTrue(g.get("frequencyHz").asDouble() >= 1.0);
-        assertTrue(run.out().contains("wind: G = 0.850 from the tower's first sway"), run.out());
+        assertTrue(run.out().contains("wind: G = 0.850 computed from the tower (first sway"), run.out());
     }
 
     private static TerrainCategory terrain(String name) {
@@ -93,7 +98,8 @@ class StructuralFactorCommandTest {
         if (name.equals("computed")) {
             assertTrue(run.out().contains("c_s·c_d = ") && run.out().contains("computed from the tower"), run.out());
         } else {
-            assertTrue(run.out().contains("c_s·c_d = 1.000 as given in the model"), run.out());
+            assertTrue(run.out().contains("c_s·c_d = 1.000 as given in the model (loads.wind.structuralFactor); "
+                    + "computed from the tower it would be "), run.out());
         }
         return MAPPER.readTree(out.resolve("results.json").toFile());
     }

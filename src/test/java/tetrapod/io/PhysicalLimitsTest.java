@@ -55,6 +55,8 @@ class PhysicalLimitsTest {
             Map.entry("/$defs/frame/properties/members/items/properties/orientation/items", PhysicalLimits.ORIENTATION),
             Map.entry("/properties/loads/properties/nodal/items/properties/F/items", PhysicalLimits.NODAL_FORCE),
             Map.entry("/$defs/windEn1991/properties/orography", PhysicalLimits.OROGRAPHY),
+            Map.entry("/$defs/windEn1991/properties/structuralDamping", PhysicalLimits.LOG_DECREMENT),
+            Map.entry("/$defs/windAsce7/properties/dampingRatio", PhysicalLimits.DAMPING_RATIO),
             Map.entry("/$defs/pointItem/properties/weight", PhysicalLimits.ANCILLARY_WEIGHT),
             Map.entry("/$defs/pointItem/properties/area", PhysicalLimits.ANCILLARY_AREA),
             Map.entry("/$defs/linearItem/properties/weight", PhysicalLimits.LINEAR_WEIGHT),
