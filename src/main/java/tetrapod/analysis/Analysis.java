@@ -66,10 +66,13 @@ public final class Analysis {
         }
         BasisResponses responses = BasisResponses.of(system, vectors, progress);
 
-        Pass first = pass(tower, loads, checks, model, system, basis, responses, progress, 1.0);
+        Pass first = pass(tower, loads, checks, model, system, basis, responses, progress, 1.0, Map.of());
         SecondOrder second = SecondOrder.of(first.cases());
+        Map<String, Double> firstOrderAlpha = new HashMap<>();
+        first.cases().forEach(c -> firstOrderAlpha.put(c.id(), c.alphaCr()));
         Pass used = second.applied()
-                ? pass(tower, loads, checks, model, system, basis, responses, progress, second.amplification())
+                ? pass(tower, loads, checks, model, system, basis, responses, progress, second.amplification(),
+                        firstOrderAlpha)
                 : first;
         Sweep sweep = used.sweep();
         List<NaturalMode> natural = NaturalModes.of(system, basis, modes);
@@ -85,9 +88,14 @@ public final class Analysis {
     private record Pass(Sweep sweep, List<SolvedCase> cases, List<LegBaseExtremes> legBases,
                         List<MemberEnvelope> members, List<FoundationEnvelope> foundations, long total) { }
 
+    /**
+     * @param firstOrderAlpha α_cr of the first-order cases by id (empty for the first-order pass): the
+     *                        amplified cases keep the α_cr of their first-order forces, the one
+     *                        EN 1993-1-1 5.2.1 and 5.2.2 speak of
+     */
     private static Pass pass(Tower tower, TowerLoads loads, ChecksSpec checks, StructuralModel model,
                              FactoredSystem system, LoadBasis basis, BasisResponses responses, ProgressListener progress,
-                             double sway) throws UnstableStructureException {
+                             double sway, Map<String, Double> firstOrderAlpha) throws UnstableStructureException {
         String sweeping = sway == 1.0 ? "sweep and checks" : "sweep and checks, second order";
         String solving = sway == 1.0 ? "cases in full" : "cases in full, second order";
         FoundationCheck footing = checks.foundationSpec()
@@ -152,7 +160,12 @@ public final class Analysis {
         List<SolvedCase> cases = new ArrayList<>(reported.size());
         int solved = 0;
         for (CaseKey key : reported.values()) {
-            cases.add(solveCase(system, loads.loadCase(key, sway)));
+            double wind = key.combination().hasWind() ? sway : 1.0;
+            Double alpha = firstOrderAlpha.get(key.id());
+            if (alpha == null && wind != 1.0) {
+                alpha = solveCase(system, loads.loadCase(key)).alphaCr();   // a case that governs only amplified
+            }
+            cases.add(solveCase(system, loads.loadCase(key, sway), wind, alpha));
             progress.progress(solving, ++solved, reported.size());
         }
         return new Pass(sweep, cases, legBases, members, foundations, total);
@@ -188,16 +201,28 @@ public final class Analysis {
      *         would carry part of the case's load, or the case's elastic critical load factor is ≤ 1
      */
     public static SolvedCase solveCase(FactoredSystem system, LoadCase loadCase) throws UnstableStructureException {
+        return solveCase(system, loadCase, 1.0, null);
+    }
+
+    /**
+     * As {@link #solveCase(FactoredSystem, LoadCase)}, for a case whose wind forces were multiplied by
+     * {@code windAmplification} (second order, {@link SecondOrder}), which the case records with the
+     * α_cr of its first-order forces {@code firstOrderAlpha} (null: of the forces solved here).
+     */
+    static SolvedCase solveCase(FactoredSystem system, LoadCase loadCase, double windAmplification,
+                                Double firstOrderAlpha) throws UnstableStructureException {
         Solution solution = system.solve(new LoadVector(loadCase.id(), loadCase.loads()));
         solution.requireLoadCarried(loadCase.id());
-        double alphaCr = CriticalLoad.factor(system, CriticalLoad.axialForces(solution));
+        double alphaCr = firstOrderAlpha != null ? firstOrderAlpha
+                : CriticalLoad.factor(system, CriticalLoad.axialForces(solution));
         if (alphaCr <= 1) {
             throw new UnstableStructureException(String.format(java.util.Locale.ROOT, "unstable structure: in case '%s' "
                     + "the elastic critical load factor α_cr is %.3f (≤ 1): the structure buckles as a whole under "
                     + "these forces (EN 1993-1-1 5.2.1); stiffen the legs or the bracing", loadCase.id(), alphaCr),
                     java.util.List.of());
         }
-        return new SolvedCase(loadCase.id(), loadCase.combination(), loadCase.azimuthDeg(), solution, alphaCr);
+        return new SolvedCase(loadCase.id(), loadCase.combination(), loadCase.azimuthDeg(), solution, alphaCr,
+                windAmplification);
     }
 
     /** The azimuths a combination is taken at: {@code azimuths} with wind, one null without. */

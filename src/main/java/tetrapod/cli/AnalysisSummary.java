@@ -100,6 +100,16 @@ final class AnalysisSummary {
                         + " the amplification is outside its range: stiffen the tower%n", so.alphaCr());
             }
         }
+        Map<String, SolvedCase> least = new LinkedHashMap<>();
+        for (SolvedCase c : r.cases()) {
+            least.merge(c.combination(), c, (a, b) -> b.alphaCr() < a.alphaCr() ? b : a);
+        }
+        List<String> parts = new ArrayList<>();
+        least.forEach((combination, c) -> parts.add(String.format(Locale.ROOT, "%s %s%s%s", combination,
+                Double.isFinite(c.alphaCr()) ? String.format(Locale.ROOT, "%.1f", c.alphaCr()) : "none",
+                c.azimuthDeg() == null ? "" : String.format(Locale.ROOT, " at %s deg", CaseKey.degrees(c.azimuthDeg())),
+                c.windAmplification() != 1.0 ? String.format(Locale.ROOT, ", wind x %.3f", c.windAmplification()) : "")));
+        out.println("  smallest α_cr of each combination's cases in full: " + String.join("; ", parts));
     }
 
     /** The first sway and first torsion frequencies, and every mode computed on one line. */

@@ -1,5 +1,6 @@
 package tetrapod.report;
 
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Locale;
@@ -40,6 +41,7 @@ final class NaturalModesSection implements Section {
                         + "second-order analysis instead: the amplification is outside its range; stiffen the tower." : ""));
             }
         }
+        alphaByCombination(out, Tree.maps(ri.results().document(), "cases"));
         List<ModeRow> modes = ri.results().modes();
         if (modes.isEmpty()) {
             out.p("No natural modes were computed (nothing carries mass).");
@@ -70,6 +72,31 @@ final class NaturalModesSection implements Section {
                     Cell.num(Format.fixed(m.massZ(), 3)), Cell.num(Format.fixed(m.inertiaZ(), 3)));
         }
         t.writeTo(out);
+    }
+
+    /** The smallest α_cr of each combination's cases solved in full, with the wind amplification its cases took. */
+    private static void alphaByCombination(Html out, List<Map<String, Object>> cases) {
+        Map<String, Map<String, Object>> least = new LinkedHashMap<>();
+        for (Map<String, Object> c : cases) {
+            least.merge(Tree.str(c, "combination"), c, (a, b) -> alpha(b) < alpha(a) ? b : a);
+        }
+        if (least.isEmpty()) {
+            return;
+        }
+        Table t = new Table("alpha-table", "", List.of("combination", "smallest α_cr", "its case",
+                "wind amplification 1/(1 − 1/α_cr)"));
+        least.forEach((combination, c) -> {
+            Double a = Tree.numOrNull(c, "alphaCr");
+            Double amplification = Tree.numOrNull(c, "windAmplification");
+            t.row(Cell.of(combination), Cell.num(a == null ? "none" : Format.fixed(a, 1)), Cell.of(Tree.str(c, "id")),
+                    Cell.num(amplification == null || amplification == 1.0 ? "—" : Format.fixed(amplification, 3)));
+        });
+        t.writeTo(out);
+    }
+
+    private static double alpha(Map<String, Object> c) {
+        Double a = Tree.numOrNull(c, "alphaCr");
+        return a == null ? Double.POSITIVE_INFINITY : a;
     }
 
     private static String label(String kind) {

@@ -482,6 +482,7 @@ public final class ResultsDocument {
         m.put("memberForces", s.memberForces().stream().map(ResultsDocument::memberForces).toList());
         m.put("equilibriumError", s.equilibriumError());
         m.put("alphaCr", Double.isFinite(c.alphaCr()) ? c.alphaCr() : null);
+        m.put("windAmplification", c.windAmplification());
         return m;
     }
 

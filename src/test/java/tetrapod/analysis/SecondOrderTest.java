@@ -42,6 +42,10 @@ class SecondOrderTest {
             // the dead load has no horizontal part: the whole horizontal reaction is the wind's, amplified
             assertEquals(so.amplification() * horizontal(first), horizontal(c), 1e-9 * Math.abs(horizontal(first)) + 1e-6,
                     c.id());
+            // each case records the amplification of its wind and the α_cr of its first-order forces
+            assertEquals(key.combination().hasWind() ? so.amplification() : 1.0, c.windAmplification(), 0, c.id());
+            assertEquals(first.alphaCr(), c.alphaCr(), 1e-9 * first.alphaCr(), c.id());
+            assertTrue(c.alphaCr() >= so.alphaCr(), "the run's factor comes from the smallest α_cr: " + c.id());
         }
     }
 
