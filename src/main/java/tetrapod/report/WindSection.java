@@ -90,7 +90,8 @@ final class WindSection implements Section {
                 + Format.fixed(Tree.num(f, "frequencyHz"), 2) + " Hz (of the natural modes below), logarithmic decrement "
                 + "δ = δ_s + δ_a = " + Format.fixed(Tree.num(f, "structuralDamping"), 3) + " + "
                 + Format.fixed(Tree.num(f, "aerodynamicDamping"), 3) + " = " + Format.fixed(Tree.num(f, "logDecrement"), 3)
-                + " (δ_s structural, EN 1991-1-4 Table F.2 for lattice steel towers, from the model or its lowest value; "
+                + " (δ_s structural, EN 1991-1-4 Table F.2 for lattice steel towers, values recalled from memory: the "
+                + "model's, else the table's lowest; "
                 + "δ_a aerodynamic, F.16 with the drag and the mass of the tower weighted by its own sway mode), h = "
                 + Format.metres(Tree.num(f, "height")) + " m, b = "
                 + Format.metres(Tree.num(f, "width")) + " m at z_s = " + Format.metres(Tree.num(f, "referenceHeight"))
