@@ -42,17 +42,7 @@ public final class ComputedStructuralFactor {
      *                 nothing that can sway)
      * @param given    whether the wind uses the model's own value (the computed one is then only reported)
      */
-    public record Resolved(TowerSpec spec, Optional<ResponseFactor> computed, boolean given) {
-
-        /** The factor the wind uses, or NaN without an EN or ASCE 7 wind. */
-        public double used() {
-            WindSpec wind = spec.loads().wind();
-            if (wind instanceof WindSpec.En1991 en) {
-                return en.structuralFactor();
-            }
-            return wind instanceof WindSpec.Asce7 a ? a.gustFactor() : Double.NaN;
-        }
-    }
+    public record Resolved(TowerSpec spec, Optional<ResponseFactor> computed, boolean given) { }
 
     private ComputedStructuralFactor() { }
 
