@@ -5,6 +5,9 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import tetrapod.common.BadInputException;
+import tetrapod.model.spec.ServiceabilitySpec;
 import tetrapod.check.Extreme;
 import tetrapod.check.FoundationCheck;
 import tetrapod.check.FoundationEnvelope;
@@ -55,6 +58,16 @@ public final class Analysis {
      */
     public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
                                      ProgressListener progress) throws UnstableStructureException {
+        return run(tower, loads, checks, modes, defaultPlan(tower, loads), progress);
+    }
+
+    /**
+     * As {@link #run(Tower, TowerLoads, ChecksSpec, int, ProgressListener)}, with the serviceability
+     * sweep of {@code serviceability} (empty for none: an explicit frame).
+     */
+    public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
+                                     Optional<ServiceabilityPlan> serviceability, ProgressListener progress)
+            throws UnstableStructureException {
         StructuralModel model = StructuralModel.of(tower.frame());
         progress.progress("prepare model", 1, 1);
         FactoredSystem system = Solver.factor(model, progress);
@@ -132,11 +145,25 @@ public final class Analysis {
         }
         List<NaturalMode> natural = NaturalModes.of(system, basis, modes);
         progress.progress("natural modes", 1, 1);
+        ServiceabilityResult movement = null;
+        if (serviceability.isPresent()) {
+            movement = ServiceabilitySweep.of(system, serviceability.get()).run();
+            progress.progress("serviceability", 1, 1);
+        }
         List<AzimuthWind> wind = new ArrayList<>();
         loads.wind().ifPresent(w -> REPORTED_AZIMUTHS.forEach(a -> wind.add(w.azimuth(a))));
         return new AnalysisResult(tower, loads, model, cases, wind, sweep.legBaseSweeps(), legBases, members,
                 foundations, sweep.handComparisons(), responses, (int) total, sweep.utilisationByAzimuth(),
-                sweep.autoRestraintPeaks(), natural);
+                sweep.autoRestraintPeaks(), natural, movement);
+    }
+
+    /** The serviceability plan with the default service wind and no limits (none for an explicit frame). */
+    private static Optional<ServiceabilityPlan> defaultPlan(Tower tower, TowerLoads loads) {
+        try {
+            return ServiceabilityPlan.of(tower, loads, ServiceabilitySpec.NONE);
+        } catch (BadInputException e) {
+            throw new IllegalStateException("no level ranges, no problem: " + e.getMessage(), e);
+        }
     }
 
     /** Adds the case where {@code e} occurred to the reported cases (after those already there). */

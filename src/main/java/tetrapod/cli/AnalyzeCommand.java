@@ -85,7 +85,8 @@ final class AnalyzeCommand implements Callable<Integer> {
             watch.end("read, generate, loads");
             try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
                 result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
-                        modes == null ? NaturalModes.DEFAULT_COUNT : modes, StageTimes.both(progress, watch));
+                        modes == null ? NaturalModes.DEFAULT_COUNT : modes, loaded.serviceability(),
+                        StageTimes.both(progress, watch));
             }
             if (modes != null && result.modes().size() < modes) {
                 throw BadInputException.at("--modes", "asked for " + modes + " modes; the structure has only "

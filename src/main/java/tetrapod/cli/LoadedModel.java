@@ -1,6 +1,8 @@
 package tetrapod.cli;
 
 import java.nio.file.Path;
+import java.util.Optional;
+import tetrapod.analysis.ServiceabilityPlan;
 import tetrapod.common.BadInputException;
 import tetrapod.generate.Tower;
 import tetrapod.generate.TowerGenerator;
@@ -12,9 +14,12 @@ import tetrapod.model.spec.TowerSpec;
 import tetrapod.section.SectionCatalogue;
 import tetrapod.section.SteelGrades;
 
-/** A model file read, its sections and material resolved, its tower built and its loads formed. */
+/**
+ * A model file read, its sections and material resolved, its tower built, its loads formed and its
+ * serviceability sweep planned (empty for an explicit frame).
+ */
 record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Material material, Tower tower,
-                   TowerLoads loads) {
+                   TowerLoads loads, Optional<ServiceabilityPlan> serviceability) {
 
     static LoadedModel read(Path file) throws BadInputException {
         TowerSpec spec;
@@ -28,7 +33,8 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
         try {
             Tower tower = TowerGenerator.generate(spec, sections, material);
             TowerLoads loads = TowerLoads.build(tower, spec.loads());
-            return new LoadedModel(file, spec, sections, material, tower, loads);
+            Optional<ServiceabilityPlan> serviceability = ServiceabilityPlan.of(tower, loads, spec.serviceability());
+            return new LoadedModel(file, spec, sections, material, tower, loads, serviceability);
         } catch (BadInputException e) {
             // found after reading: the paths are known, the lines are looked up in the file
             throw ProblemLines.located(file, e);
