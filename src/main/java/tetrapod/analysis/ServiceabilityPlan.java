@@ -104,7 +104,10 @@ public final class ServiceabilityPlan {
                 items));
     }
 
-    /** The strictest limits of the ranges holding each level; every range must hold one. */
+    /**
+     * The strictest limits of the ranges holding each level above the base (the base stands on the
+     * supports); every range must hold one.
+     */
     private static List<ServiceLimits> levelLimits(List<PanelLevel> levels, List<LevelLimitSpec> ranges)
             throws BadInputException {
         List<ServiceLimits> out = new ArrayList<>();
@@ -115,7 +118,7 @@ public final class ServiceabilityPlan {
             double from = Double.isNaN(r.from()) ? Double.NEGATIVE_INFINITY : r.from() - 1e-9;
             double to = Double.isNaN(r.to()) ? Double.POSITIVE_INFINITY : r.to() + 1e-9;
             boolean any = false;
-            for (int l = 0; l < levels.size(); l++) {
+            for (int l = 1; l < levels.size(); l++) { // the base stands on the supports
                 double z = levels.get(l).z();
                 if (z >= from && z <= to) {
                     out.set(l, out.get(l).strictest(limits(r.limits(), z)));
@@ -123,8 +126,8 @@ public final class ServiceabilityPlan {
                 }
             }
             if (!any) {
-                problems.add(Problem.at("serviceability.levels[" + k + "]", "holds no panel level; the levels are at "
-                        + String.join(", ", levels.stream().map(l -> CaseKey.degrees(l.z())).toList()) + " m"));
+                problems.add(Problem.at("serviceability.levels[" + k + "]", "holds no panel level above the base; the levels are at "
+                        + String.join(", ", levels.stream().skip(1).map(l -> CaseKey.degrees(l.z())).toList()) + " m"));
             }
         }
         if (!problems.isEmpty()) {

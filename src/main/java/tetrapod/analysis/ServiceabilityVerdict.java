@@ -63,8 +63,14 @@ public final class ServiceabilityVerdict {
             return "no limits given: the movements are reported without a verdict";
         }
         if (exceedances.isEmpty()) {
-            return "every limit met (" + count(limitedItems, "ancillary", "ancillaries") + ", "
-                    + count(limitedLevels, "level", "levels") + " with limits)";
+            List<String> parts = new ArrayList<>();
+            if (limitedItems > 0) {
+                parts.add(count(limitedItems, "ancillary", "ancillaries"));
+            }
+            if (limitedLevels > 0) {
+                parts.add(count(limitedLevels, "level", "levels"));
+            }
+            return "every limit met (" + String.join(" and ", parts) + " with limits)";
         }
         Map<String, List<Exceedance>> groups = new LinkedHashMap<>();
         for (boolean ancillary : new boolean[] {true, false}) {

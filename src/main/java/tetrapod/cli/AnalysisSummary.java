@@ -89,8 +89,7 @@ final class AnalysisSummary {
         out.printf(Locale.ROOT, "  %-28s %8s  %17s  %17s  %17s  %s%n", "level or ancillary", "height m", "sway mm (wind)",
                 "tilt deg (wind)", "twist deg (wind)", "limits: sway mm, tilt deg, twist deg");
         List<ServiceMotion> rows = new ArrayList<>();
-        rows.add(top);
-        s.levels().stream().filter(l -> l != top && l.limits().any()).forEach(rows::add);
+        s.levels().stream().filter(l -> l == top || l.limits().any()).forEach(rows::add);
         rows.addAll(s.ancillaries());
         for (ServiceMotion m : rows) {
             String height = m instanceof ServiceMotion.Ancillary a && a.linear()
