@@ -253,7 +253,7 @@ public final class ResultsDocument {
             item.put("face", a.face().label());
             item.put("zFrom", a.zFrom());
             item.put("zTo", a.zTo());
-            movements(item, a, a.linear());
+            movements(item, a, true);
             return item;
         }).toList());
         return m;
