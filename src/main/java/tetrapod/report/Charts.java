@@ -29,6 +29,8 @@ final class Charts {
 
     static final int WIDTH = 720;
     static final int HEIGHT = 430;
+    /** Height of a chart of three panels side by side over height, px: short, to print in little space. */
+    static final int SHORT_HEIGHT = 340;
 
     private Charts() { }
 
@@ -206,7 +208,7 @@ final class Charts {
         plot.setFixedLegendItems(subplots.get(0).getLegendItems());
         return Optional.of(Figure.draw("fig-serviceability", "Movement under the serviceability combination against "
                 + "height, the largest over every azimuth: sway, tilt and twist of each panel level (line) and of each "
-                + "ancillary (points), with the limits given (red).", chart, WIDTH, HEIGHT));
+                + "ancillary (points), with the limits given (red).", chart, WIDTH, SHORT_HEIGHT));
     }
 
     /** Steel mass and largest utilisation at each iteration of tetrapod size (two range axes). */

@@ -37,20 +37,18 @@ final class ServiceabilitySection implements Section {
             return;
         }
         Rows.ServiceCase c = r.serviceCase().orElseThrow();
-        out.p("Combination " + c.combination() + ": the dead load"
-                + (c.combination().contains("Q") ? ", the nodal loads of the model file" : "")
-                + (c.windRule().isEmpty() ? ", no wind (the model has none)" : " and the service wind Ws")
-                + ", each with factor 1.0 and no ice, from every azimuth of the sweep. "
-                + (c.windRule().isEmpty() ? "" : "Ws: " + c.windRule() + "; its velocity pressure is "
-                + Format.fixed(c.pressureRatio(), 3) + " times the strength wind's at every height. "));
-        out.p("At each panel level the movement is the rigid-body motion that best fits (least squares) the "
-                + "displacements of the level's four leg nodes: sway is the horizontal displacement of the legs' centre, "
-                + "tilt the rotation about a horizontal axis (from the legs' vertical displacements), twist the "
-                + "rotation about the vertical. An ancillary between two levels moves as the straight-line "
-                + "interpolation of the two levels' motions, taken at its attachment point (the middle of its face, "
-                + "or the tower's axis); an item running up the tower takes the largest value along its run. Each "
-                + "value is the largest over every azimuth, formed by superposing the responses to the load basis, "
-                + "with the azimuth where it occurs.");
+        out.p("Combination " + c.combination() + " (the dead load"
+                + (c.combination().contains("Q") ? ", the nodal loads" : "")
+                + (c.windRule().isEmpty() ? "; the model has no wind" : " and the service wind Ws")
+                + ", factor 1.0, no ice) from every azimuth. "
+                + (c.windRule().isEmpty() ? "" : "Ws: " + c.windRule() + "; velocity pressure "
+                + Format.fixed(c.pressureRatio(), 3) + " times the strength wind's. ")
+                + "Each panel level moves as the rigid body that best fits (least squares) the displacements of its "
+                + "four leg nodes: sway is the horizontal displacement of their centre, tilt the rotation about a "
+                + "horizontal axis, twist the rotation about the vertical. An ancillary takes the straight-line "
+                + "interpolation of the levels below and above it at its attachment point (the middle of its face, or "
+                + "the axis), an item running up the tower the largest value along its run. Each value is the largest "
+                + "over every azimuth (by superposition), given with that azimuth.");
         out.element("p", "class=\"verdict\"", "Verdict: " + verdict(rows));
         Charts.serviceability(r).ifPresent(f -> ReportHtml.figure(out, f));
         Table t = new Table("serviceability-table", "", List.of("level or ancillary", "height, m", "sway, mm",
