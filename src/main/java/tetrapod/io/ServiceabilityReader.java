@@ -35,6 +35,9 @@ final class ServiceabilityReader {
     static final Bound HEIGHT_RATIO = new Bound(10, true, 100_000, true);
     static final Bound ROTATION_DEG = new Bound(0, false, 10, true);
 
+    /** The wind method when loads.wind is given but its method cannot be read (reported there). */
+    static final String UNREADABLE_WIND = "";
+
     private final Problems problems;
 
     ServiceabilityReader(Problems problems) {
@@ -58,7 +61,8 @@ final class ServiceabilityReader {
     /**
      * The serviceability object, or null (reported).
      *
-     * @param windMethod  the model's wind method (en1991, asce7, uniform), or null without wind
+     * @param windMethod  the model's wind method (en1991, asce7, uniform), null without wind, or
+     *                    {@link #UNREADABLE_WIND} when its method is missing or unknown
      * @param height      the generated tower's height, m (NaN when not known)
      * @param ancillaries the file's {@code loads.ancillaries} array, or null
      */
@@ -98,8 +102,9 @@ final class ServiceabilityReader {
         List<String> all = List.of("returnPeriod", "probabilityFactor", "speed", "windFactor");
         f.allowOnly(all);
         List<String> given = f.keys().stream().filter(all::contains).toList();
+        boolean known = method != null && WIND_KEYS.containsKey(method);
         if (given.isEmpty()) {
-            problems.add(f.path(), "give one of " + String.join(", ", method == null ? all : WIND_KEYS.get(method))
+            problems.add(f.path(), "give one of " + String.join(", ", known ? WIND_KEYS.get(method) : all)
                     + " (or leave serviceability.wind out for the default of the wind method)");
             return null;
         }
@@ -113,7 +118,7 @@ final class ServiceabilityReader {
                     + "load alone");
             return null;
         }
-        if (!WIND_KEYS.get(method).contains(key)) {
+        if (known && !WIND_KEYS.get(method).contains(key)) {
             problems.add(f.path(key), "does not go with the " + method + " wind; with it give "
                     + String.join(" or ", WIND_KEYS.get(method)));
             return null;

@@ -163,6 +163,9 @@ public final class SpecReader {
             String method = text(root.get("loads"), "wind", "method");
             method = method != null && LoadsReader.WIND_METHODS.contains(method) ? method : null;
             JsonNode loads = root.get("loads");
+            if (method == null && loads != null && loads.isObject() && loads.has("wind")) {
+                method = ServiceabilityReader.UNREADABLE_WIND;
+            }
             JsonNode items = loads != null && loads.isObject() ? loads.get("ancillaries") : null;
             return new ServiceabilityReader(problems).read(f, method, height, items);
         }
