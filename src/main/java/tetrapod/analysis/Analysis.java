@@ -5,12 +5,14 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import tetrapod.check.Extreme;
 import tetrapod.check.FoundationCheck;
 import tetrapod.check.FoundationEnvelope;
 import tetrapod.check.MemberChecker;
 import tetrapod.check.MemberEnvelope;
 import tetrapod.check.ReactionLevel;
+import tetrapod.common.BadInputException;
 import tetrapod.common.ProgressListener;
 import tetrapod.common.UnstableStructureException;
 import tetrapod.generate.Tower;
@@ -23,6 +25,7 @@ import tetrapod.load.LoadComponent;
 import tetrapod.load.TowerLoads;
 import tetrapod.model.spec.ChecksSpec;
 import tetrapod.model.spec.LoadAction;
+import tetrapod.model.spec.ServiceabilitySpec;
 import tetrapod.solve.BasisResponses;
 import tetrapod.solve.CriticalLoad;
 import tetrapod.solve.FactoredSystem;
@@ -56,6 +59,16 @@ public final class Analysis {
      */
     public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
                                      ProgressListener progress) throws UnstableStructureException {
+        return run(tower, loads, checks, modes, defaultPlan(tower, loads), progress);
+    }
+
+    /**
+     * As {@link #run(Tower, TowerLoads, ChecksSpec, int, ProgressListener)}, with the serviceability
+     * sweep of {@code serviceability} (empty for none: an explicit frame).
+     */
+    public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
+                                     Optional<ServiceabilityPlan> serviceability, ProgressListener progress)
+            throws UnstableStructureException {
         StructuralModel model = StructuralModel.of(tower.frame());
         progress.progress("prepare model", 1, 1);
         FactoredSystem system = Solver.factor(model, progress);
@@ -77,11 +90,16 @@ public final class Analysis {
         Sweep sweep = used.sweep();
         List<NaturalMode> natural = NaturalModes.of(system, basis, modes);
         progress.progress("natural modes", 1, 1);
+        ServiceabilityResult movement = null;
+        if (serviceability.isPresent()) {
+            movement = ServiceabilitySweep.of(system, serviceability.get()).run();
+            progress.progress("serviceability", 1, 1);
+        }
         List<AzimuthWind> wind = new ArrayList<>();
         loads.wind().ifPresent(w -> REPORTED_AZIMUTHS.forEach(a -> wind.add(w.azimuth(a))));
         return new AnalysisResult(tower, loads, model, used.cases(), wind, sweep.legBaseSweeps(), used.legBases(),
                 used.members(), used.foundations(), sweep.handComparisons(), responses, (int) used.total(),
-                sweep.utilisationByAzimuth(), sweep.autoRestraintPeaks(), natural, second);
+                sweep.utilisationByAzimuth(), sweep.autoRestraintPeaks(), natural, second, movement);
     }
 
     /** The sweep, the checks and the cases solved in full, with the wind multiplied by {@code sway}. */
@@ -185,6 +203,15 @@ public final class Analysis {
             }
         }
         return weights;
+    }
+
+    /** The serviceability plan with the default service wind and no limits (none for an explicit frame). */
+    private static Optional<ServiceabilityPlan> defaultPlan(Tower tower, TowerLoads loads) {
+        try {
+            return ServiceabilityPlan.of(tower, loads, ServiceabilitySpec.NONE);
+        } catch (BadInputException e) {
+            throw new IllegalStateException("no level ranges, no problem: " + e.getMessage(), e);
+        }
     }
 
     /** Adds the case where {@code e} occurred to the reported cases (after those already there). */

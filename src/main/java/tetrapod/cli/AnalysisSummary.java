@@ -25,6 +25,12 @@ import tetrapod.analysis.LegBaseExtremes;
 import tetrapod.analysis.NaturalMode;
 import tetrapod.analysis.SecondOrder;
 import tetrapod.analysis.SolvedCase;
+import tetrapod.analysis.MotionPeak;
+import tetrapod.analysis.Movement;
+import tetrapod.analysis.ServiceMotion;
+import tetrapod.analysis.ServiceabilityResult;
+import tetrapod.analysis.ServiceabilityVerdict;
+import tetrapod.load.ServiceWind;
 import tetrapod.check.CheckResult;
 import tetrapod.check.Extreme;
 import tetrapod.check.RequirementVerdict;
@@ -77,7 +83,59 @@ final class AnalysisSummary {
         double max = r.maxUtilisation();
         out.printf(Locale.ROOT, "%s: largest strength utilisation %.3f%n", max > 1.0 ? "OVERSTRESSED" : "all checks pass", max);
         out.println("requirements: " + RequirementVerdict.line(brokenRequirements(r)));
+        r.serviceabilityResult().ifPresent(s -> serviceability(out, s));
         out.println("Results must be checked by a qualified engineer against the codes that apply locally.");
+    }
+
+    /**
+     * The movement under the serviceability combination: the top level, every ancillary with its
+     * limits, then the verdict on a line of its own.
+     */
+    private static void serviceability(PrintWriter out, ServiceabilityResult s) {
+        ServiceMotion.Level top = s.top();
+        out.printf(Locale.ROOT, "movement under %s, every azimuth (Ws: %s):%n", s.combination(),
+                s.serviceWind().map(ServiceWind::rule).orElse("no wind in the model"));
+        out.printf(Locale.ROOT, "  %-28s %8s  %17s  %17s  %17s  %s%n", "level or ancillary", "height m", "sway mm (wind)",
+                "tilt deg (wind)", "twist deg (wind)", "limits: sway mm, tilt deg, twist deg");
+        List<ServiceMotion> rows = new ArrayList<>();
+        s.levels().stream().filter(l -> l == top || l.limits().any()).forEach(rows::add);
+        rows.addAll(s.ancillaries());
+        for (ServiceMotion m : rows) {
+            String height = m instanceof ServiceMotion.Ancillary a && a.linear()
+                    ? String.format(Locale.ROOT, "%.1f-%.1f", a.zFrom(), a.zTo())
+                    : String.format(Locale.ROOT, "%.1f", m instanceof ServiceMotion.Level l ? l.z()
+                            : ((ServiceMotion.Ancillary) m).zFrom());
+            out.printf(Locale.ROOT, "  %-28s %8s  %17s  %17s  %17s  %s%n", fit(m.label(), 28), height,
+                    movement(m, Movement.SWAY), movement(m, Movement.TILT), movement(m, Movement.TWIST), limits(m));
+        }
+        out.println("serviceability: " + ServiceabilityVerdict.line(s)
+                + (s.hasLimits() ? "" : " (give them in serviceability.levels and serviceability.ancillaries)"));
+    }
+
+    /** {@code text} cut to {@code width} characters, with "..." where cut. */
+    private static String fit(String text, int width) {
+        return text.length() <= width ? text : text.substring(0, width - 3) + "...";
+    }
+
+    private static String movement(ServiceMotion m, Movement q) {
+        MotionPeak p = m.envelope().of(q);
+        String value = q == Movement.SWAY ? String.format(Locale.ROOT, "%.1f", p.value() * 1e3)
+                : String.format(Locale.ROOT, "%.3f", Math.toDegrees(p.value()));
+        return value + (p.azimuthDeg() == null ? "" : " (" + CaseKey.degrees(p.azimuthDeg()) + ")")
+                + (Boolean.FALSE.equals(m.met(q)) ? "!" : " ");
+    }
+
+    private static String limits(ServiceMotion m) {
+        if (!m.limits().any()) {
+            return "none";
+        }
+        List<String> parts = new ArrayList<>();
+        for (Movement q : Movement.values()) {
+            double v = m.limits().of(q);
+            parts.add(Double.isNaN(v) ? "-" : q == Movement.SWAY ? String.format(Locale.ROOT, "%.1f", v * 1e3)
+                    : String.format(Locale.ROOT, "%.3f", Math.toDegrees(v)));
+        }
+        return String.join(", ", parts) + (m.allMet() ? ": met" : ": NOT MET");
     }
 
     /** The smallest elastic critical load factor of the cases solved in full, and what it means. */

@@ -33,7 +33,8 @@ import tetrapod.view.ViewData;
 /** The main job: analyse a tower under its loads and write the results. */
 @Command(name = "analyze", mixinStandardHelpOptions = true,
         description = "Analyse a tower: self-weight, ancillaries, ice and wind from every azimuth of the sweep, "
-                + "every combination; writes results.json, members.csv, reactions.csv, wind.csv, requirements.csv, tower.png and "
+                + "every combination, and the movement under the serviceability wind; writes results.json, members.csv, "
+                + "reactions.csv, wind.csv, requirements.csv, serviceability.csv, tower.png and "
                 + "report.html into the output folder and prints a summary.%n"
                 + "Results must be checked by a qualified engineer against the codes that apply locally.")
 final class AnalyzeCommand implements Callable<Integer> {
@@ -69,7 +70,7 @@ final class AnalyzeCommand implements Callable<Integer> {
 
     /** Every file one run writes: an output folder is replaced by a set of exactly these (and what it held besides). */
     static final Set<String> OUTPUTS = Set.of("results.json", CsvTables.MEMBERS, CsvTables.REACTIONS, CsvTables.WIND,
-            CsvTables.REQUIREMENTS, "tower.png", ReportHtml.FILE);
+            CsvTables.REQUIREMENTS, CsvTables.SERVICEABILITY, "tower.png", ReportHtml.FILE);
 
     @Override
     public Integer call() throws Exception {
@@ -89,7 +90,8 @@ final class AnalyzeCommand implements Callable<Integer> {
             watch.end("read, generate, loads");
             try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
                 result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
-                        modes == null ? NaturalModes.DEFAULT_COUNT : modes, StageTimes.both(progress, watch));
+                        modes == null ? NaturalModes.DEFAULT_COUNT : modes, loaded.serviceability(),
+                        StageTimes.both(progress, watch));
             }
             if (modes != null && result.modes().size() < modes) {
                 throw BadInputException.at("--modes", "asked for " + modes + " modes; the structure has only "
@@ -102,7 +104,8 @@ final class AnalyzeCommand implements Callable<Integer> {
         AnalysisSummary.print(out, loaded.spec(), result, loaded.responseFactor());
         out.println("tower.png " + route.replaceFirst("^render: ", "drawn by "));
         out.println("results written to " + folder + ": results.json, " + CsvTables.MEMBERS + ", "
-                + CsvTables.REACTIONS + ", " + CsvTables.WIND + ", " + CsvTables.REQUIREMENTS + ", tower.png, " + ReportHtml.FILE);
+                + CsvTables.REACTIONS + ", " + CsvTables.WIND + ", " + CsvTables.REQUIREMENTS + ", " + CsvTables.SERVICEABILITY
+                + ", tower.png, " + ReportHtml.FILE);
         if (timings) {
             out.printf(Locale.ROOT, "timings (%d DOF, %d load cases, %d basis vectors):%n",
                     result.model().freeDofCount(), result.caseCount(), result.responses().size());

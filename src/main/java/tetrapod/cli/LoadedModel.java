@@ -3,6 +3,7 @@ package tetrapod.cli;
 import java.nio.file.Path;
 import java.util.Optional;
 import tetrapod.analysis.ComputedStructuralFactor;
+import tetrapod.analysis.ServiceabilityPlan;
 import tetrapod.common.BadInputException;
 import tetrapod.common.UnstableStructureException;
 import tetrapod.generate.Tower;
@@ -17,13 +18,16 @@ import tetrapod.section.SectionCatalogue;
 import tetrapod.section.SteelGrades;
 
 /**
- * A model file read, its sections and material resolved, its tower built and its loads formed.
+ * A model file read, its sections and material resolved, its tower built, its loads formed and its
+ * serviceability sweep planned.
  *
  * @param spec           the model as read, with the wind's c_s·c_d or G filled in where it is computed
  * @param responseFactor the factor the wind uses, and the one computed from the tower when it was
+ * @param serviceability the serviceability sweep (empty for an explicit frame)
  */
 record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Material material, Tower tower,
-                   TowerLoads loads, ComputedStructuralFactor.Resolved responseFactor) {
+                   TowerLoads loads, ComputedStructuralFactor.Resolved responseFactor,
+                   Optional<ServiceabilityPlan> serviceability) {
 
     /** The model ready to analyse: a wind without a given c_s·c_d (EN) or G (ASCE 7) gets one computed from the tower. */
     static LoadedModel read(Path file) throws BadInputException, UnstableStructureException {
@@ -75,7 +79,8 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
                     loads = TowerLoads.build(tower, spec.loads());
                 }
             }
-            return new LoadedModel(file, spec, sections, material, tower, loads, factor);
+            Optional<ServiceabilityPlan> serviceability = ServiceabilityPlan.of(tower, loads, spec.serviceability());
+            return new LoadedModel(file, spec, sections, material, tower, loads, factor, serviceability);
         } catch (BadInputException e) {
             // found after reading: the paths are known, the lines are looked up in the file
             throw ProblemLines.located(file, e);

@@ -19,6 +19,11 @@ import tetrapod.model.spec.LoadAction;
 import tetrapod.analysis.HandComparison;
 import tetrapod.analysis.NaturalMode;
 import tetrapod.analysis.SecondOrder;
+import tetrapod.analysis.MotionPeak;
+import tetrapod.analysis.Movement;
+import tetrapod.analysis.ServiceMotion;
+import tetrapod.analysis.ServiceabilityResult;
+import tetrapod.load.ServiceWind;
 import tetrapod.analysis.HandGoverning;
 import tetrapod.load.Asce7Ice;
 import tetrapod.analysis.LegBaseExtremes;
@@ -123,6 +128,7 @@ public final class ResultsDocument {
         doc.put("checks", result.members().stream().map(ResultsDocument::memberCheck).toList());
         doc.put("requirements", result.members().stream().flatMap(ResultsDocument::requirements).toList());
         doc.put("modes", result.modes().stream().map(mode -> mode(mode, result.tower().frame())).toList());
+        doc.put("serviceability", result.serviceabilityResult().map(ResultsDocument::serviceability).orElse(null));
         doc.put("foundations", result.foundations().stream().map(ResultsDocument::foundation).toList());
         doc.put("legBases", result.legBases().stream().map(ResultsDocument::legBase).toList());
         doc.put("handMethod", result.hand().stream().map(ResultsDocument::hand).toList());
@@ -245,6 +251,69 @@ public final class ResultsDocument {
         }
         m.put("shape", shape);
         return m;
+    }
+
+    /**
+     * The serviceability envelope: the combination, the service wind, and each level's and
+     * ancillary's largest sway (m), tilt and twist (rad) with the azimuth (and height) where each
+     * occurs, its limits (null where none) and whether each is met (null without a limit).
+     */
+    private static Map<String, Object> serviceability(ServiceabilityResult s) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("combination", s.combination());
+        m.put("wind", s.serviceWind().map(ResultsDocument::serviceWind).orElse(null));
+        m.put("levels", s.levels().stream().map(l -> {
+            Map<String, Object> level = new LinkedHashMap<>();
+            level.put("level", l.level());
+            level.put("z", l.z());
+            movements(level, l, false);
+            return level;
+        }).toList());
+        m.put("ancillaries", s.ancillaries().stream().map(a -> {
+            Map<String, Object> item = new LinkedHashMap<>();
+            item.put("name", a.name());
+            item.put("kind", a.linear() ? "linear" : "point");
+            item.put("face", a.face().label());
+            item.put("zFrom", a.zFrom());
+            item.put("zTo", a.zTo());
+            movements(item, a, true);
+            return item;
+        }).toList());
+        return m;
+    }
+
+    private static Map<String, Object> serviceWind(ServiceWind w) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("method", w.profile().method());
+        m.put("rule", w.rule());
+        m.put("returnPeriod", finiteOrNull(w.returnPeriod()));
+        m.put("probabilityFactor", finiteOrNull(w.probabilityFactor()));
+        m.put("speed", finiteOrNull(w.speed()));
+        m.put("pressureRatio", w.pressureRatio());
+        return m;
+    }
+
+    private static void movements(Map<String, Object> m, ServiceMotion motion, boolean withHeight) {
+        Map<String, Object> limits = new LinkedHashMap<>();
+        Map<String, Object> met = new LinkedHashMap<>();
+        for (Movement q : Movement.values()) {
+            MotionPeak p = motion.envelope().of(q);
+            Map<String, Object> peak = new LinkedHashMap<>();
+            peak.put("value", clean(p.value()));
+            peak.put("azimuthDeg", p.azimuthDeg());
+            if (withHeight) {
+                peak.put("z", p.z());
+            }
+            m.put(q.label(), peak);
+            limits.put(q.label(), finiteOrNull(motion.limits().of(q)));
+            met.put(q.label(), motion.met(q));
+        }
+        m.put("limits", limits);
+        m.put("met", met);
+    }
+
+    private static Double finiteOrNull(double v) {
+        return Double.isFinite(v) ? v : null;
     }
 
     /** An extreme force as {value (N), case, azimuthDeg}; value 0 and case null when it never occurs. */
