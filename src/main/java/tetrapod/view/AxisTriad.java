@@ -23,8 +23,6 @@ public final class AxisTriad {
     static final double SHAFT_WIDTH = 24;
     static final double HEAD_WIDTH = 90;
     static final double HEAD_LENGTH = 0.3;
-    /** Labels sit this far out along each axis, in arrow lengths. */
-    static final double LABEL_AT = 1.32;
 
     private static final Vec3[] DIRECTIONS = {Vec3.X, Vec3.Y, Vec3.Z};
     private static final Rgb[] COLOURS = {GroundDecorations.AXIS_X, GroundDecorations.AXIS_Y, GroundDecorations.AXIS_Z};
@@ -61,19 +59,33 @@ public final class AxisTriad {
         return new Projector(camera(main), side, side);
     }
 
-    /** The x, y, z labels placed on the window (centred on each axis beyond its tip). */
+    /**
+     * The x, y, z labels placed on the window: beyond each arrow's projected tip, pushed out from the
+     * origin by half the label's diagonal so that a foreshortened arrow's label clears the others.
+     */
     static List<PlacedImage> labels(Camera main, int width, int height, LabelPainter painter) {
         ScreenRect v = viewport(width, height);
         Projector p = projector(main, v);
         List<PlacedImage> out = new ArrayList<>();
+        double[] o = new double[4];
         double[] xy = new double[4];
+        p.project(0, 0, 0, o);
         for (int k = 0; k < 3; k++) {
-            Vec3 at = DIRECTIONS[k].times(LABEL_AT);
-            if (p.project(at.x(), at.y(), at.z(), xy)) {
-                var image = painter.text(NAMES[k], LabelStyle.AXIS);
-                out.add(new PlacedImage(image, (int) Math.round(v.x0() + xy[0] - image.getWidth() / 2.0),
-                        (int) Math.round(v.y0() + xy[1] - image.getHeight() / 2.0)));
+            Vec3 tip = DIRECTIONS[k];
+            if (!p.project(tip.x(), tip.y(), tip.z(), xy)) {
+                continue;
             }
+            var image = painter.text(NAMES[k], LabelStyle.AXIS);
+            double dx = xy[0] - o[0];
+            double dy = xy[1] - o[1];
+            double length = Math.hypot(dx, dy);
+            double push = 0.5 * Math.hypot(image.getWidth(), image.getHeight()) + 2;
+            double ux = length > 1e-6 ? dx / length : Math.sqrt(0.5);
+            double uy = length > 1e-6 ? dy / length : -Math.sqrt(0.5);  // an arrow end-on: label up and right
+            double cx = o[0] + ux * (length + push);
+            double cy = o[1] + uy * (length + push);
+            out.add(new PlacedImage(image, (int) Math.round(v.x0() + cx - image.getWidth() / 2.0),
+                    (int) Math.round(v.y0() + cy - image.getHeight() / 2.0)));
         }
         return out;
     }
