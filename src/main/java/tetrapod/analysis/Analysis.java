@@ -55,6 +55,15 @@ public final class Analysis {
      */
     public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
                                      ProgressListener progress) throws UnstableStructureException {
+        return run(tower, loads, checks, modes, progress, Runtime.getRuntime().availableProcessors());
+    }
+
+    /**
+     * As {@link #run(Tower, TowerLoads, ChecksSpec, int, ProgressListener)}, with the member checks
+     * of the sweep on {@code threads} threads (at least 1; the results are the same with any number).
+     */
+    public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
+                                     ProgressListener progress, int threads) throws UnstableStructureException {
         StructuralModel model = StructuralModel.of(tower.frame());
         progress.progress("prepare model", 1, 1);
         FactoredSystem system = Solver.factor(model, progress);
@@ -71,7 +80,8 @@ public final class Analysis {
                 basis.components().stream().map(LoadComponent::loads).toList());
         double baseX = tower.isGenerated() ? tower.levels().get(0).widthX() : Double.NaN;
         double baseY = tower.isGenerated() ? tower.levels().get(0).widthY() : Double.NaN;
-        Sweep sweep = new Sweep(model, responses, MemberChecker.of(tower, checks), footing, resultants, baseX, baseY);
+        Sweep sweep = new Sweep(model, responses, MemberChecker.of(tower, checks), footing, resultants, baseX, baseY,
+                threads);
         Map<String, CaseKey> keys = new HashMap<>();
         List<Double> azimuths = loads.azimuths();
         long total = 0;
