@@ -5,12 +5,14 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import tetrapod.check.Extreme;
 import tetrapod.check.FoundationCheck;
 import tetrapod.check.FoundationEnvelope;
 import tetrapod.check.MemberChecker;
 import tetrapod.check.MemberEnvelope;
 import tetrapod.check.ReactionLevel;
+import tetrapod.common.BadInputException;
 import tetrapod.common.ProgressListener;
 import tetrapod.common.UnstableStructureException;
 import tetrapod.generate.Tower;
@@ -22,6 +24,8 @@ import tetrapod.load.LoadCase;
 import tetrapod.load.LoadComponent;
 import tetrapod.load.TowerLoads;
 import tetrapod.model.spec.ChecksSpec;
+import tetrapod.model.spec.LoadAction;
+import tetrapod.model.spec.ServiceabilitySpec;
 import tetrapod.solve.BasisResponses;
 import tetrapod.solve.CriticalLoad;
 import tetrapod.solve.FactoredSystem;
@@ -64,6 +68,26 @@ public final class Analysis {
      */
     public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
                                      ProgressListener progress, int threads) throws UnstableStructureException {
+        return run(tower, loads, checks, modes, defaultPlan(tower, loads), progress, threads);
+    }
+
+    /**
+     * As {@link #run(Tower, TowerLoads, ChecksSpec, int, ProgressListener)}, with the serviceability
+     * sweep of {@code serviceability} (empty for none: an explicit frame).
+     */
+    public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
+                                     Optional<ServiceabilityPlan> serviceability, ProgressListener progress)
+            throws UnstableStructureException {
+        return run(tower, loads, checks, modes, serviceability, progress, Runtime.getRuntime().availableProcessors());
+    }
+
+    /**
+     * The analysis in full: the serviceability sweep of {@code serviceability} (empty for none) and the
+     * member checks of the sweep on {@code threads} threads (at least 1; the results do not depend on it).
+     */
+    public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
+                                     Optional<ServiceabilityPlan> serviceability, ProgressListener progress,
+                                     int threads) throws UnstableStructureException {
         StructuralModel model = StructuralModel.of(tower.frame());
         progress.progress("prepare model", 1, 1);
         FactoredSystem system = Solver.factor(model, progress);
@@ -74,6 +98,43 @@ public final class Analysis {
         }
         BasisResponses responses = BasisResponses.of(system, vectors, progress);
 
+        Pass first = pass(tower, loads, checks, model, system, basis, responses, progress, threads, 1.0, Map.of());
+        SecondOrder second = SecondOrder.of(first.cases());
+        Map<String, Double> firstOrderAlpha = new HashMap<>();
+        first.cases().forEach(c -> firstOrderAlpha.put(c.id(), c.alphaCr()));
+        Pass used = second.applied()
+                ? pass(tower, loads, checks, model, system, basis, responses, progress, threads, second.amplification(),
+                        firstOrderAlpha)
+                : first;
+        Sweep sweep = used.sweep();
+        List<NaturalMode> natural = NaturalModes.of(system, basis, modes);
+        progress.progress("natural modes", 1, 1);
+        ServiceabilityResult movement = null;
+        if (serviceability.isPresent()) {
+            movement = ServiceabilitySweep.of(system, serviceability.get()).run();
+            progress.progress("serviceability", 1, 1);
+        }
+        List<AzimuthWind> wind = new ArrayList<>();
+        loads.wind().ifPresent(w -> REPORTED_AZIMUTHS.forEach(a -> wind.add(w.azimuth(a))));
+        return new AnalysisResult(tower, loads, model, used.cases(), wind, sweep.legBaseSweeps(), used.legBases(),
+                used.members(), used.foundations(), sweep.handComparisons(), responses, (int) used.total(),
+                sweep.utilisationByAzimuth(), sweep.autoRestraintPeaks(), natural, second, movement);
+    }
+
+    /** The sweep, the checks and the cases solved in full, with the wind multiplied by {@code sway}. */
+    private record Pass(Sweep sweep, List<SolvedCase> cases, List<LegBaseExtremes> legBases,
+                        List<MemberEnvelope> members, List<FoundationEnvelope> foundations, long total) { }
+
+    /**
+     * @param firstOrderAlpha α_cr of the first-order cases by id (empty for the first-order pass): the
+     *                        amplified cases keep the α_cr of their first-order forces, the one
+     *                        EN 1993-1-1 5.2.1 and 5.2.2 speak of
+     */
+    private static Pass pass(Tower tower, TowerLoads loads, ChecksSpec checks, StructuralModel model,
+                             FactoredSystem system, LoadBasis basis, BasisResponses responses, ProgressListener progress,
+                             int threads, double sway, Map<String, Double> firstOrderAlpha) throws UnstableStructureException {
+        String sweeping = sway == 1.0 ? "sweep and checks" : "sweep and checks, second order";
+        String solving = sway == 1.0 ? "cases in full" : "cases in full, second order";
         FoundationCheck footing = checks.foundationSpec()
                 .map(f -> new FoundationCheck(f, checks.partialFactors())).orElse(null);
         LoadResultants resultants = new LoadResultants(tower.frame(),
@@ -100,16 +161,16 @@ public final class Analysis {
             for (Double azimuth : azimuthsOf(c, azimuths)) {
                 CaseKey key = new CaseKey(c, azimuth);
                 keys.put(key.id(), key);
-                sweep.add(key, basis.weights(c, azimuth, weights));
-                progress.progress("sweep and checks", ++done, total + serviceTotal);
+                sweep.add(key, amplified(basis, basis.weights(c, azimuth, weights), sway));
+                progress.progress(sweeping, ++done, total + serviceTotal);
             }
         }
         for (Combination c : service) {
             for (Double azimuth : azimuthsOf(c, azimuths)) {
                 CaseKey key = new CaseKey(c, azimuth);
                 keys.put(key.id(), key);
-                sweep.addService(key, basis.weights(c, azimuth, weights));
-                progress.progress("sweep and checks", ++done, total + serviceTotal);
+                sweep.addService(key, amplified(basis, basis.weights(c, azimuth, weights), sway));
+                progress.progress(sweeping, ++done, total + serviceTotal);
             }
         }
 
@@ -137,16 +198,40 @@ public final class Analysis {
         List<SolvedCase> cases = new ArrayList<>(reported.size());
         int solved = 0;
         for (CaseKey key : reported.values()) {
-            cases.add(solveCase(system, loads.loadCase(key)));
-            progress.progress("cases in full", ++solved, reported.size());
+            double wind = key.combination().hasWind() ? sway : 1.0;
+            Double alpha = firstOrderAlpha.get(key.id());
+            if (alpha == null && wind != 1.0) {
+                alpha = solveCase(system, loads.loadCase(key)).alphaCr();   // a case that governs only amplified
+            }
+            cases.add(solveCase(system, loads.loadCase(key, sway), wind, alpha));
+            progress.progress(solving, ++solved, reported.size());
         }
-        List<NaturalMode> natural = NaturalModes.of(system, basis, modes);
-        progress.progress("natural modes", 1, 1);
-        List<AzimuthWind> wind = new ArrayList<>();
-        loads.wind().ifPresent(w -> REPORTED_AZIMUTHS.forEach(a -> wind.add(w.azimuth(a))));
-        return new AnalysisResult(tower, loads, model, cases, wind, sweep.legBaseSweeps(), legBases, members,
-                foundations, sweep.handComparisons(), responses, (int) total, sweep.utilisationByAzimuth(),
-                sweep.autoRestraintPeaks(), natural);
+        return new Pass(sweep, cases, legBases, members, foundations, total);
+    }
+
+    /**
+     * The weights with every wind component multiplied by {@code sway}: the horizontal loads of
+     * EN 1993-1-1 5.2.2(5)B, whose first-order effects so amplified stand for the second-order ones.
+     */
+    private static double[] amplified(LoadBasis basis, double[] weights, double sway) {
+        if (sway != 1.0) {
+            for (int j = 0; j < weights.length; j++) {
+                LoadAction a = basis.components().get(j).action();
+                if (a == LoadAction.WIND || a == LoadAction.WIND_ON_ICE) {
+                    weights[j] *= sway;
+                }
+            }
+        }
+        return weights;
+    }
+
+    /** The serviceability plan with the default service wind and no limits (none for an explicit frame). */
+    private static Optional<ServiceabilityPlan> defaultPlan(Tower tower, TowerLoads loads) {
+        try {
+            return ServiceabilityPlan.of(tower, loads, ServiceabilitySpec.NONE);
+        } catch (BadInputException e) {
+            throw new IllegalStateException("no level ranges, no problem: " + e.getMessage(), e);
+        }
     }
 
     /** Adds the case where {@code e} occurred to the reported cases (after those already there). */
@@ -163,16 +248,28 @@ public final class Analysis {
      *         would carry part of the case's load, or the case's elastic critical load factor is ≤ 1
      */
     public static SolvedCase solveCase(FactoredSystem system, LoadCase loadCase) throws UnstableStructureException {
+        return solveCase(system, loadCase, 1.0, null);
+    }
+
+    /**
+     * As {@link #solveCase(FactoredSystem, LoadCase)}, for a case whose wind forces were multiplied by
+     * {@code windAmplification} (second order, {@link SecondOrder}), which the case records with the
+     * α_cr of its first-order forces {@code firstOrderAlpha} (null: of the forces solved here).
+     */
+    static SolvedCase solveCase(FactoredSystem system, LoadCase loadCase, double windAmplification,
+                                Double firstOrderAlpha) throws UnstableStructureException {
         Solution solution = system.solve(new LoadVector(loadCase.id(), loadCase.loads()));
         solution.requireLoadCarried(loadCase.id());
-        double alphaCr = CriticalLoad.factor(system, CriticalLoad.axialForces(solution));
+        double alphaCr = firstOrderAlpha != null ? firstOrderAlpha
+                : CriticalLoad.factor(system, CriticalLoad.axialForces(solution));
         if (alphaCr <= 1) {
             throw new UnstableStructureException(String.format(java.util.Locale.ROOT, "unstable structure: in case '%s' "
                     + "the elastic critical load factor α_cr is %.3f (≤ 1): the structure buckles as a whole under "
                     + "these forces (EN 1993-1-1 5.2.1); stiffen the legs or the bracing", loadCase.id(), alphaCr),
                     java.util.List.of());
         }
-        return new SolvedCase(loadCase.id(), loadCase.combination(), loadCase.azimuthDeg(), solution, alphaCr);
+        return new SolvedCase(loadCase.id(), loadCase.combination(), loadCase.azimuthDeg(), solution, alphaCr,
+                windAmplification);
     }
 
     /** The azimuths a combination is taken at: {@code azimuths} with wind, one null without. */

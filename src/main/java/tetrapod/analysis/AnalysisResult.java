@@ -31,13 +31,16 @@ import tetrapod.solve.StructuralModel;
  *                    have stopped)
  * @param modes       the lowest natural modes, from the lowest frequency up (empty when not asked for
  *                    or when nothing carries mass)
+ * @param serviceability how far each level and ancillary moves under the serviceability combination,
+ *                    over every azimuth; null for an explicit frame (no panel levels)
  */
 public record AnalysisResult(Tower tower, TowerLoads loads, StructuralModel model, List<SolvedCase> cases,
                              List<AzimuthWind> wind, List<LegBaseSweep> sweep, List<LegBaseExtremes> legBases,
                              List<MemberEnvelope> members, List<FoundationEnvelope> foundations,
                              List<HandComparison> hand, BasisResponses responses, int caseCount,
                              List<AzimuthUtilisation> utilisationByAzimuth, List<AutoRestraintPeak> autoRestraints,
-                             List<NaturalMode> modes) {
+                             List<NaturalMode> modes, SecondOrder secondOrder,
+                             ServiceabilityResult serviceability) {
     public AnalysisResult {
         cases = List.copyOf(cases);
         wind = List.copyOf(wind);
@@ -49,6 +52,11 @@ public record AnalysisResult(Tower tower, TowerLoads loads, StructuralModel mode
         utilisationByAzimuth = List.copyOf(utilisationByAzimuth);
         autoRestraints = List.copyOf(autoRestraints);
         modes = List.copyOf(modes);
+    }
+
+    /** The serviceability envelope; empty for an explicit frame. */
+    public Optional<ServiceabilityResult> serviceabilityResult() {
+        return Optional.ofNullable(serviceability);
     }
 
     /** The cases in which the hand method is compared for compression and for uplift; empty without a comparison. */

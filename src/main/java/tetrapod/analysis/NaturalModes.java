@@ -2,15 +2,20 @@ package tetrapod.analysis;
 
 import java.util.ArrayList;
 import java.util.List;
+import tetrapod.common.UnstableStructureException;
 import tetrapod.common.Units;
+import tetrapod.generate.Tower;
 import tetrapod.load.LoadBasis;
 import tetrapod.load.LoadComponent;
+import tetrapod.load.TowerLoads;
 import tetrapod.model.Frame;
 import tetrapod.model.Node;
 import tetrapod.model.NodeForce;
 import tetrapod.model.spec.LoadAction;
 import tetrapod.solve.FactoredSystem;
 import tetrapod.solve.ModalAnalysis;
+import tetrapod.solve.Solver;
+import tetrapod.solve.StructuralModel;
 
 /**
  * The tower's lowest natural modes: lumped masses from the permanent loads (the steelwork's
@@ -46,6 +51,11 @@ public final class NaturalModes {
             }
         }
         return LegMasses.gather(frame, mass);
+    }
+
+    /** The {@code count} lowest modes of {@code tower} with the dead-load masses of {@code loads}, without an analysis. */
+    public static List<NaturalMode> of(Tower tower, TowerLoads loads, int count) throws UnstableStructureException {
+        return of(Solver.factor(StructuralModel.of(tower.frame())), loads.basis(), count);
     }
 
     /**

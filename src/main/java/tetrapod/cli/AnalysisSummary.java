@@ -6,6 +6,12 @@ import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
+import tetrapod.model.spec.WindSpec;
+import tetrapod.analysis.ComputedStructuralFactor;
+import tetrapod.load.Asce7GustFactor;
+import tetrapod.load.En1991StructuralFactor;
+import tetrapod.load.ResponseFactor;
 import tetrapod.model.spec.ActionFactorSet;
 import tetrapod.model.spec.ActionFactors;
 import tetrapod.model.spec.BasisMix;
@@ -17,7 +23,14 @@ import tetrapod.analysis.AutoRestraintPeak;
 import tetrapod.analysis.HandComparison;
 import tetrapod.analysis.LegBaseExtremes;
 import tetrapod.analysis.NaturalMode;
+import tetrapod.analysis.SecondOrder;
 import tetrapod.analysis.SolvedCase;
+import tetrapod.analysis.MotionPeak;
+import tetrapod.analysis.Movement;
+import tetrapod.analysis.ServiceMotion;
+import tetrapod.analysis.ServiceabilityResult;
+import tetrapod.analysis.ServiceabilityVerdict;
+import tetrapod.load.ServiceWind;
 import tetrapod.check.CheckResult;
 import tetrapod.check.Extreme;
 import tetrapod.check.RequirementVerdict;
@@ -35,12 +48,14 @@ final class AnalysisSummary {
 
     private AnalysisSummary() { }
 
-    static void print(PrintWriter out, TowerSpec spec, AnalysisResult r) {
+    static void print(PrintWriter out, TowerSpec spec, AnalysisResult r,
+                      ComputedStructuralFactor.Resolved computed) {
         Frame frame = r.tower().frame();
         out.printf(Locale.ROOT, "%s: %s, %d nodes, %d members; %d load cases (%d combinations, sweep step %s deg)%n",
                 frame.name(), frame.idealisation().jsonName(), frame.nodes().size(), frame.members().size(),
                 r.caseCount(), r.loads().combinations().size(), CaseKey.degrees(r.loads().sweepStep()));
         basis(out, spec);
+        structuralFactor(out, spec, computed);
         if (!r.model().autoRestraints().isEmpty()) {
             double largest = r.autoRestraints().stream().mapToDouble(AutoRestraintPeak::force).max().orElse(0);
             out.printf(Locale.ROOT, "auto-restrained: %d directions where the lattice model has no stiffness; none "
@@ -68,31 +83,91 @@ final class AnalysisSummary {
         double max = r.maxUtilisation();
         out.printf(Locale.ROOT, "%s: largest strength utilisation %.3f%n", max > 1.0 ? "OVERSTRESSED" : "all checks pass", max);
         out.println("requirements: " + RequirementVerdict.line(brokenRequirements(r)));
+        r.serviceabilityResult().ifPresent(s -> serviceability(out, s));
         out.println("Results must be checked by a qualified engineer against the codes that apply locally.");
+    }
+
+    /**
+     * The movement under the serviceability combination: the top level, every ancillary with its
+     * limits, then the verdict on a line of its own.
+     */
+    private static void serviceability(PrintWriter out, ServiceabilityResult s) {
+        ServiceMotion.Level top = s.top();
+        out.printf(Locale.ROOT, "movement under %s, every azimuth (Ws: %s):%n", s.combination(),
+                s.serviceWind().map(ServiceWind::rule).orElse("no wind in the model"));
+        out.printf(Locale.ROOT, "  %-28s %8s  %17s  %17s  %17s  %s%n", "level or ancillary", "height m", "sway mm (wind)",
+                "tilt deg (wind)", "twist deg (wind)", "limits: sway mm, tilt deg, twist deg");
+        List<ServiceMotion> rows = new ArrayList<>();
+        s.levels().stream().filter(l -> l == top || l.limits().any()).forEach(rows::add);
+        rows.addAll(s.ancillaries());
+        for (ServiceMotion m : rows) {
+            String height = m instanceof ServiceMotion.Ancillary a && a.linear()
+                    ? String.format(Locale.ROOT, "%.1f-%.1f", a.zFrom(), a.zTo())
+                    : String.format(Locale.ROOT, "%.1f", m instanceof ServiceMotion.Level l ? l.z()
+                            : ((ServiceMotion.Ancillary) m).zFrom());
+            out.printf(Locale.ROOT, "  %-28s %8s  %17s  %17s  %17s  %s%n", fit(m.label(), 28), height,
+                    movement(m, Movement.SWAY), movement(m, Movement.TILT), movement(m, Movement.TWIST), limits(m));
+        }
+        out.println("serviceability: " + ServiceabilityVerdict.line(s)
+                + (s.hasLimits() ? "" : " (give them in serviceability.levels and serviceability.ancillaries)"));
+    }
+
+    /** {@code text} cut to {@code width} characters, with "..." where cut. */
+    private static String fit(String text, int width) {
+        return text.length() <= width ? text : text.substring(0, width - 3) + "...";
+    }
+
+    private static String movement(ServiceMotion m, Movement q) {
+        MotionPeak p = m.envelope().of(q);
+        String value = q == Movement.SWAY ? String.format(Locale.ROOT, "%.1f", p.value() * 1e3)
+                : String.format(Locale.ROOT, "%.3f", Math.toDegrees(p.value()));
+        return value + (p.azimuthDeg() == null ? "" : " (" + CaseKey.degrees(p.azimuthDeg()) + ")")
+                + (Boolean.FALSE.equals(m.met(q)) ? "!" : " ");
+    }
+
+    private static String limits(ServiceMotion m) {
+        if (!m.limits().any()) {
+            return "none";
+        }
+        List<String> parts = new ArrayList<>();
+        for (Movement q : Movement.values()) {
+            double v = m.limits().of(q);
+            parts.add(Double.isNaN(v) ? "-" : q == Movement.SWAY ? String.format(Locale.ROOT, "%.1f", v * 1e3)
+                    : String.format(Locale.ROOT, "%.3f", Math.toDegrees(v)));
+        }
+        return String.join(", ", parts) + (m.allMet() ? ": met" : ": NOT MET");
     }
 
     /** The smallest elastic critical load factor of the cases solved in full, and what it means. */
     private static void criticalLoad(PrintWriter out, AnalysisResult r) {
-        SolvedCase worst = null;
-        for (SolvedCase c : r.cases()) {
-            if (worst == null || c.alphaCr() < worst.alphaCr()) {
-                worst = c;
-            }
-        }
-        if (worst == null) {
+        SecondOrder so = r.secondOrder();
+        if (r.cases().isEmpty()) {
             return;
         }
-        if (Double.isInfinite(worst.alphaCr())) {
+        if (Double.isInfinite(so.alphaCr())) {
             out.println("elastic critical load factor: no case solved in full can buckle the structure as a whole");
-        } else if (worst.alphaCr() >= 10) {
+        } else if (!so.applied()) {
             out.printf(Locale.ROOT, "elastic critical load factor: smallest α_cr %.1f (case %s) ≥ 10: first-order "
-                    + "analysis suffices (EN 1993-1-1 5.2.1 (3))%n", worst.alphaCr(), worst.id());
+                    + "analysis suffices (EN 1993-1-1 5.2.1 (3))%n", so.alphaCr(), so.caseId());
         } else {
-            out.printf(Locale.ROOT, "WARNING: elastic critical load factor α_cr %.2f < 10 in case %s: second-order "
-                    + "effects matter (EN 1993-1-1 5.2.1 (3)) and are NOT included in these forces; amplify the sway "
-                    + "effects by 1/(1 - 1/α_cr) = %.3f or stiffen the tower%n", worst.alphaCr(), worst.id(),
-                    1 / (1 - 1 / worst.alphaCr()));
+            out.printf(Locale.ROOT, "second order: smallest first-order α_cr %.2f (case %s) < 10: every wind force is "
+                    + "multiplied by 1/(1 - 1/α_cr) = %.3f in the sweep, the checks and the cases above "
+                    + "(EN 1993-1-1 5.2.2 (5)B)%n", so.alphaCr(), so.caseId(), so.amplification());
+            if (so.beyondAmplification()) {
+                out.printf(Locale.ROOT, "WARNING: α_cr %.2f < 3: EN 1993-1-1 5.2.2 (6)B asks for a second-order analysis;"
+                        + " the amplification is outside its range: stiffen the tower%n", so.alphaCr());
+            }
         }
+        Map<String, SolvedCase> least = new LinkedHashMap<>();
+        for (SolvedCase c : r.cases()) {
+            least.merge(c.combination(), c, (a, b) -> b.alphaCr() < a.alphaCr() ? b : a);
+        }
+        List<String> parts = new ArrayList<>();
+        least.forEach((combination, c) -> parts.add(String.format(Locale.ROOT, "%s %s%s%s", combination,
+                Double.isFinite(c.alphaCr()) ? String.format(Locale.ROOT, "%.1f", c.alphaCr()) : "none",
+                c.azimuthDeg() == null ? "" : String.format(Locale.ROOT, " at %s deg", CaseKey.degrees(c.azimuthDeg())),
+                c.windAmplification() != 1.0 ? String.format(Locale.ROOT, ", wind x %.3f", c.windAmplification()) : "")));
+        out.println("  smallest α_cr of each combination's cases in full: " + String.join("; ", parts));
     }
 
     /** The first sway and first torsion frequencies, and every mode computed on one line. */
@@ -125,6 +200,44 @@ final class AnalysisSummary {
             }
         }
         return out;
+    }
+
+    private static void structuralFactor(PrintWriter out, TowerSpec spec, ComputedStructuralFactor.Resolved factor) {
+        WindSpec wind = spec.loads().wind();
+        Optional<ResponseFactor> computed = factor.computed();
+        if (!factor.given() && computed.isPresent()) {
+            out.printf(Locale.ROOT, "wind: %s computed from the tower (%s)%n", value(computed.get()), steps(computed.get()));
+            return;
+        }
+        String given = wind instanceof WindSpec.En1991 en
+                ? String.format(Locale.ROOT, "c_s·c_d = %.3f as given in the model (loads.wind.structuralFactor)",
+                        en.structuralFactor())
+                : wind instanceof WindSpec.Asce7 a
+                ? String.format(Locale.ROOT, "G = %.3f as given in the model (loads.wind.gustFactor)", a.gustFactor())
+                : null;
+        if (given == null) {
+            return;
+        }
+        out.println("wind: " + given + computed.map(c -> String.format(Locale.ROOT,
+                "; computed from the tower it would be %.3f (%s)", c.value(), steps(c))).orElse(""));
+    }
+
+    private static String value(ResponseFactor f) {
+        return String.format(Locale.ROOT, f instanceof En1991StructuralFactor ? "c_s·c_d = %.3f" : "G = %.3f", f.value());
+    }
+
+    /** How a computed factor came about, in a few numbers. */
+    private static String steps(ResponseFactor f) {
+        if (f instanceof En1991StructuralFactor e) {
+            return String.format(Locale.ROOT, "EN 1991-1-4 Annex B: first sway %.2f Hz, δ = δ_s %.3f + δ_a %.3f, "
+                    + "B² = %.3f, R² = %.3f, k_p = %.2f", e.frequency(), e.structuralDamping(), e.aerodynamicDamping(),
+                    e.background(), e.resonant(), e.peakFactor());
+        }
+        Asce7GustFactor g = (Asce7GustFactor) f;
+        return String.format(Locale.ROOT, "first sway %.2f Hz, %s", g.frequency(), g.flexible()
+                ? String.format(Locale.ROOT, "flexible, ASCE 7 26.11.5: β = %.4f, Q² = %.3f, R² = %.3f",
+                        g.dampingRatio(), g.background(), g.resonant())
+                : "rigid, n1 >= 1 Hz: ASCE 7 26.11.1");
     }
 
     private static void basis(PrintWriter out, TowerSpec spec) {

@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
@@ -19,20 +20,21 @@ import tetrapod.common.BadInputException;
 import tetrapod.io.DefaultedKeys;
 import tetrapod.io.JsonOutput;
 import tetrapod.io.OutputFolder;
-import tetrapod.io.ResultsReader;
 import tetrapod.io.SpecWriter;
 import tetrapod.report.CsvTables;
 import tetrapod.report.ReportHtml;
 import tetrapod.report.SizingHistoryFile;
 import tetrapod.report.Results;
 import tetrapod.report.ResultsDocument;
+import tetrapod.view.PictureRenderer;
 import tetrapod.view.RenderRequest;
 import tetrapod.view.ViewData;
 
 /** The main job: analyse a tower under its loads and write the results. */
 @Command(name = "analyze", mixinStandardHelpOptions = true,
         description = "Analyse a tower: self-weight, ancillaries, ice and wind from every azimuth of the sweep, "
-                + "every combination; writes results.json, members.csv, reactions.csv, wind.csv, requirements.csv, tower.png and "
+                + "every combination, and the movement under the serviceability wind; writes results.json, members.csv, "
+                + "reactions.csv, wind.csv, requirements.csv, serviceability.csv, tower.png and "
                 + "report.html into the output folder and prints a summary.%n"
                 + "Results must be checked by a qualified engineer against the codes that apply locally.")
 final class AnalyzeCommand implements Callable<Integer> {
@@ -59,7 +61,7 @@ final class AnalyzeCommand implements Callable<Integer> {
     boolean quiet;
 
     @Option(names = "--modes", paramLabel = "N",
-            description = "Natural modes to compute, at least 1 (default: 6, or fewer when the structure has fewer "
+            description = "Natural modes to compute, at least 1 (default: 12, or fewer when the structure has fewer "
                     + "free translations that carry mass).")
     Integer modes;
 
@@ -68,7 +70,7 @@ final class AnalyzeCommand implements Callable<Integer> {
 
     /** Every file one run writes: an output folder is replaced by a set of exactly these (and what it held besides). */
     static final Set<String> OUTPUTS = Set.of("results.json", CsvTables.MEMBERS, CsvTables.REACTIONS, CsvTables.WIND,
-            CsvTables.REQUIREMENTS, "tower.png", ReportHtml.FILE);
+            CsvTables.REQUIREMENTS, CsvTables.SERVICEABILITY, "tower.png", ReportHtml.FILE);
 
     @Override
     public Integer call() throws Exception {
@@ -77,28 +79,33 @@ final class AnalyzeCommand implements Callable<Integer> {
         if (modes != null && modes < 1) {
             throw BadInputException.at("--modes", "must be at least 1, was " + modes);
         }
-        LoadedModel loaded = LoadedModel.read(model);
+        LoadedModel loaded = LoadedModel.forAnalysis(model);
         Path folder = output != null ? output : OutputFolders.forModel(model);
         AnalysisResult result;
         String route;
-        try (OutputFolder outputs = OutputFolder.open(folder, OUTPUTS)) {
+        // the OpenGL context comes up on its own thread while the analysis runs (issue 15: 2 s of llvmpipe start-up)
+        try (PictureRenderer pictures = PictureRenderer.start(RenderRequest.ALL_ROUTES);
+             OutputFolder outputs = OutputFolder.open(folder, OUTPUTS)) {
+            pictures.prepare(PICTURE_WIDTH, PICTURE_HEIGHT);
             watch.end("read, generate, loads");
             try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
                 result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
-                        modes == null ? NaturalModes.DEFAULT_COUNT : modes, StageTimes.both(progress, watch));
+                        modes == null ? NaturalModes.DEFAULT_COUNT : modes, loaded.serviceability(),
+                        StageTimes.both(progress, watch));
             }
             if (modes != null && result.modes().size() < modes) {
                 throw BadInputException.at("--modes", "asked for " + modes + " modes; the structure has only "
                         + result.modes().size() + " free translations that carry mass");
             }
-            route = write(loaded, result, outputs.staging(), watch);
+            route = write(loaded, result, outputs.staging(), watch, pictures);
             outputs.commit();
         }
 
-        AnalysisSummary.print(out, loaded.spec(), result);
+        AnalysisSummary.print(out, loaded.spec(), result, loaded.responseFactor());
         out.println("tower.png " + route.replaceFirst("^render: ", "drawn by "));
         out.println("results written to " + folder + ": results.json, " + CsvTables.MEMBERS + ", "
-                + CsvTables.REACTIONS + ", " + CsvTables.WIND + ", " + CsvTables.REQUIREMENTS + ", tower.png, " + ReportHtml.FILE);
+                + CsvTables.REACTIONS + ", " + CsvTables.WIND + ", " + CsvTables.REQUIREMENTS + ", " + CsvTables.SERVICEABILITY
+                + ", tower.png, " + ReportHtml.FILE);
         if (timings) {
             out.printf(Locale.ROOT, "timings (%d DOF, %d load cases, %d basis vectors):%n",
                     result.model().freeDofCount(), result.caseCount(), result.responses().size());
@@ -107,20 +114,27 @@ final class AnalyzeCommand implements Callable<Integer> {
         return strict && result.maxUtilisation() > 1.0 ? ExitCode.OVERSTRESS : ExitCode.DONE;
     }
 
+    @SuppressWarnings("unchecked")
+    private static Map<String, Object> plainDocument(Map<String, Object> document) {
+        return (Map<String, Object>) JsonOutput.plain(document);
+    }
+
     /** Writes every output into {@code folder}; returns the line saying what drew tower.png. */
-    private String write(LoadedModel loaded, AnalysisResult result, Path folder, StageTimes watch) throws Exception {
+    private String write(LoadedModel loaded, AnalysisResult result, Path folder, StageTimes watch, PictureRenderer pictures)
+            throws Exception {
         Path resultsFile = folder.resolve("results.json");
         ResultsDocument.Source source = new ResultsDocument.Source(model.getFileName().toString(),
                 tetrapod.io.Sha256.of(model), new Version().getVersion()[0]);
-        JsonOutput.write(resultsFile, ResultsDocument.build(loaded.spec(), result,
-                DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec())), source));
-        // everything else is built from the file just written, as 'tetrapod report' builds it
-        Results results = new Results(ResultsReader.read(resultsFile));
+        Map<String, Object> document = ResultsDocument.build(loaded.spec(), result,
+                DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec())), source, loaded.responseFactor());
+        JsonOutput.write(resultsFile, document);
+        // everything else is built from what the file holds, as 'tetrapod report' builds it from the file
+        Results results = new Results(plainDocument(document));
         CsvTables.writeAll(results, folder);
         watch.end("results.json, CSV");
-        ViewData view = ResultViews.of(result).withAncillaries(ResultViews.ancillaries(loaded.spec()));
+        ViewData view = ResultViews.of(result, loaded.spec().checks()).withAncillaries(ResultViews.ancillaries(loaded.spec()));
         Path picture = folder.resolve("tower.png");
-        String route = RenderCommand.write(view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
+        String route = RenderCommand.write(pictures, view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
         watch.end("picture");
         ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(Files.readAllBytes(picture)),
                 SizingHistoryFile.matching(folder, results));

@@ -39,7 +39,7 @@ final class GeometryCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        LoadedModel loaded = LoadedModel.read(model);
+        LoadedModel loaded = LoadedModel.checked(model);
         Path target = output != null ? output : OutputFolders.forModel(model).resolve("frame.json");
         OutputFiles.check(target);
         Tower tower = loaded.tower();

@@ -147,7 +147,7 @@ final class NewCommand implements Callable<Integer> {
                             Role.HORIZONTAL, HORIZONTALS[size])));
         }
         LoadsSpec loads = new LoadsSpec(List.of(), new WindSpec.En1991(windSpeed, TerrainCategory.CAT_II, List.of(),
-                1.0, 1.0, 1.0, 1.0, WindSpec.En1991.DEFAULT_AIR_DENSITY), List.of(), null, List.of(), 15.0);
+                1.0, 1.0, Double.NaN, 1.0, WindSpec.En1991.DEFAULT_AIR_DENSITY), List.of(), null, List.of(), 15.0);
         return new TowerSpec(name, "Starter spec from 'tetrapod new': sections are starting values, not a design.",
                 ideal, new BaseSpec(baseWidth, baseWidth), segs, MaterialSpec.grade(material), SupportType.PINNED,
                 0.10, List.of(), Map.of(), null, loads, null);

@@ -3,6 +3,7 @@ package tetrapod.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
@@ -10,6 +11,10 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
+import tetrapod.analysis.NaturalMode;
+import tetrapod.analysis.NaturalModes;
+import tetrapod.common.BadInputException;
+import tetrapod.common.UnstableStructureException;
 import tetrapod.io.OutputFiles;
 import tetrapod.view.Picture;
 import tetrapod.view.PictureRenderer;
@@ -45,6 +50,11 @@ final class RenderCommand implements Callable<Integer> {
                     + "picks a case).")
     String colour;
 
+    @Option(names = "--mode", paramLabel = "N",
+            description = "Draw natural mode N (1 = the lowest) as a deformed shape, with its frequency and kind in "
+                    + "the caption; members coloured by role.")
+    Integer mode;
+
     @Spec
     CommandSpec spec;
 
@@ -57,8 +67,15 @@ final class RenderCommand implements Callable<Integer> {
         // the OpenGL context comes up on its own thread while the model is read
         try (PictureRenderer renderer = PictureRenderer.start(RenderRequest.ALL_ROUTES)) {
             LoadedModel loaded = LoadedModel.read(model);
-            ViewData data = ViewInputs.data(loaded, az, ViewInputs.needsResults(colour));
-            SceneOptions options = ViewInputs.options(data, az, colour);
+            ViewData data;
+            SceneOptions options;
+            if (mode != null) {
+                data = modeShape(loaded);
+                options = SceneOptions.defaults(data).withDeformed(true);
+            } else {
+                data = ViewInputs.data(loaded, az, ViewInputs.needsResults(colour));
+                options = ViewInputs.options(data, az, colour);
+            }
             Picture picture = renderer.draw(data, new RenderRequest(wh[0], wh[1], options, RenderRequest.ALL_ROUTES));
             ViewInputs.writePng(picture.image(), target);
             PrintWriter out = spec.commandLine().getOut();
@@ -68,13 +85,38 @@ final class RenderCommand implements Callable<Integer> {
         return ExitCode.DONE;
     }
 
+    /** Natural mode {@code mode} of the model as a picture; --colour and --azimuth do not go with it. */
+    private ViewData modeShape(LoadedModel loaded) throws BadInputException, UnstableStructureException {
+        if (mode < 1) {
+            throw BadInputException.at("--mode", "must be 1 or more (1 = the lowest mode), was " + mode);
+        }
+        if (colour != null || azimuth != null) {
+            throw BadInputException.at("--mode", "draws a mode shape coloured by role; leave out "
+                    + (colour != null ? "--colour" : "--azimuth"));
+        }
+        List<NaturalMode> modes = NaturalModes.of(loaded.tower(), loaded.loads(), mode);
+        if (modes.size() < mode) {
+            throw BadInputException.at("--mode", "asked for mode " + mode + "; the structure has only " + modes.size()
+                    + " free translations that carry mass");
+        }
+        return ModeViews.of(loaded.tower().frame(), modes.get(mode - 1));
+    }
+
     /**
      * Draws {@code data} as {@code request} says and writes it to {@code file} as a PNG; returns the
      * line saying which route drew it (e.g. {@code render: OpenGL 4.5 llvmpipe (software, EGL)}).
      * For `analyze`, which writes tower.png from its results the same way.
      */
     static String write(ViewData data, RenderRequest request, Path file) throws IOException {
-        Picture picture = PictureRenderer.render(data, request);
+        return written(PictureRenderer.render(data, request), file);
+    }
+
+    /** As {@link #write(ViewData, RenderRequest, Path)}, by a renderer started before (its routes are used). */
+    static String write(PictureRenderer renderer, ViewData data, RenderRequest request, Path file) throws IOException {
+        return written(renderer.draw(data, request), file);
+    }
+
+    private static String written(Picture picture, Path file) throws IOException {
         ViewInputs.writePng(picture.image(), file);
         return picture.routeLine();
     }

@@ -7,6 +7,9 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.OptionalDouble;
+import tetrapod.model.spec.ChecksSpec;
+import tetrapod.check.MemberForces;
+import tetrapod.check.MemberChecker;
 import tetrapod.analysis.AnalysisResult;
 import tetrapod.analysis.LegBaseExtremes;
 import tetrapod.analysis.SolvedCase;
@@ -48,13 +51,19 @@ final class ResultViews {
         return out;
     }
 
-    /** Everything to show of {@code result}, starting with the envelope coloured by utilisation. */
-    static ViewData of(AnalysisResult result) {
+    /**
+     * Everything to show of {@code result}, starting with the envelope coloured by utilisation; each
+     * case solved in full carries its members' axial forces and their strength utilisations under
+     * {@code checks} in that case, so that stepping from the envelope to a case keeps a utilisation
+     * colouring (issue 16 item 8).
+     */
+    static ViewData of(AnalysisResult result, ChecksSpec checks) {
         Frame frame = result.tower().frame();
+        MemberChecker checker = MemberChecker.of(result.tower(), checks);
         List<ViewCase> cases = new ArrayList<>();
         cases.add(envelope(frame, result));
         for (SolvedCase c : result.cases()) {
-            cases.add(solved(frame, c));
+            cases.add(solved(frame, c, checker));
         }
         return new ViewData(frame, cases, Colouring.UTILISATION);
     }
@@ -129,15 +138,28 @@ final class ResultViews {
         return out;
     }
 
-    private static ViewCase solved(Frame frame, SolvedCase c) {
+    private static ViewCase solved(Frame frame, SolvedCase c, MemberChecker checker) {
         Map<Integer, Double> forces = new HashMap<>();
+        Map<Integer, MemberEndForces> ends = new HashMap<>();
         for (MemberEndForces f : c.solution().memberForces()) {
             forces.put(f.member(), f.axial());
+            ends.put(f.member(), f);
         }
         List<Member> members = frame.members();
         double[] axial = new double[members.size()];
+        double[] utilisation = new double[members.size()];
         for (int k = 0; k < axial.length; k++) {
-            axial[k] = forces.getOrDefault(members.get(k).id(), Double.NaN);
+            Member m = members.get(k);
+            axial[k] = forces.getOrDefault(m.id(), Double.NaN);
+            MemberEndForces f = ends.get(m.id());
+            if (f == null) {
+                utilisation[k] = Double.NaN;
+                continue;
+            }
+            // end actions at i and j, as the sweep takes them: my, mz at each end
+            MemberForces design = m.axialOnly() ? MemberForces.axial(f.axial())
+                    : new MemberForces(f.axial(), f.atI().my(), f.atJ().my(), f.atI().mz(), f.atJ().mz());
+            utilisation[k] = checker.check(m.id(), design, id -> forces.getOrDefault(id, 0.0)).governing().utilisation();
         }
         List<NodeVector> displacements = new ArrayList<>();
         for (NodeDisplacement d : c.solution().displacements()) {
@@ -148,7 +170,7 @@ final class ResultViews {
             reactions.add(new NodeVector(r.node(), new Vec3(r.component(0), r.component(1), r.component(2))));
         }
         OptionalDouble az = c.azimuthDeg() == null ? OptionalDouble.empty() : OptionalDouble.of(c.azimuthDeg());
-        return new ViewCase(c.id(), az, Map.of(Colouring.AXIAL, MemberScalars.of(axial)), displacements, reactions,
-                List.of());
+        return new ViewCase(c.id(), az, Map.of(Colouring.AXIAL, MemberScalars.of(axial),
+                Colouring.UTILISATION, MemberScalars.of(utilisation)), displacements, reactions, List.of());
     }
 }

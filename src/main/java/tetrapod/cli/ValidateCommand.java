@@ -21,7 +21,7 @@ final class ValidateCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        LoadedModel loaded = LoadedModel.read(model);
+        LoadedModel loaded = LoadedModel.checked(model);
         spec.commandLine().getOut().printf("%s: valid (%d nodes, %d members)%n", model,
                 loaded.tower().frame().nodes().size(), loaded.tower().frame().members().size());
         return ExitCode.DONE;

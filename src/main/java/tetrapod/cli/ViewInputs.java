@@ -41,7 +41,7 @@ final class ViewInputs {
         }
         AnalysisResult result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
                 ProgressListener.NONE);
-        return ResultViews.of(result).withAncillaries(items);
+        return ResultViews.of(result, loaded.spec().checks()).withAncillaries(items);
     }
 
     /** Whether the colouring asked for ({@code --colour}, may be null) needs analysis results. */

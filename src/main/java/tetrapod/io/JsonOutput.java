@@ -56,7 +56,7 @@ public final class JsonOutput {
 
     /** Writes the value as JSON text, ending with a newline. */
     public static void write(Writer out, Object value) throws IOException {
-        new Printer(out).value(value, "$", 0);
+        new Printer(out).value(value, Where.ROOT, 0);
         out.write('\n');
         out.flush();
     }
@@ -66,10 +66,74 @@ public final class JsonOutput {
         AtomicFiles.writeText(file, out -> write(out, value));
     }
 
+    /**
+     * The value as {@link PlainJson} would read back what {@link #write} writes of it, without the
+     * text: maps in their written order with text keys, lists, text, booleans, null, whole numbers as
+     * {@code Integer}, {@code Long} or {@code BigInteger} by size, and other numbers as the
+     * {@code Double} their written digits parse to. Refuses what {@link #write} refuses.
+     */
+    public static Object plain(Object value) {
+        return plain(value, Where.ROOT);
+    }
+
+    private static Object plain(Object value, Where path) {
+        Object v = normalise(value, path);
+        if (v instanceof List<?> list) {
+            List<Object> out = new ArrayList<>(list.size());
+            for (int k = 0; k < list.size(); k++) {
+                out.add(plain(list.get(k), path));
+            }
+            return out;
+        }
+        if (v instanceof Map<?, ?> map) {
+            Map<String, Object> out = new LinkedHashMap<>();
+            for (Map.Entry<?, ?> e : map.entrySet()) {
+                out.put(String.valueOf(e.getKey()), plain(e.getValue(), path));
+            }
+            return out;
+        }
+        if (v == null || v instanceof String || v instanceof Boolean) {
+            return v;
+        }
+        String text = scalar(v, path);
+        if (v instanceof Double || v instanceof Float || !text.matches("-?\\d+")) {
+            return Double.parseDouble(text);
+        }
+        BigInteger whole = new BigInteger(text);
+        if (whole.bitLength() < Integer.SIZE) {
+            return whole.intValue();
+        }
+        return whole.bitLength() < Long.SIZE ? (Object) whole.longValue() : whole;
+    }
+
+    /**
+     * Where a value is in the document, for messages only: built as a chain of small objects and
+     * spelt out ({@code $.cases[3].name}) only when something cannot be written.
+     */
+    private record Where(Where parent, Object key, int index) {
+        static final Where ROOT = new Where(null, null, -1);
+
+        Where at(int k) {
+            return new Where(this, null, k);
+        }
+
+        Where key(Object k) {
+            return new Where(this, k, -1);
+        }
+
+        @Override
+        public String toString() {
+            if (parent == null) {
+                return "$";
+            }
+            return parent + (key != null ? "." + key : "[" + index + "]");
+        }
+    }
+
     /** Walks the value once, writing as it goes. */
     private record Printer(Writer out) {
 
-        void value(Object value, String path, int depth) throws IOException {
+        void value(Object value, Where path, int depth) throws IOException {
             Object v = normalise(value, path);
             if (v instanceof List<?> list) {
                 list(list, path, depth);
@@ -80,7 +144,7 @@ public final class JsonOutput {
             }
         }
 
-        private void list(List<?> list, String path, int depth) throws IOException {
+        private void list(List<?> list, Where path, int depth) throws IOException {
             String inline = inline(list, path);
             if (inline != null) {
                 out.write(inline);
@@ -89,14 +153,14 @@ public final class JsonOutput {
             out.write("[\n");
             for (int k = 0; k < list.size(); k++) {
                 indent(depth + 1);
-                value(list.get(k), path + "[" + k + "]", depth + 1);
+                value(list.get(k), path.at(k), depth + 1);
                 out.write(k + 1 < list.size() ? ",\n" : "\n");
             }
             indent(depth);
             out.write("]");
         }
 
-        private void object(Map<?, ?> map, String path, int depth) throws IOException {
+        private void object(Map<?, ?> map, Where path, int depth) throws IOException {
             String inline = depth == 0 ? null : inline(map, path);
             if (inline != null) {
                 out.write(inline);
@@ -112,7 +176,7 @@ public final class JsonOutput {
                 indent(depth + 1);
                 out.write(quote(String.valueOf(e.getKey())));
                 out.write(": ");
-                value(e.getValue(), path + "." + e.getKey(), depth + 1);
+                value(e.getValue(), path.key(e.getKey()), depth + 1);
                 out.write(++k < map.size() ? ",\n" : "\n");
             }
             indent(depth);
@@ -127,7 +191,7 @@ public final class JsonOutput {
     }
 
     /** The one-line form when every member is a scalar or an array of scalars and it is short; else null. */
-    private static String inline(Object container, String path) {
+    private static String inline(Object container, Where path) {
         StringBuilder line = new StringBuilder();
         if (!appendInline(line, container, path, true) || line.length() > INLINE_WIDTH) {
             return null;
@@ -135,7 +199,7 @@ public final class JsonOutput {
         return line.toString();
     }
 
-    private static boolean appendInline(StringBuilder line, Object value, String path, boolean outer) {
+    private static boolean appendInline(StringBuilder line, Object value, Where path, boolean outer) {
         Object v = normalise(value, path);
         if (v instanceof List<?> list) {
             line.append('[');
@@ -147,7 +211,7 @@ public final class JsonOutput {
                 if (k > 0) {
                     line.append(", ");
                 }
-                if (!appendInline(line, item, path + "[" + k + "]", false) || line.length() > INLINE_WIDTH) {
+                if (!appendInline(line, item, path.at(k), false) || line.length() > INLINE_WIDTH) {
                     return false;
                 }
             }
@@ -173,7 +237,7 @@ public final class JsonOutput {
                 if (item instanceof Map<?, ?>) {
                     return false;
                 }
-                if (!appendInline(line, item, path + "." + e.getKey(), item instanceof List<?>)
+                if (!appendInline(line, item, path.key(e.getKey()), item instanceof List<?>)
                         || line.length() > INLINE_WIDTH) {
                     return false;
                 }
@@ -186,7 +250,7 @@ public final class JsonOutput {
     }
 
     /** Arrays and collections become lists, unordered maps sorted maps; anything else unchanged. */
-    private static Object normalise(Object value, String path) {
+    private static Object normalise(Object value, Where path) {
         if (value == null) {
             return null;
         }
@@ -223,7 +287,7 @@ public final class JsonOutput {
         return value;
     }
 
-    private static String scalar(Object v, String path) {
+    private static String scalar(Object v, Where path) {
         if (v == null) {
             return "null";
         }

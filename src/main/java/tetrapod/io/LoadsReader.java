@@ -65,9 +65,9 @@ final class LoadsReader {
     private static Map<String, List<String>> windKeys() {
         Map<String, List<String>> m = new LinkedHashMap<>();
         m.put("en1991", List.of("method", "basicSpeed", "terrain", "directionFactors", "seasonFactor", "orography",
-                "structuralFactor", "turbulenceFactor", "airDensity"));
+                "structuralFactor", "turbulenceFactor", "airDensity", "structuralDamping"));
         m.put("asce7", List.of("method", "edition", "speed", "exposure", "topographicFactor", "elevationFactor",
-                "directionalityFactor", "gustFactor"));
+                "directionalityFactor", "gustFactor", "dampingRatio"));
         m.put("uniform", List.of("method", "pressure", "forceCoefficient"));
         return m;
     }
@@ -203,12 +203,17 @@ final class LoadsReader {
                 TerrainCategory terrain = Choices.TERRAIN.required(f, "terrain");
                 List<Double> cdir = directionFactors(f);
                 double season = f.optionalNumber("seasonFactor", FRACTION_TO_ONE, "", 1.0);
-                double orography = f.optionalNumber("orography", new Bound(0, false, 3, true), "", 1.0);
-                double structural = f.optionalNumber("structuralFactor", upToTwo, "", 1.0);
+                double orography = f.optionalNumber("orography", PhysicalLimits.OROGRAPHY, "", 1.0);
+                // absent: computed from the tower's first sway frequency (EN 1991-1-4 Annex B)
+                double structural = f.optionalNumber("structuralFactor", upToTwo, "", Double.NaN);
                 double turbulence = f.optionalNumber("turbulenceFactor", upToTwo, "", 1.0);
                 double density = f.optionalNumber("airDensity", upToTwo, "kg/m³", WindSpec.En1991.DEFAULT_AIR_DENSITY);
+                // δ_s of EN 1991-1-4 Table F.2: lattice steel towers 0.02 to 0.05; above 0.3 no structure of the table
+                double damping = f.optionalNumber("structuralDamping", PhysicalLimits.LOG_DECREMENT, "",
+                        WindSpec.En1991.DEFAULT_STRUCTURAL_DAMPING);
                 return problems.count() == before
-                        ? new WindSpec.En1991(speed, terrain, cdir, season, orography, structural, turbulence, density)
+                        ? new WindSpec.En1991(speed, terrain, cdir, season, orography, structural, turbulence, density,
+                                damping)
                         : null;
             }
             case "asce7" -> {
@@ -218,9 +223,12 @@ final class LoadsReader {
                 double kzt = f.optionalNumber("topographicFactor", new Bound(0, false, 5, true), "", 1.0);
                 double ke = f.optionalNumber("elevationFactor", new Bound(0, false, 1.5, true), "", 1.0);
                 double kd = f.optionalNumber("directionalityFactor", FRACTION_TO_ONE, "", 0.85);
-                double g = f.optionalNumber("gustFactor", upToTwo, "", 0.85);
+                // absent: computed from the tower's first sway frequency (ASCE 7 §26.11)
+                double g = f.optionalNumber("gustFactor", upToTwo, "", Double.NaN);
+                double beta = f.optionalNumber("dampingRatio", PhysicalLimits.DAMPING_RATIO, "",
+                        WindSpec.Asce7.DEFAULT_DAMPING_RATIO);
                 return problems.count() == before
-                        ? new WindSpec.Asce7(edition, speed, exposure, kzt, ke, kd, g)
+                        ? new WindSpec.Asce7(edition, speed, exposure, kzt, ke, kd, g, beta)
                         : null;
             }
             default -> {

@@ -89,6 +89,19 @@ final class PhysicalLimits {
 
     /** A nodal force component, kN, or moment, kN·m: 100 MN is beyond any load on a tower. */
     static final Bound NODAL_FORCE = closed(-100_000, 100_000);
+    /**
+     * The orography factor c_o of EN 1991-1-4 4.3.3, dimensionless: 1 on flat ground and above 1
+     * on hills (Annex A.3); the turbulence intensity divides by it (4.4), so it may not approach 0.
+     */
+    static final Bound OROGRAPHY = closed(0.5, 3);
+    /**
+     * The logarithmic decrement of structural damping δ_s (EN 1991-1-4 F.5), dimensionless: above 0
+     * (the resonance factor (B.6) divides by it) and at most 0.3, twice the largest value Table F.2
+     * lists for any structure (lattice steel towers 0.02 to 0.05; values recalled).
+     */
+    static final Bound LOG_DECREMENT = new Bound(0, false, 0.3, true);
+    /** A damping ratio β (ASCE 7 (26.11-12) divides by it), fraction of critical: above 0, at most 0.05 (δ ≈ 0.3). */
+    static final Bound DAMPING_RATIO = new Bound(0, false, 0.05, true);
     /** An ancillary's weight, kN (a 1,000 t item). */
     static final Bound ANCILLARY_WEIGHT = closed(0, 10_000);
     /** An ancillary's projected area, m². */
@@ -122,6 +135,6 @@ final class PhysicalLimits {
     static final Bound SOIL_UNIT_WEIGHT = closed(0, 30);
     /** An allowable bearing pressure, kPa. */
     static final Bound BEARING = closed(1, 10_000);
-    /** A friction coefficient between footing and soil, dimensionless. */
-    static final Bound FRICTION = new Bound(0, false, 2, true);
+    /** A friction coefficient between footing and soil, dimensionless (the sliding check divides by it). */
+    static final Bound FRICTION = closed(0.05, 2);
 }

@@ -22,6 +22,7 @@ import tetrapod.model.spec.LoadsSpec.NodalLoadSpec;
 import tetrapod.model.spec.MaterialSpec;
 import tetrapod.model.spec.ProjectSpec;
 import tetrapod.model.spec.SegmentSpec;
+import tetrapod.model.spec.ServiceabilitySpec;
 import tetrapod.model.spec.SupportType;
 import tetrapod.model.spec.TowerSpec;
 import tetrapod.model.spec.UserSectionSpec;
@@ -38,7 +39,7 @@ public final class SpecReader {
 
     static final List<String> TOP_KEYS = List.of("name", "description", "idealisation", "base", "segments",
             "material", "supports", "connectionAllowance", "planBracingLevels", "userSections", "frame", "loads", "checks",
-            "basis", "mixedBasis", "project");
+            "basis", "mixedBasis", "project", "serviceability");
     static final double DEFAULT_CONNECTION_ALLOWANCE = 0.10;
 
     private SpecReader() { }
@@ -140,11 +141,12 @@ public final class SpecReader {
             if (idealisation == Idealisation.TRUSS && loads != null) {
                 noMomentsOnATruss(loads.nodal());
             }
+            ServiceabilitySpec serviceability = serviceability(root, generated && !explicit, loadTower.height());
             if (problems.count() > 0) {
                 return null;
             }
             TowerSpec spec = new TowerSpec(name, description, idealisation, base, segments, material, supports, allowance,
-                    planLevels, userSections, frame, loads, checks, basis, mixedBasis, project);
+                    planLevels, userSections, frame, loads, checks, basis, mixedBasis, project, serviceability);
             if (!mixedBasis) {
                 refuseMixes(spec, basisGiven);
             }
@@ -161,6 +163,27 @@ public final class SpecReader {
                             + " frame or continuous-legs");
                 }
             }
+        }
+
+        /** {@code serviceability}, of a generated tower only; {@link ServiceabilitySpec#NONE} when absent. */
+        private ServiceabilitySpec serviceability(Fields root, boolean generated, double height) {
+            Fields f = root.object("serviceability", false);
+            if (f == null) {
+                return ServiceabilitySpec.NONE;
+            }
+            if (!generated) {
+                problems.add(root.path("serviceability"), "applies only to a generated tower (base and segments): "
+                        + "the movement is measured at its panel levels");
+                return ServiceabilitySpec.NONE;
+            }
+            String method = text(root.get("loads"), "wind", "method");
+            method = method != null && LoadsReader.WIND_METHODS.contains(method) ? method : null;
+            JsonNode loads = root.get("loads");
+            if (method == null && loads != null && loads.isObject() && loads.has("wind")) {
+                method = ServiceabilityReader.UNREADABLE_WIND;
+            }
+            JsonNode items = loads != null && loads.isObject() ? loads.get("ancillaries") : null;
+            return new ServiceabilityReader(problems).read(f, method, height, items);
         }
 
         /** The basis of a model without the basis key: the family of its wind method, else of its check method. */

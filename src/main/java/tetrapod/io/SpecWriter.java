@@ -27,6 +27,7 @@ import tetrapod.model.spec.LoadsSpec.NodalLoadSpec;
 import tetrapod.model.spec.MaterialSpec;
 import tetrapod.model.spec.PartialFactors;
 import tetrapod.model.spec.SegmentSpec;
+import tetrapod.model.spec.ServiceabilitySpec;
 import tetrapod.model.spec.TowerSpec;
 import tetrapod.model.spec.ActionFactorSet;
 import tetrapod.model.spec.ActionFactors;
@@ -97,7 +98,51 @@ public final class SpecWriter {
             m.put("loads", loads);
         }
         m.put("checks", checks(spec.checks()));
+        if (!spec.serviceability().isEmpty()) {
+            m.put("serviceability", serviceability(spec.serviceability()));
+        }
         return m;
+    }
+
+    /** {@code serviceability}, as given: the service wind's one key, the level ranges and item limits. */
+    private static Map<String, Object> serviceability(ServiceabilitySpec s) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        if (s.wind() != null) {
+            m.put("wind", ordered(s.wind().key(), s.wind().value()));
+        }
+        if (!s.levels().isEmpty()) {
+            m.put("levels", s.levels().stream().map(l -> {
+                Map<String, Object> level = new LinkedHashMap<>();
+                putIfGiven(level, "from", l.from());
+                putIfGiven(level, "to", l.to());
+                level.putAll(limits(l.limits()));
+                return level;
+            }).toList());
+        }
+        if (!s.ancillaries().isEmpty()) {
+            m.put("ancillaries", s.ancillaries().stream().map(a -> {
+                Map<String, Object> item = new LinkedHashMap<>();
+                item.put("name", a.name());
+                item.putAll(limits(a.limits()));
+                return item;
+            }).toList());
+        }
+        return m;
+    }
+
+    private static Map<String, Object> limits(ServiceabilitySpec.LimitSpec l) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        putIfGiven(m, "sway_mm", l.swayMm());
+        putIfGiven(m, "swayHeightRatio", l.swayHeightRatio());
+        putIfGiven(m, "tilt_deg", l.tiltDeg());
+        putIfGiven(m, "twist_deg", l.twistDeg());
+        return m;
+    }
+
+    private static void putIfGiven(Map<String, Object> m, String key, double value) {
+        if (!Double.isNaN(value)) {
+            m.put(key, value);
+        }
     }
 
     /**
@@ -337,9 +382,12 @@ public final class SpecWriter {
             }
             m.put("seasonFactor", en.seasonFactor());
             m.put("orography", en.orography());
-            m.put("structuralFactor", en.structuralFactor());
+            if (!en.structuralFactorComputed()) {
+                m.put("structuralFactor", en.structuralFactor());
+            }
             m.put("turbulenceFactor", en.turbulenceFactor());
             m.put("airDensity", en.airDensity());
+            m.put("structuralDamping", en.structuralDamping());
         } else if (wind instanceof WindSpec.Asce7 a) {
             m.put("edition", a.edition().jsonName());
             m.put("speed", a.speed());
@@ -347,7 +395,10 @@ public final class SpecWriter {
             m.put("topographicFactor", a.topographicFactor());
             m.put("elevationFactor", a.elevationFactor());
             m.put("directionalityFactor", a.directionalityFactor());
-            m.put("gustFactor", a.gustFactor());
+            if (!a.gustFactorComputed()) {
+                m.put("gustFactor", a.gustFactor());
+            }
+            m.put("dampingRatio", a.dampingRatio());
         } else {
             WindSpec.Uniform u = (WindSpec.Uniform) wind;
             m.put("pressure", u.pressure());

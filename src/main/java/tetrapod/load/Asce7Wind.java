@@ -39,6 +39,10 @@ public record Asce7Wind(Asce7Edition edition, Exposure exposure, double speed, d
     public Asce7Wind {
         Objects.requireNonNull(edition, "edition");
         Objects.requireNonNull(exposure, "exposure");
+        if (!(gustFactor > 0)) {
+            throw new IllegalArgumentException("G must be > 0, was " + gustFactor
+                    + " (a computed one is filled in before the wind is built: analysis.ComputedStructuralFactor)");
+        }
         if (!(speed > 0)) {
             throw new IllegalArgumentException("wind speed must be > 0, was " + speed);
         }

@@ -40,6 +40,10 @@ public record En1991Wind(TerrainCategory terrain, double basicSpeed, double seas
         if (!(basicSpeed > 0) || !(airDensity > 0) || !(orography > 0) || !(seasonFactor > 0)) {
             throw new IllegalArgumentException("wind speed, air density, c0 and c_season must be > 0");
         }
+        if (!(structuralFactor > 0)) {
+            throw new IllegalArgumentException("c_s·c_d must be > 0, was " + structuralFactor
+                    + " (a computed one is filled in before the wind is built: analysis.ComputedStructuralFactor)");
+        }
     }
 
     /** With the recommended k_I = 1.0, ρ = 1.25 kg/m³, c_season = c0 = c_s·c_d = 1 and no c_dir table. */

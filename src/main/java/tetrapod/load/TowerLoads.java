@@ -17,6 +17,8 @@ import tetrapod.model.spec.AncillarySpec;
 import tetrapod.model.spec.CombinationSpec;
 import tetrapod.model.spec.LoadAction;
 import tetrapod.model.spec.LoadsSpec;
+import tetrapod.model.spec.ServiceabilitySpec;
+import tetrapod.model.spec.WindSpec;
 
 /**
  * Every load on a tower, ready to solve: the azimuth-independent parts (dead, ice, nodal), the
@@ -47,11 +49,18 @@ public final class TowerLoads {
     private final List<Combination> serviceCombinations;
     private final double sweepStep;
     private final LoadBasis basis;
+    private final WindSpec windSpec;
+    private final Ancillaries items;
+    private final boolean asce;
 
     private TowerLoads(Tower tower, List<NodeForce> selfWeight, List<NodeForce> ancillaryWeight, List<NodeForce> ice,
                        Asce7Ice icing, List<NodeForce> nodal, WindLoads wind, WindLoads windOnIce, List<Combination> combinations,
-                       List<Combination> serviceCombinations, double sweepStep) {
+                       List<Combination> serviceCombinations, double sweepStep, WindSpec windSpec, Ancillaries items,
+                       boolean asce) {
         this.tower = tower;
+        this.windSpec = windSpec;
+        this.items = items;
+        this.asce = asce;
         this.serviceCombinations = List.copyOf(serviceCombinations);
         this.selfWeight = List.copyOf(selfWeight);
         this.ancillaryWeight = List.copyOf(ancillaryWeight);
@@ -105,8 +114,9 @@ public final class TowerLoads {
         List<NodeForce> iceWeight = List.of();
         WindLoads wind = null;
         WindLoads windOnIce = null;
+        Ancillaries items = null;
         if (tower.isGenerated()) {
-            Ancillaries items = Ancillaries.of(tower, spec.ancillaries());
+            items = Ancillaries.of(tower, spec.ancillaries());
             ancillaryWeight = items.weights();
             if (spec.hasIce()) {
                 NodalLoads iced = new NodalLoads();
@@ -128,8 +138,11 @@ public final class TowerLoads {
         List<Combination> service = ServiceCombinations.of(spec.actionFactorsOrDefault(),
                 spec.hasWind() && tower.isGenerated() ? spec.wind().method() : null, spec.hasIce() && tower.isGenerated(),
                 !spec.nodal().isEmpty());
+        boolean asce = spec.hasWind() && !"uniform".equals(spec.wind().method())
+                && spec.actionFactorsOrDefault().set().family() == tetrapod.model.spec.DesignBasis.US;
         return new TowerLoads(tower, selfWeight, ancillaryWeight, iceWeight, ice, mergedNodal.toList(), wind, windOnIce,
-                combinations, service, spec.sweepStep());
+                combinations, service, spec.sweepStep(), spec.hasWind() && tower.isGenerated() ? spec.wind() : null,
+                items, asce);
     }
 
     private static Combination combination(CombinationSpec c) {
@@ -205,6 +218,11 @@ public final class TowerLoads {
         return selfWeight;
     }
 
+    /** The ancillaries of the file, as given (empty for an explicit frame). */
+    public List<AncillarySpec> ancillaries() {
+        return items == null ? List.of() : items.items();
+    }
+
     /** Weight of the ancillaries, N. */
     public List<NodeForce> ancillaryWeight() {
         return ancillaryWeight;
@@ -249,6 +267,26 @@ public final class TowerLoads {
         return serviceCombinations;
     }
 
+    /**
+     * The serviceability combination of a generated tower: dead load, nodal loads and the service
+     * wind of {@code given} (null for the wind method's default), no ice ({@link ServiceLoads}).
+     *
+     * @throws IllegalArgumentException for an explicit frame, or when {@code given} does not go with the wind method
+     */
+    public ServiceLoads service(ServiceabilitySpec.ServiceWindSpec given) {
+        if (!tower.isGenerated()) {
+            throw new IllegalArgumentException("serviceability needs a generated tower");
+        }
+        if (windSpec == null) {
+            if (given != null) {
+                throw new IllegalArgumentException("serviceability.wind needs loads.wind");
+            }
+            return new ServiceLoads(dead, nodal, null, null, azimuths(), asce);
+        }
+        ServiceWind w = ServiceWind.of(windSpec, given);
+        return new ServiceLoads(dead, nodal, w, WindLoads.of(w.profile(), tower, Asce7Ice.NONE, items), azimuths(), asce);
+    }
+
     /** Azimuth step of the sweep, degrees. */
     public double sweepStep() {
         return sweepStep;
@@ -285,16 +323,21 @@ public final class TowerLoads {
 
     /** The factored load vector of one case, formed directly. */
     public LoadCase loadCase(CaseKey key) {
+        return loadCase(key, 1.0);
+    }
+
+    /** As {@link #loadCase(CaseKey)}, with every wind force multiplied by {@code sway} (second-order amplification). */
+    public LoadCase loadCase(CaseKey key, double sway) {
         Combination c = key.combination();
         NodalLoads sum = new NodalLoads();
         sum.add(dead, c.factor(LoadAction.DEAD));
         sum.add(ice, c.factor(LoadAction.ICE));
         sum.add(nodal, c.factor(LoadAction.NODAL));
         if (c.factor(LoadAction.WIND) != 0) {
-            sum.add(wind.at(key.azimuthDeg()), c.factor(LoadAction.WIND));
+            sum.add(wind.at(key.azimuthDeg()), c.factor(LoadAction.WIND) * sway);
         }
         if (c.factor(LoadAction.WIND_ON_ICE) != 0) {
-            sum.add(windOnIce.at(key.azimuthDeg()), c.factor(LoadAction.WIND_ON_ICE));
+            sum.add(windOnIce.at(key.azimuthDeg()), c.factor(LoadAction.WIND_ON_ICE) * sway);
         }
         return new LoadCase(key.id(), c.name(), key.azimuthDeg(), sum.toList());
     }

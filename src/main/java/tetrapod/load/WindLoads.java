@@ -108,6 +108,24 @@ public final class WindLoads {
         return List.copyOf(out);
     }
 
+    /**
+     * Every panel's and ancillary's c_f × A for wind towards θ (the panel's with its incidence factor),
+     * with no pressure, response factor or directional factor: the drag that the aerodynamic damping
+     * of a mode along θ takes (EN 1991-1-4 F.16).
+     */
+    public List<DragArea> dragAreas(double azimuthDeg) {
+        Direction dir = new Direction(azimuthDeg, 1);
+        List<DragArea> out = new ArrayList<>(panels.size() + points.size());
+        for (PanelState p : panels) {
+            PanelForce f = panelForce(p, dir);
+            out.add(new DragArea(f.cf() * f.area(), p.exposure.shares()));
+        }
+        for (PointState p : points) {
+            out.add(new DragArea(p.point.effectiveArea(), p.point.shares()));
+        }
+        return List.copyOf(out);
+    }
+
     /** Panel and ancillary forces at θ together. */
     public AzimuthWind azimuth(double azimuthDeg) {
         return new AzimuthWind(azimuthDeg, panelForces(azimuthDeg), ancillaryForces(azimuthDeg));

@@ -8,8 +8,8 @@ import tetrapod.report.Table.Cell;
 
 /**
  * The long lists, after the calculation's body, in a compact layout: every member's governing
- * check (A), every requirement not met (B), every value Tetrapod assumed (C) and every leg base's
- * footing checks (D). The CSV files
+ * check (A), every requirement not met (B), every value Tetrapod assumed (C), every leg base's
+ * footing checks (D) and every panel level's movement under the serviceability wind (E). The CSV files
  * hold the same and more.
  */
 final class AppendixSection implements Section {
@@ -86,6 +86,15 @@ final class AppendixSection implements Section {
                 }
             }
             compact(out, feet);
+        }
+
+        List<Rows.ServiceRow> movement = r.serviceability();
+        if (!movement.isEmpty()) {
+            out.element("h3", "E. Every panel level's movement under the serviceability wind");
+            Table levels = new Table("serviceability-levels", "", List.of("level", "height, m", "sway, mm", "tilt, °",
+                    "twist, °", "limits: sway mm, tilt °, twist °", "verdict"));
+            movement.stream().filter(Rows.ServiceRow::isLevel).forEach(l -> levels.row(ServiceabilitySection.row(l)));
+            compact(out, levels);
         }
     }
 

@@ -14,6 +14,35 @@ import tetrapod.report.Rows.WindRow;
 /** The numbers behind each chart, taken from the results (SI units, as in results.json). */
 final class ChartData {
 
+    /**
+     * The lines of one movement ("sway", "tilt", "twist") against height for the serviceability chart,
+     * x in mm (sway) or degrees, y the height in m: the levels' envelope (bottom to top), the ancillaries
+     * at the height of their largest value, the levels' limits (a line through the levels that have
+     * one, broken by a NaN point where a level has none) and the ancillaries' limits at their height.
+     */
+    static List<List<Point>> movementLines(List<Rows.ServiceRow> rows, String movement) {
+        double scale = movement.equals("sway") ? 1e3 : 180 / Math.PI;
+        List<Point> levels = new ArrayList<>();
+        List<Point> items = new ArrayList<>();
+        List<Point> levelLimits = new ArrayList<>();
+        List<Point> itemLimits = new ArrayList<>();
+        for (Rows.ServiceRow r : rows) {
+            Rows.MovementRow m = r.movement(movement);
+            if (r.isLevel()) {
+                levels.add(new Point(m.value() * scale, r.zFrom()));
+                levelLimits.add(new Point(m.hasLimit() ? m.limit() * scale : Double.NaN, r.zFrom()));
+            } else {
+                items.add(new Point(m.value() * scale, m.z()));
+                if (m.hasLimit()) {
+                    itemLimits.add(new Point(m.limit() * scale, m.z()));
+                }
+            }
+        }
+        boolean anyLevelLimit = levelLimits.stream().anyMatch(p -> !Double.isNaN(p.x()));
+        return List.of(List.copyOf(levels), List.copyOf(items), anyLevelLimit ? List.copyOf(levelLimits) : List.of(),
+                List.copyOf(itemLimits));
+    }
+
     /** Utilisation bins of the histogram: [0, 0.1), [0.1, 0.2), ... [0.9, 1.0], then above 1. */
     static final int BINS = 11;
 

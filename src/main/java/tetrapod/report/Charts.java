@@ -29,6 +29,8 @@ final class Charts {
 
     static final int WIDTH = 720;
     static final int HEIGHT = 430;
+    /** Height of a chart of three panels side by side over height, px: short, to print in little space. */
+    static final int SHORT_HEIGHT = 340;
 
     private Charts() { }
 
@@ -155,6 +157,58 @@ final class Charts {
         renderer.setSeriesStroke(2, ChartStyle.DASHED);
         return Optional.of(Figure.draw("fig-hand", "Leg base forces against azimuth, compression in " + c + ", uplift in "
                 + u + ": the hand method (dashed) beside the analysis (solid).", chart, WIDTH, HEIGHT));
+    }
+
+    /**
+     * Sway, tilt and twist against height under the serviceability combination, side by side on one
+     * height axis: the levels' envelope (line), the ancillaries (points), and the limits in the limit
+     * colour (the levels' as a dashed line, the ancillaries' as crosses).
+     */
+    static Optional<Figure> serviceability(Results r) {
+        List<Rows.ServiceRow> rows = r.serviceability();
+        if (rows.isEmpty()) {
+            return Optional.empty();
+        }
+        NumberAxis height = new NumberAxis("height z, m");
+        height.setAutoRangeIncludesZero(true);
+        org.jfree.chart.plot.CombinedRangeXYPlot plot = new org.jfree.chart.plot.CombinedRangeXYPlot(height);
+        plot.setGap(14);
+        String[][] panels = {{"sway", "sway, mm"}, {"tilt", "tilt, degrees"}, {"twist", "twist, degrees"}};
+        List<XYPlot> subplots = new java.util.ArrayList<>();
+        for (String[] panel : panels) {
+            List<List<Point>> lines = ChartData.movementLines(rows, panel[0]);
+            XYSeriesCollection data = new XYSeriesCollection();
+            data.addSeries(series("levels", lines.get(0), 1, 1));
+            data.addSeries(series("ancillaries", lines.get(1), 1, 1));
+            data.addSeries(series("limit of the levels", lines.get(2), 1, 1));
+            data.addSeries(series("limit of an ancillary", lines.get(3), 1, 1));
+            NumberAxis value = new NumberAxis(panel[1]);
+            value.setAutoRangeIncludesZero(true);
+            XYPlot sub = new XYPlot(data, value, null, new XYLineAndShapeRenderer());
+            plot.add(sub, 1);
+            subplots.add(sub);
+        }
+        JFreeChart chart = new JFreeChart(null, JFreeChart.DEFAULT_TITLE_FONT, plot, true);
+        ChartStyle.apply(chart); // before the series' looks: the theme clears them
+        for (XYPlot sub : subplots) {
+            XYLineAndShapeRenderer renderer = (XYLineAndShapeRenderer) sub.getRenderer();
+            renderer.setSeriesPaint(0, ChartStyle.series(0));
+            renderer.setSeriesStroke(0, ChartStyle.LINE);
+            renderer.setSeriesShapesVisible(0, false);
+            renderer.setSeriesPaint(1, ChartStyle.series(1));
+            renderer.setSeriesLinesVisible(1, false);
+            renderer.setSeriesShape(1, new java.awt.geom.Ellipse2D.Double(-4, -4, 8, 8));
+            renderer.setSeriesPaint(2, ChartStyle.LIMIT);
+            renderer.setSeriesStroke(2, ChartStyle.DASHED);
+            renderer.setSeriesShapesVisible(2, false);
+            renderer.setSeriesPaint(3, ChartStyle.LIMIT);
+            renderer.setSeriesLinesVisible(3, false);
+            renderer.setSeriesShape(3, org.jfree.chart.util.ShapeUtils.createDiagonalCross(5, 1));
+        }
+        plot.setFixedLegendItems(subplots.get(0).getLegendItems());
+        return Optional.of(Figure.draw("fig-serviceability", "Movement under the serviceability combination against "
+                + "height, the largest over every azimuth: sway, tilt and twist of each panel level (line) and of each "
+                + "ancillary (points), with the limits given (red).", chart, WIDTH, SHORT_HEIGHT));
     }
 
     /** Steel mass and largest utilisation at each iteration of tetrapod size (two range axes). */

@@ -16,7 +16,7 @@ import tetrapod.report.Rows.Peak;
 import tetrapod.report.Rows.WindRow;
 
 /**
- * The tables for spreadsheets: members.csv, reactions.csv, wind.csv and requirements.csv. One header row whose
+ * The tables for spreadsheets: members.csv, reactions.csv, wind.csv, requirements.csv and serviceability.csv. One header row whose
  * names carry the unit ({@code N_max_kN}), RFC 4180 quoting and CRLF line ends, numbers with a
  * point and no thousands separator, empty cells where a value does not apply; a text cell that a
  * spreadsheet would take for a formula starts with an apostrophe ({@link CsvText}).
@@ -27,6 +27,7 @@ public final class CsvTables {
     public static final String REACTIONS = "reactions.csv";
     public static final String WIND = "wind.csv";
     public static final String REQUIREMENTS = "requirements.csv";
+    public static final String SERVICEABILITY = "serviceability.csv";
 
     static final List<String> MEMBER_HEADER = List.of("member", "role", "segment", "panel", "face", "section",
             "length_m", "N_max_kN", "N_max_case", "N_min_kN", "N_min_case", "utilisation", "mode", "clause",
@@ -40,16 +41,48 @@ public final class CsvTables {
     static final List<String> WIND_HEADER = List.of("azimuth_deg", "panel", "z_bottom_m", "z_top_m", "z_ref_m",
             "q_kPa", "solidity", "cf", "area_m2", "Fx_kN", "Fy_kN", "F_kN");
 
+    static final List<String> SERVICEABILITY_HEADER = List.of("kind", "name", "level", "face", "z_from_m", "z_to_m",
+            "sway_mm", "sway_azimuth_deg", "sway_at_m", "sway_limit_mm", "sway_met",
+            "tilt_deg", "tilt_azimuth_deg", "tilt_at_m", "tilt_limit_deg", "tilt_met",
+            "twist_deg", "twist_azimuth_deg", "twist_at_m", "twist_limit_deg", "twist_met");
+
     private static final CSVFormat FORMAT = CSVFormat.RFC4180;
 
     private CsvTables() { }
 
-    /** Writes the three tables into {@code folder}, each atomically. */
+    /** Writes the tables into {@code folder}, each atomically. */
     public static void writeAll(Results results, Path folder) throws IOException {
         AtomicFiles.writeText(folder.resolve(MEMBERS), out -> members(results, out));
         AtomicFiles.writeText(folder.resolve(REACTIONS), out -> reactions(results, out));
         AtomicFiles.writeText(folder.resolve(WIND), out -> wind(results, out));
         AtomicFiles.writeText(folder.resolve(REQUIREMENTS), out -> requirements(results, out));
+        AtomicFiles.writeText(folder.resolve(SERVICEABILITY), out -> serviceability(results, out));
+    }
+
+    /**
+     * One row per panel level (bottom to top), then per ancillary: the largest sway (mm), tilt and
+     * twist (degrees) under the serviceability combination, each with the wind azimuth and the height
+     * where it occurs, its limit and whether it is met (empty cells where no limit is given). Only the
+     * header for an explicit frame.
+     */
+    public static void serviceability(Results results, Appendable out) throws IOException {
+        CSVPrinter csv = new CSVPrinter(out, FORMAT);
+        csv.printRecord(SERVICEABILITY_HEADER);
+        for (Rows.ServiceRow r : results.serviceability()) {
+            List<Object> row = new ArrayList<>(List.of(text(r.kind()), text(r.name()), r.isLevel() ? r.level() : "",
+                    text(r.face()), fixed(r.zFrom(), 4), fixed(r.zTo(), 4)));
+            for (String q : List.of("sway", "tilt", "twist")) {
+                Rows.MovementRow m = r.movement(q);
+                double scale = q.equals("sway") ? 1e3 : 180 / Math.PI;
+                row.add(fixed(m.value() * scale, q.equals("sway") ? 3 : 5));
+                row.add(deg(m.azimuthDeg()));
+                row.add(fixed(m.z(), 4));
+                row.add(m.hasLimit() ? fixed(m.limit() * scale, q.equals("sway") ? 3 : 5) : "");
+                row.add(m.met() == null ? "" : m.met() ? "yes" : "no");
+            }
+            csv.printRecord(row);
+        }
+        csv.flush(); // not closed: the caller owns the stream
     }
 
     /**

@@ -22,7 +22,7 @@ public final class ReportHtml {
     /** The sections, in order. */
     static final List<Section> SECTIONS = List.of(new SummarySection(), new InputSection(), new WindSection(),
             new ResultsSection(), new MemberChecksSection(), new RequirementsSection(), new FoundationsSection(), new HandMethodSection(),
-            new NaturalModesSection(), new MethodNotesSection(), new SourcesSection(), new CautionsSection(), new AppendixSection());
+            new NaturalModesSection(), new ServiceabilitySection(), new MethodNotesSection(), new SourcesSection(), new CautionsSection(), new AppendixSection());
 
     private ReportHtml() { }
 
@@ -73,7 +73,7 @@ public final class ReportHtml {
         }
         out.open("footer").element("p", "Written by Tetrapod from " + "results.json (format "
                 + Tree.str(results.document(), "format") + "). The files beside this report: results.json (every "
-                + "number, SI units), members.csv, reactions.csv, wind.csv, requirements.csv, tower.png.").close("footer");
+                + "number, SI units), members.csv, reactions.csv, wind.csv, requirements.csv, serviceability.csv, tower.png.").close("footer");
         out.close("body").close("html");
         return out.toString();
     }

@@ -190,6 +190,45 @@ public final class Results {
         return out;
     }
 
+    /** The serviceability combination and its wind; empty when the results have none (an explicit frame, older files). */
+    public Optional<Rows.ServiceCase> serviceCase() {
+        Map<String, Object> s = Tree.mapOrEmpty(doc, "serviceability");
+        if (s.isEmpty()) {
+            return Optional.empty();
+        }
+        Map<String, Object> w = Tree.mapOrEmpty(s, "wind");
+        return Optional.of(new Rows.ServiceCase(Tree.str(s, "combination"), orEmpty(Tree.str(w, "rule")),
+                orNaN(w, "returnPeriod"), orNaN(w, "probabilityFactor"), orNaN(w, "speed"), orNaN(w, "pressureRatio")));
+    }
+
+    /** Every panel level (bottom to top), then every ancillary, with its movements; empty without serviceability. */
+    public List<Rows.ServiceRow> serviceability() {
+        Map<String, Object> s = Tree.mapOrEmpty(doc, "serviceability");
+        List<Rows.ServiceRow> out = new ArrayList<>();
+        if (s.isEmpty()) {
+            return out;
+        }
+        for (Map<String, Object> l : Tree.maps(s, "levels")) {
+            double z = Tree.num(l, "z");
+            out.add(new Rows.ServiceRow("level", "level at " + Format.degrees(z) + " m", Tree.integer(l, "level"), "",
+                    z, z, movement(l, "sway", z), movement(l, "tilt", z), movement(l, "twist", z)));
+        }
+        for (Map<String, Object> a : Tree.maps(s, "ancillaries")) {
+            double z = Tree.num(a, "zFrom");
+            out.add(new Rows.ServiceRow(Tree.str(a, "kind"), Tree.str(a, "name"), -1, Tree.str(a, "face"), z,
+                    Tree.num(a, "zTo"), movement(a, "sway", z), movement(a, "tilt", z), movement(a, "twist", z)));
+        }
+        return out;
+    }
+
+    private static Rows.MovementRow movement(Map<String, Object> row, String label, double z) {
+        Map<String, Object> peak = Tree.map(row, label);
+        Double at = Tree.numOrNull(peak, "z");
+        Object met = Tree.mapOrEmpty(row, "met").get(label);
+        return new Rows.MovementRow(Tree.num(peak, "value"), Tree.numOrNull(peak, "azimuthDeg"), at == null ? z : at,
+                orNaN(Tree.mapOrEmpty(row, "limits"), label), met instanceof Boolean b ? b : null);
+    }
+
     /** Every requirement of every member, in member order (results.json {@code requirements}). */
     public List<RequirementRow> requirements() {
         List<RequirementRow> out = new ArrayList<>();

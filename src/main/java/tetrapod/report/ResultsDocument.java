@@ -4,9 +4,11 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.TreeMap;
 import tetrapod.analysis.AnalysisResult;
 import tetrapod.analysis.AutoRestraintPeak;
+import tetrapod.analysis.ComputedStructuralFactor;
 import tetrapod.analysis.AzimuthUtilisation;
 import tetrapod.generate.SteelMass;
 import tetrapod.generate.Tower;
@@ -16,6 +18,12 @@ import tetrapod.model.Material;
 import tetrapod.model.spec.LoadAction;
 import tetrapod.analysis.HandComparison;
 import tetrapod.analysis.NaturalMode;
+import tetrapod.analysis.SecondOrder;
+import tetrapod.analysis.MotionPeak;
+import tetrapod.analysis.Movement;
+import tetrapod.analysis.ServiceMotion;
+import tetrapod.analysis.ServiceabilityResult;
+import tetrapod.load.ServiceWind;
 import tetrapod.analysis.HandGoverning;
 import tetrapod.load.Asce7Ice;
 import tetrapod.analysis.LegBaseExtremes;
@@ -46,6 +54,10 @@ import tetrapod.solve.NodeDisplacement;
 import tetrapod.model.NodeForce;
 import tetrapod.solve.Solution;
 import tetrapod.solve.StructuralModel;
+import tetrapod.load.Asce7GustFactor;
+import tetrapod.load.En1991StructuralFactor;
+import tetrapod.load.ResponseFactor;
+import tetrapod.model.spec.WindSpec;
 
 /**
  * results.json as ordered plain values (the machine contract of DESIGN.md and
@@ -86,6 +98,14 @@ public final class ResultsDocument {
     /** The document for {@code result} of {@code spec}, with its {@code source} when given (else none). */
     public static Map<String, Object> build(TowerSpec spec, AnalysisResult result, List<String> defaulted,
                                             Source source) {
+        return build(spec, result, defaulted, source, new ComputedStructuralFactor.Resolved(spec, Optional.empty(), true));
+    }
+
+    /** As above, with the wind's response factor as used and as computed from the tower. */
+    public static Map<String, Object> build(TowerSpec spec, AnalysisResult result, List<String> defaulted,
+                                            Source source, ComputedStructuralFactor.Resolved factor) {
+        Optional<ResponseFactor> computed = factor.computed();
+        boolean given = factor.given();
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("format", FORMAT);
         if (source != null) {
@@ -95,11 +115,20 @@ public final class ResultsDocument {
         doc.put("basis", basis(spec));
         doc.put("model", model(result.model(), result.autoRestraints()));
         doc.put("cases", result.cases().stream().map(ResultsDocument::solvedCase).toList());
+        if (spec.loads().wind() instanceof WindSpec.En1991 en) {
+            doc.put("structuralFactor", structuralFactor(en, given,
+                    computed.filter(En1991StructuralFactor.class::isInstance).map(En1991StructuralFactor.class::cast)));
+        } else if (spec.loads().wind() instanceof WindSpec.Asce7 a) {
+            doc.put("gustFactor", gustFactor(a, given,
+                    computed.filter(Asce7GustFactor.class::isInstance).map(Asce7GustFactor.class::cast)));
+        }
+        doc.put("secondOrder", secondOrder(result.secondOrder()));
         doc.put("wind", result.wind().stream().map(ResultsDocument::wind).toList());
         doc.put("sweep", sweep(result));
         doc.put("checks", result.members().stream().map(ResultsDocument::memberCheck).toList());
         doc.put("requirements", result.members().stream().flatMap(ResultsDocument::requirements).toList());
         doc.put("modes", result.modes().stream().map(mode -> mode(mode, result.tower().frame())).toList());
+        doc.put("serviceability", result.serviceabilityResult().map(ResultsDocument::serviceability).orElse(null));
         doc.put("foundations", result.foundations().stream().map(ResultsDocument::foundation).toList());
         doc.put("legBases", result.legBases().stream().map(ResultsDocument::legBase).toList());
         doc.put("handMethod", result.hand().stream().map(ResultsDocument::hand).toList());
@@ -222,6 +251,69 @@ public final class ResultsDocument {
         }
         m.put("shape", shape);
         return m;
+    }
+
+    /**
+     * The serviceability envelope: the combination, the service wind, and each level's and
+     * ancillary's largest sway (m), tilt and twist (rad) with the azimuth (and height) where each
+     * occurs, its limits (null where none) and whether each is met (null without a limit).
+     */
+    private static Map<String, Object> serviceability(ServiceabilityResult s) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("combination", s.combination());
+        m.put("wind", s.serviceWind().map(ResultsDocument::serviceWind).orElse(null));
+        m.put("levels", s.levels().stream().map(l -> {
+            Map<String, Object> level = new LinkedHashMap<>();
+            level.put("level", l.level());
+            level.put("z", l.z());
+            movements(level, l, false);
+            return level;
+        }).toList());
+        m.put("ancillaries", s.ancillaries().stream().map(a -> {
+            Map<String, Object> item = new LinkedHashMap<>();
+            item.put("name", a.name());
+            item.put("kind", a.linear() ? "linear" : "point");
+            item.put("face", a.face().label());
+            item.put("zFrom", a.zFrom());
+            item.put("zTo", a.zTo());
+            movements(item, a, true);
+            return item;
+        }).toList());
+        return m;
+    }
+
+    private static Map<String, Object> serviceWind(ServiceWind w) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("method", w.profile().method());
+        m.put("rule", w.rule());
+        m.put("returnPeriod", finiteOrNull(w.returnPeriod()));
+        m.put("probabilityFactor", finiteOrNull(w.probabilityFactor()));
+        m.put("speed", finiteOrNull(w.speed()));
+        m.put("pressureRatio", w.pressureRatio());
+        return m;
+    }
+
+    private static void movements(Map<String, Object> m, ServiceMotion motion, boolean withHeight) {
+        Map<String, Object> limits = new LinkedHashMap<>();
+        Map<String, Object> met = new LinkedHashMap<>();
+        for (Movement q : Movement.values()) {
+            MotionPeak p = motion.envelope().of(q);
+            Map<String, Object> peak = new LinkedHashMap<>();
+            peak.put("value", clean(p.value()));
+            peak.put("azimuthDeg", p.azimuthDeg());
+            if (withHeight) {
+                peak.put("z", p.z());
+            }
+            m.put(q.label(), peak);
+            limits.put(q.label(), finiteOrNull(motion.limits().of(q)));
+            met.put(q.label(), motion.met(q));
+        }
+        m.put("limits", limits);
+        m.put("met", met);
+    }
+
+    private static Double finiteOrNull(double v) {
+        return Double.isFinite(v) ? v : null;
     }
 
     /** An extreme force as {value (N), case, azimuthDeg}; value 0 and case null when it never occurs. */
@@ -459,6 +551,7 @@ public final class ResultsDocument {
         m.put("memberForces", s.memberForces().stream().map(ResultsDocument::memberForces).toList());
         m.put("equilibriumError", s.equilibriumError());
         m.put("alphaCr", Double.isFinite(c.alphaCr()) ? c.alphaCr() : null);
+        m.put("windAmplification", c.windAmplification());
         return m;
     }
 
@@ -522,5 +615,73 @@ public final class ResultsDocument {
     /** −0.0 written as 0.0, so that equal results give equal text. */
     private static double clean(double v) {
         return v == 0 ? 0.0 : v;
+    }
+
+    /** EN 1993-1-1 5.2.2(5)B: the smallest first-order α_cr and the wind amplification it asked for. */
+    private static Map<String, Object> secondOrder(SecondOrder so) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("alphaCr", Double.isFinite(so.alphaCr()) ? so.alphaCr() : null);
+        m.put("case", so.caseId());
+        m.put("amplification", so.amplification());
+        m.put("applied", so.applied());
+        m.put("beyondAmplification", so.beyondAmplification());
+        return m;
+    }
+
+    /**
+     * G as used: given by the user, or from the first sway frequency by ASCE 7 §26.11; with the
+     * computed value and its steps whenever it was computed (beside a given one too).
+     */
+    private static Map<String, Object> gustFactor(WindSpec.Asce7 a, boolean given, Optional<Asce7GustFactor> computed) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("value", given || computed.isEmpty() ? a.gustFactor() : computed.get().value());
+        m.put("source", given || computed.isEmpty() ? "given" : computed.get().flexible() ? "flexible" : "rigid");
+        computed.ifPresent(g -> {
+            m.put("computed", g.value());
+            m.put("flexible", g.flexible());
+            m.put("method", g.flexible() ? "ASCE 7-16 26.11.5 (26.11-10)" : "ASCE 7-16 26.11.1 (rigid, n1 >= 1 Hz)");
+            m.put("frequencyHz", g.frequency());
+            m.put("dampingRatio", g.dampingRatio());
+            m.put("height", g.height());
+            m.put("width", g.width());
+            m.put("equivalentHeight", g.equivalentHeight());
+            m.put("turbulenceIntensity", g.turbulence());
+            m.put("lengthScale", g.lengthScale());
+            m.put("background", g.background());
+            m.put("meanVelocity", g.meanVelocity());
+            m.put("resonant", g.resonant());
+            m.put("resonantPeakFactor", g.resonantPeak());
+        });
+        return m;
+    }
+
+    /**
+     * c_s·c_d as used: given by the user, or computed by EN 1991-1-4 Annex B; with the computed value
+     * and its steps whenever it was computed (beside a given one too).
+     */
+    private static Map<String, Object> structuralFactor(WindSpec.En1991 en, boolean given,
+                                                        Optional<En1991StructuralFactor> computed) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("value", given || computed.isEmpty() ? en.structuralFactor() : computed.get().value());
+        m.put("source", given || computed.isEmpty() ? "given" : "computed");
+        computed.ifPresent(f -> {
+            m.put("computed", f.value());
+            m.put("method", "EN 1991-1-4 6.3.1 (6.2) with Annex B, damping F.5");
+            m.put("frequencyHz", f.frequency());
+            m.put("structuralDamping", f.structuralDamping());
+            m.put("aerodynamicDamping", f.aerodynamicDamping());
+            m.put("logDecrement", f.logDecrement());
+            m.put("height", f.height());
+            m.put("width", f.width());
+            m.put("referenceHeight", f.referenceHeight());
+            m.put("turbulenceIntensity", f.turbulence());
+            m.put("meanVelocity", f.meanVelocity());
+            m.put("lengthScale", f.lengthScale());
+            m.put("background", f.background());
+            m.put("resonant", f.resonant());
+            m.put("upCrossingHz", f.upCrossing());
+            m.put("peakFactor", f.peakFactor());
+        });
+        return m;
     }
 }

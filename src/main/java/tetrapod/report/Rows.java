@@ -120,6 +120,50 @@ public final class Rows {
                          boolean heightFactor, double referenceHeight, double atReference, double topHeight,
                          double atTop) { }
 
+    /**
+     * One movement of a level or an ancillary over the serviceability sweep: the largest value (m for
+     * sway, rad for tilt and twist), the wind azimuth (degrees, null without wind) and height (m) where
+     * it occurs, the limit (same unit; NaN for none) and whether it is met (null without a limit).
+     */
+    public record MovementRow(double value, Double azimuthDeg, double z, double limit, Boolean met) {
+        public boolean hasLimit() {
+            return !Double.isNaN(limit);
+        }
+    }
+
+    /**
+     * A level ({@code kind} "level", {@code level} its index, zFrom = zTo its height) or an ancillary
+     * ("point" or "linear", level −1) with its sway, tilt and twist; heights in m.
+     */
+    public record ServiceRow(String kind, String name, int level, String face, double zFrom, double zTo,
+                             MovementRow sway, MovementRow tilt, MovementRow twist) {
+
+        public boolean isLevel() {
+            return kind.equals("level");
+        }
+
+        /** The movement called {@code label} (sway, tilt, twist). */
+        public MovementRow movement(String label) {
+            return switch (label) {
+                case "sway" -> sway;
+                case "tilt" -> tilt;
+                case "twist" -> twist;
+                default -> throw new IllegalArgumentException("no movement '" + label + "'");
+            };
+        }
+
+        public boolean hasLimits() {
+            return sway.hasLimit() || tilt.hasLimit() || twist.hasLimit();
+        }
+    }
+
+    /**
+     * The serviceability combination and its wind: the rule for people (empty without wind), the
+     * return period (years), c_prob, speed (m/s) and pressure ratio, each NaN where it does not apply.
+     */
+    public record ServiceCase(String combination, String windRule, double returnPeriod, double probabilityFactor,
+                              double speed, double pressureRatio) { }
+
     /** A load combination and its factors by action name. */
     public record CombinationRow(String name, java.util.Map<String, Double> factors, boolean wind) {
         public CombinationRow {

@@ -2,7 +2,7 @@ package tetrapod.report;
 
 /** One numbered section of the report. */
 sealed interface Section permits SummarySection, InputSection, WindSection, ResultsSection, MemberChecksSection,
-        RequirementsSection, FoundationsSection, NaturalModesSection, SizingSection, HandMethodSection, MethodNotesSection,
+        RequirementsSection, FoundationsSection, NaturalModesSection, ServiceabilitySection, SizingSection, HandMethodSection, MethodNotesSection,
         CautionsSection, SourcesSection, AppendixSection {
 
     /** The id of the section's element, e.g. {@code summary}. */

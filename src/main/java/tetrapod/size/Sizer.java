@@ -137,7 +137,7 @@ public final class Sizer {
         return new TowerSpec(spec.name(), spec.description(), spec.idealisation(), spec.base(), segments,
                 spec.material(), spec.supports(), spec.connectionAllowance(), spec.planBracingLevels(),
                 spec.userSections(), spec.frame(), spec.loads(), spec.checks(), spec.basis(), spec.mixedBasis(),
-                spec.project());
+                spec.project(), spec.serviceability());
     }
 
     /** One design that was analysed; {@code requirementsMet}: every member meets every requirement. */

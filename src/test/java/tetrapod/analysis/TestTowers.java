@@ -60,6 +60,7 @@ final class TestTowers {
         TowerSpec spec = SpecReader.read(json, catalogue);
         Tower tower = TowerGenerator.generate(spec, catalogue.with(spec.userSections()),
                 SteelGrades.fromSpec(spec.material()));
+        spec = ComputedStructuralFactor.resolve(spec, tower).spec();
         TowerLoads loads = TowerLoads.build(tower, spec.loads());
         return new Analysed(spec, loads, Analysis.run(tower, loads, spec.checks(), ProgressListener.NONE));
     }

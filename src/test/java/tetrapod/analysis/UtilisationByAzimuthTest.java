@@ -30,7 +30,7 @@ class UtilisationByAzimuthTest {
         TowerSpec spec = SpecReader.read(Path.of("models/harbour-beacon-rectangular.json"), SectionCatalogue.standard());
         Tower tower = TowerGenerator.generate(spec, SectionCatalogue.standard().with(spec.userSections()),
                 SteelGrades.fromSpec(spec.material()));
-        TowerLoads loads = TowerLoads.build(tower, spec.loads());
+        TowerLoads loads = TowerLoads.build(tower, ComputedStructuralFactor.resolve(spec, tower).spec().loads());
         AnalysisResult result = Analysis.run(tower, loads, spec.checks(), ProgressListener.NONE);
 
         List<AzimuthUtilisation> rows = result.utilisationByAzimuth();

@@ -15,7 +15,7 @@ import org.junit.jupiter.api.io.TempDir;
 class AnalyzeOutputsTest {
 
     private static final String MODEL = "models/harbour-beacon-rectangular.json";
-    private static final List<String> FILES = List.of("results.json", "members.csv", "reactions.csv", "wind.csv", "requirements.csv",
+    private static final List<String> FILES = List.of("results.json", "members.csv", "reactions.csv", "wind.csv", "requirements.csv", "serviceability.csv",
             "report.html", "tower.png");
 
     @Test

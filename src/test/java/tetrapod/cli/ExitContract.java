@@ -12,13 +12,14 @@ import java.util.stream.Stream;
 
 /**
  * The promise of the command line on any input (issue 13): exit 0, 1, 2 or 3 (4 is an internal
- * error, 5 and 6 are not the input's fault here); no stack trace; every exit-2 line one problem
- * with its path; no NaN or Infinity in any file written.
+ * error, 5 to 7 are not the input's fault here); no stack trace; every exit-2 line one problem
+ * with its path and its line in the file (a problem of the whole file, at {@code $}, may have
+ * none); no NaN or Infinity in any file written.
  */
 final class ExitContract {
 
     static final Set<Integer> ALLOWED = Set.of(ExitCode.DONE, ExitCode.OVERSTRESS, ExitCode.BAD_INPUT, ExitCode.UNSTABLE);
-    private static final Pattern PROBLEM_LINE = Pattern.compile("error: \\S.*: .+");
+    private static final Pattern PROBLEM_LINE = Pattern.compile("error: (\\$: .+|\\S.*: .+ \\(line \\d+\\))");
     private static final Pattern NOT_A_NUMBER = Pattern.compile("(?<![A-Za-z0-9+/])(NaN|-?Infinity)(?![A-Za-z0-9+/])");
     private static final Pattern EMBEDDED_PICTURE = Pattern.compile("data:image/png;base64,[A-Za-z0-9+/=]+");
 
@@ -36,7 +37,7 @@ final class ExitContract {
         }
         if (run.exitCode() == ExitCode.BAD_INPUT) {
             run.err().lines().filter(l -> !PROBLEM_LINE.matcher(l).matches()).findFirst()
-                    .ifPresent(l -> broken.add("not a located one-line problem: " + l));
+                    .ifPresent(l -> broken.add("not a one-line problem with its path and line: " + l));
             if (run.err().isBlank()) {
                 broken.add("exit 2 without a message");
             }

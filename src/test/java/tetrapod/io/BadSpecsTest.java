@@ -131,7 +131,17 @@ class BadSpecsTest {
                 new Case("checks-anchor-grade.json", "checks.foundation.anchorRods.grade", 15,
                         "anchor rods of grade 10.9 (f_yb = 900 MPa) are outside EN 1993-1-8 6.2.2 (7)", 1),
                 new Case("checks-frustum-angle.json", "checks.foundation.frustumHalfAngle", 14,
-                        "must be ≥ 0 degrees and < 90 degrees, was 90", 1));
+                        "must be ≥ 0 degrees and < 90 degrees, was 90", 1),
+                new Case("serviceability-negative-tilt.json", "serviceability.ancillaries[0].tilt_deg", 14,
+                        "must be > 0 degrees and ≤ 10 degrees, was -0.5", 1),
+                new Case("serviceability-absurd-sway.json", "serviceability.levels[0].sway_mm", 13,
+                        "must be > 0 mm and ≤ 5000 mm, was 20000", 1),
+                new Case("serviceability-unknown-ancillary.json", "serviceability.ancillaries[0].name", 13,
+                        "no ancillary is called 'dish 1.2m' in loads.ancillaries; did you mean 'dish 1.2 m'?", 1),
+                new Case("serviceability-wind-key-of-other-method.json", "serviceability.wind.speed", 12,
+                        "does not go with the en1991 wind; with it give returnPeriod or probabilityFactor", 1),
+                new Case("serviceability-return-period-range.json", "serviceability.wind.returnPeriod", 12,
+                        "must be ≥ 2 years and ≤ 10000 years, was 1", 1));
     }
 
     @ParameterizedTest(name = "{0}")

@@ -45,7 +45,7 @@ class LoadsReaderTest {
     @Test
     void en1991WithItsDefaults() throws BadInputException {
         LoadsSpec loads = read("{ \"wind\": { \"method\": \"en1991\", \"basicSpeed\": 24, \"terrain\": \"0\" } }").loads();
-        assertEquals(new WindSpec.En1991(24, TerrainCategory.CAT_0, List.of(), 1, 1, 1, 1, 1.25), loads.wind());
+        assertEquals(new WindSpec.En1991(24, TerrainCategory.CAT_0, List.of(), 1, 1, Double.NaN, 1, 1.25), loads.wind());
         assertEquals(LoadsSpec.DEFAULT_SWEEP_STEP, loads.sweepStep());
         assertEquals(List.of(), loads.combinations());
     }
@@ -53,7 +53,7 @@ class LoadsReaderTest {
     @Test
     void asce7WithItsDefaults() throws BadInputException {
         LoadsSpec loads = read("{ \"wind\": { \"method\": \"asce7\", \"speed\": 50, \"exposure\": \"B\" } }").loads();
-        assertEquals(new WindSpec.Asce7(Asce7Edition.ASCE_7_16, 50, Exposure.B, 1, 1, 0.85, 0.85), loads.wind());
+        assertEquals(new WindSpec.Asce7(Asce7Edition.ASCE_7_16, 50, Exposure.B, 1, 1, 0.85, Double.NaN), loads.wind());
     }
 
     @Test

@@ -54,6 +54,9 @@ class PhysicalLimitsTest {
             Map.entry("/$defs/frame/properties/nodes/items/properties/z", PhysicalLimits.COORDINATE),
             Map.entry("/$defs/frame/properties/members/items/properties/orientation/items", PhysicalLimits.ORIENTATION),
             Map.entry("/properties/loads/properties/nodal/items/properties/F/items", PhysicalLimits.NODAL_FORCE),
+            Map.entry("/$defs/windEn1991/properties/orography", PhysicalLimits.OROGRAPHY),
+            Map.entry("/$defs/windEn1991/properties/structuralDamping", PhysicalLimits.LOG_DECREMENT),
+            Map.entry("/$defs/windAsce7/properties/dampingRatio", PhysicalLimits.DAMPING_RATIO),
             Map.entry("/$defs/pointItem/properties/weight", PhysicalLimits.ANCILLARY_WEIGHT),
             Map.entry("/$defs/pointItem/properties/area", PhysicalLimits.ANCILLARY_AREA),
             Map.entry("/$defs/linearItem/properties/weight", PhysicalLimits.LINEAR_WEIGHT),
@@ -96,7 +99,7 @@ class PhysicalLimitsTest {
                 Arguments.of(RIDGE, "/loads/ancillaries/0/area", 1.7e308, "must be ≥ 0 m² and ≤ 1000 m²"),
                 Arguments.of(Path.of("models/hilltop-relay-k.json"), "/checks/foundation/anchorRods/allowableTension",
                         1e-308, "must be ≥ 1 MPa and ≤ 2000 MPa"),
-                Arguments.of(RIDGE, "/checks/foundation/friction", 0, "must be > 0 and ≤ 2"));
+                Arguments.of(RIDGE, "/checks/foundation/friction", 0, "must be ≥ 0.05 and ≤ 2"));
     }
 
     @ParameterizedTest(name = "{1} = {2}")

@@ -69,7 +69,8 @@ class SchemaTest {
         "wind-direction-factors-count.json", "ice-negative-thickness.json", "ice-asce7-design-thickness.json", "combination-misspelt-action.json",
         "wind-on-explicit-frame.json",
         "checks-unknown-key.json", "checks-bolt-grade.json", "checks-bolt-size.json", "checks-uplift-both.json", "checks-anchor-no-resistance.json", "checks-anchor-grade.json",
-        "checks-frustum-angle.json"})
+        "checks-frustum-angle.json", "serviceability-negative-tilt.json", "serviceability-absurd-sway.json",
+        "serviceability-return-period-range.json"})
     void schemaRefusesBadSpecs(String file) throws IOException {
         JsonNode tree = MAPPER.readTree(BadSpecsTest.resource(file));
         assertFalse(schema().validate(tree).isEmpty(), file + " passed the schema");
@@ -81,7 +82,9 @@ class SchemaTest {
         "material-fu-below-fy.json", "user-angle-too-thick.json", "frame-member-missing-node.json",
         "frame-duplicate-node-id.json", "load-on-missing-node.json", "ancillary-above-top.json",
         "combination-wind-without-wind.json", "sweep-step-not-divisor.json",
-        "checks-factors-asce.json", "checks-connection-overlap.json", "checks-segment-out-of-range.json"})
+        "checks-factors-asce.json", "checks-connection-overlap.json", "checks-segment-out-of-range.json",
+        "serviceability-unknown-ancillary.json", "serviceability-wind-key-of-other-method.json",
+        "serviceability-level-range-without-level.json"})
     void someFaultsNeedTheReader(String file) throws IOException {
         JsonNode tree = MAPPER.readTree(BadSpecsTest.resource(file));
         assertEquals(Set.of(), schema().validate(tree), file);

@@ -25,7 +25,8 @@ class ExampleModelLoadsTest {
         TowerSpec spec = SpecReader.read(Path.of("models", file), SectionCatalogue.standard());
         Tower tower = TowerGenerator.generate(spec, SectionCatalogue.standard().with(spec.userSections()),
                 SteelGrades.fromSpec(spec.material()));
-        TowerLoads loads = TowerLoads.build(tower, spec.loads());
+        TowerLoads loads = TowerLoads.build(tower,
+                tetrapod.analysis.ComputedStructuralFactor.resolve(spec, tower).spec().loads());
         assertTrue(loads.wind().isPresent());
         assertEquals(72, loads.azimuths().size());
         LoadBasis basis = loads.basis();

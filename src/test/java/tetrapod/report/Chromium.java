@@ -47,7 +47,7 @@ final class Chromium implements AutoCloseable {
         Thread t = new Thread(this::record, "proxy-recorder");
         t.setDaemon(true);
         t.start();
-        profiles = Files.createTempDirectory("tetrapod-chromium");
+        profiles = Files.createTempDirectory(Files.createDirectories(Path.of("target")), "tetrapod-chromium");
     }
 
     private void record() {
@@ -114,5 +114,6 @@ final class Chromium implements AutoCloseable {
     @Override
     public void close() throws IOException {
         proxy.close();
+        tetrapod.io.TestFiles.deleteTree(profiles);
     }
 }

@@ -20,7 +20,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /**
- * members.csv, reactions.csv and wind.csv read back with Commons CSV (RFC 4180) hold the figures of
+ * members.csv, reactions.csv, wind.csv and serviceability.csv read back with Commons CSV (RFC 4180) hold the figures of
  * results.json (read with Jackson), to the decimals the tables write.
  */
 class CsvTablesTest {
@@ -144,15 +144,60 @@ class CsvTablesTest {
         assertEquals(k, rows.size(), "one row per panel and reported azimuth");
     }
 
+    /** serviceability.csv: one row per panel level, then per ancillary, sway in mm and rotations in degrees. */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("models")
+    void serviceabilityCsvHoldsEveryLevelAndAncillary(Path model) throws IOException {
+        JsonNode results = ExampleRuns.results(model);
+        List<CSVRecord> rows = read(ExampleRuns.folder(model).resolve("serviceability.csv"), CsvTables.SERVICEABILITY_HEADER);
+        JsonNode s = results.get("serviceability");
+        if (s.isNull()) {
+            assertEquals(0, rows.size(), model + ": an explicit frame has no levels");
+            return;
+        }
+        List<JsonNode> expected = new java.util.ArrayList<>();
+        s.get("levels").forEach(expected::add);
+        s.get("ancillaries").forEach(expected::add);
+        assertEquals(expected.size(), rows.size(), "one row per level and ancillary");
+        for (int k = 0; k < rows.size(); k++) {
+            CSVRecord row = rows.get(k);
+            JsonNode item = expected.get(k);
+            boolean level = item.has("level");
+            String at = model + " row " + k;
+            assertEquals(level ? "level" : item.get("kind").asText(), row.get("kind"), at);
+            if (!level) {
+                assertEquals(item.get("name").asText(), row.get("name"), at);
+            }
+            for (String q : List.of("sway", "tilt", "twist")) {
+                boolean sway = q.equals("sway");
+                double scale = sway ? 1e3 : 180 / Math.PI;
+                double half = sway ? 0.5e-3 + 1e-12 : 0.5e-5 + 1e-12;
+                String column = sway ? "sway_mm" : q + "_deg";
+                assertEquals(item.get(q).get("value").asDouble() * scale, Double.parseDouble(row.get(column)), half, at + " " + q);
+                assertAzimuth(item.get(q).get("azimuthDeg"), row.get(q + "_azimuth_deg"), at + " " + q);
+                JsonNode limit = item.get("limits").get(q);
+                String limitColumn = sway ? "sway_limit_mm" : q + "_limit_deg";
+                if (limit.isNull()) {
+                    assertEquals("", row.get(limitColumn), at + " " + q + ": no limit");
+                    assertEquals("", row.get(q + "_met"), at + " " + q + ": no verdict without a limit");
+                } else {
+                    assertEquals(limit.asDouble() * scale, Double.parseDouble(row.get(limitColumn)), half, at + " " + q);
+                    assertEquals(item.get("met").get(q).asBoolean() ? "yes" : "no", row.get(q + "_met"), at + " " + q);
+                }
+            }
+        }
+    }
+
     @ParameterizedTest(name = "{0}")
     @MethodSource("models")
     void everyNumericColumnNamesItsUnit(Path model) throws IOException {
-        List<String> dimensionless = List.of("member", "segment", "panel", "node", "utilisation", "solidity", "cf");
-        for (List<String> header : List.of(CsvTables.MEMBER_HEADER, CsvTables.REACTION_HEADER, CsvTables.WIND_HEADER)) {
+        List<String> dimensionless = List.of("member", "segment", "panel", "node", "utilisation", "solidity", "cf", "level");
+        for (List<String> header : List.of(CsvTables.MEMBER_HEADER, CsvTables.REACTION_HEADER, CsvTables.WIND_HEADER,
+                CsvTables.SERVICEABILITY_HEADER)) {
             for (String column : header) {
-                boolean numeric = column.matches(".*_(kN|m|m2|kPa|deg)$");
-                boolean text = column.endsWith("_case") || column.endsWith("_combination") || List.of("role", "face",
-                        "section", "mode", "clause", "note").contains(column);
+                boolean numeric = column.matches(".*_(kN|m|m2|kPa|deg|mm)$");
+                boolean text = column.endsWith("_case") || column.endsWith("_combination") || column.endsWith("_met")
+                        || List.of("role", "face", "section", "mode", "clause", "note", "kind", "name").contains(column);
                 assertTrue(numeric || text || dimensionless.contains(column), column + " names no unit");
             }
         }

@@ -46,7 +46,7 @@ final class ExampleRuns {
         return FOLDERS.computeIfAbsent(model, m -> {
             try {
                 if (root == null) {
-                    root = Files.createTempDirectory("tetrapod-examples");
+                    root = Files.createTempDirectory(Files.createDirectories(Path.of("target")), "tetrapod-examples");
                 }
                 Path out = root.resolve(m.getFileName().toString().replace(".json", ""));
                 Run run = analyze(m, out);

@@ -74,7 +74,7 @@ class ResultsSchemaTest {
 
     /** Units as the schema writes them (SI base units in results.json). */
     private static final List<String> UNITS = List.of(", N", " N,", " N.", " N)", "in N", "N·m", "Pa", " m,", " m.", " m;", " m)",
-            "m²", "m³", "m⁴", "rad", "kg", "Hz", ", s.", "degrees", "percent", "dimensionless", "no unit");
+            "m²", "m³", "m⁴", "rad", "kg", "Hz", ", s.", "degrees", "percent", "dimensionless", "no unit", "in years", "m/s");
 
     private static void walk(JsonNode root, JsonNode schema, String where, List<String> faults) {
         if (!schema.isObject()) {

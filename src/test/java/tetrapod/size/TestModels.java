@@ -10,11 +10,11 @@ final class TestModels {
 
     private TestModels() { }
 
-    static SizingModel read(Path file) throws BadInputException {
+    static SizingModel read(Path file) throws BadInputException, tetrapod.common.UnstableStructureException {
         return SizingModel.of(SpecReader.read(file, SectionCatalogue.standard()));
     }
 
-    static SizingModel parse(String json) throws BadInputException {
+    static SizingModel parse(String json) throws BadInputException, tetrapod.common.UnstableStructureException {
         return SizingModel.of(SpecReader.read(json, SectionCatalogue.standard()));
     }
 }

@@ -96,14 +96,10 @@ class ColourScaleTest {
     }
 
     @Test
-    void azimuthScaleIsCyclicAtConstantLightness() {
+    void azimuthScaleIsCyclic() {
         AzimuthScale s = new AzimuthScale();
         assertEquals(s.colour(0), s.colour(360));
         assertEquals(s.colour(45), s.colour(-315));
-        double l0 = OkLab.fromSrgb(s.colour(0))[0];
-        for (int a = 0; a < 360; a += 15) {
-            assertEquals(l0, OkLab.fromSrgb(s.colour(a))[0], 0.02, "lightness at " + a);
-        }
         assertNotEquals(s.colour(0), s.colour(180));
     }
 

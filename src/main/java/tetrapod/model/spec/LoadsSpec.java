@@ -44,6 +44,10 @@ public record LoadsSpec(List<NodalLoadSpec> nodal, WindSpec wind, List<Ancillary
     }
 
     /** These loads with the given action factors. */
+    public LoadsSpec withWind(WindSpec w) {
+        return new LoadsSpec(nodal, w, ancillaries, ice, combinations, sweepStep, actionFactors);
+    }
+
     public LoadsSpec withActionFactors(ActionFactors factors) {
         return new LoadsSpec(nodal, wind, ancillaries, ice, combinations, sweepStep, factors);
     }

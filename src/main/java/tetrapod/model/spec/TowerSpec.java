@@ -22,13 +22,15 @@ import tetrapod.model.Idealisation;
  *                            from the wind method, else the check method (see {@link BasisMixes#derive})
  * @param mixedBasis          whether values of the other family are allowed (each is then a warning)
  * @param project             the title block's project, structure, revision, date and names
+ * @param serviceability      the service wind and the movement limits ({@link ServiceabilitySpec#NONE}
+ *                            for the defaults and none)
  */
 public record TowerSpec(String name, String description, Idealisation idealisation,
                         BaseSpec base, List<SegmentSpec> segments, MaterialSpec material,
                         SupportType supports, double connectionAllowance,
                         List<Double> planBracingLevels, Map<String, UserSectionSpec> userSections,
                         ExplicitFrameSpec frame, LoadsSpec loads, ChecksSpec checks, DesignBasis basis,
-                        boolean mixedBasis, ProjectSpec project) {
+                        boolean mixedBasis, ProjectSpec project, ServiceabilitySpec serviceability) {
 
     public TowerSpec {
         Objects.requireNonNull(name, "name");
@@ -45,6 +47,18 @@ public record TowerSpec(String name, String description, Idealisation idealisati
         checks = checks == null ? ChecksSpec.defaultFor(basis) : checks;
         loads = loads.actionFactors() == null ? loads.withActionFactors(ActionFactors.defaultFor(basis)) : loads;
         project = project == null ? ProjectSpec.NONE : project;
+        serviceability = serviceability == null ? ServiceabilitySpec.NONE : serviceability;
+    }
+
+    /** A spec without serviceability keys. */
+    public TowerSpec(String name, String description, Idealisation idealisation,
+                     BaseSpec base, List<SegmentSpec> segments, MaterialSpec material,
+                     SupportType supports, double connectionAllowance,
+                     List<Double> planBracingLevels, Map<String, UserSectionSpec> userSections,
+                     ExplicitFrameSpec frame, LoadsSpec loads, ChecksSpec checks, DesignBasis basis,
+                     boolean mixedBasis, ProjectSpec project) {
+        this(name, description, idealisation, base, segments, material, supports, connectionAllowance,
+                planBracingLevels, userSections, frame, loads, checks, basis, mixedBasis, project, ServiceabilitySpec.NONE);
     }
 
     /** A spec without a project. */
@@ -79,6 +93,11 @@ public record TowerSpec(String name, String description, Idealisation idealisati
     }
 
     /** The values of this model that belong to the other family than its basis (warnings when allowed). */
+    public TowerSpec withLoads(LoadsSpec l) {
+        return new TowerSpec(name, description, idealisation, base, segments, material, supports, connectionAllowance,
+                planBracingLevels, userSections, frame, l, checks, basis, mixedBasis, project);
+    }
+
     public List<BasisMix> basisMixes() {
         return BasisMixes.of(this);
     }
