@@ -91,6 +91,7 @@ public class MemberCheckBenchmark {
                 : Files.readString(Path.of(model));
         spec = SpecReader.read(text, catalogue);
         tower = TowerGenerator.generate(spec, catalogue.with(spec.userSections()), SteelGrades.fromSpec(spec.material()));
+        spec = ComputedStructuralFactor.resolve(spec, tower, null, false).spec();   // as analyze fills it in
         TowerLoads loads = TowerLoads.build(tower, spec.loads());
         List<LoadVector> vectors = new ArrayList<>();
         for (LoadComponent c : loads.basis().components()) {

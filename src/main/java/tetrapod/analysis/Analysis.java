@@ -189,9 +189,8 @@ public final class Analysis {
                 addGoverning(reported, keys, e);
             }
         }
-        for (MemberEnvelope m : members) {
-            addGoverning(reported, keys, m.governingWhere());
-        }
+        // a member's governing case is not solved in full: its forces in that case are in its envelope,
+        // so that the cases written grow with the combinations and the supports, not with the members
         for (FoundationEnvelope f : foundations) {
             f.checks().values().forEach(g -> addGoverning(reported, keys, g.where()));
         }
