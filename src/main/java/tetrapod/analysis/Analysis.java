@@ -194,18 +194,53 @@ public final class Analysis {
         for (FoundationEnvelope f : foundations) {
             f.checks().values().forEach(g -> addGoverning(reported, keys, g.where()));
         }
-        List<SolvedCase> cases = new ArrayList<>(reported.size());
-        int solved = 0;
-        for (CaseKey key : reported.values()) {
+        List<CaseKey> toSolve = new ArrayList<>(reported.values());
+        SolvedCase[] solvedCases = new SolvedCase[toSolve.size()];
+        // each case is solved on its own (the factor is only read): on every core, a few at a time for the progress
+        try (Workers workers = new Workers(threads)) {
+            int batch = 2 * threads;
+            for (int from = 0; from < toSolve.size(); from += batch) {
+                int start = from;
+                int count = Math.min(batch, toSolve.size() - from);
+                workers.run(count, t -> solvedCases[start + t] = inFull(system, loads, toSolve.get(start + t), sway,
+                        firstOrderAlpha));
+                progress.progress(solving, start + count, toSolve.size());
+            }
+        } catch (Unstable e) {
+            throw e.cause;
+        }
+        List<SolvedCase> cases = List.of(solvedCases);
+        return new Pass(sweep, cases, legBases, members, foundations, total);
+    }
+
+    /**
+     * One reported case solved in full, its wind multiplied by {@code sway}, with the α_cr of its
+     * first-order forces.
+     *
+     * @throws Unstable carrying the {@link UnstableStructureException} of the case
+     */
+    private static SolvedCase inFull(FactoredSystem system, TowerLoads loads, CaseKey key, double sway,
+                                     Map<String, Double> firstOrderAlpha) {
+        try {
             double wind = key.combination().hasWind() ? sway : 1.0;
             Double alpha = firstOrderAlpha.get(key.id());
             if (alpha == null && wind != 1.0) {
                 alpha = solveCase(system, loads.loadCase(key)).alphaCr();   // a case that governs only amplified
             }
-            cases.add(solveCase(system, loads.loadCase(key, sway), wind, alpha));
-            progress.progress(solving, ++solved, reported.size());
+            return solveCase(system, loads.loadCase(key, sway), wind, alpha);
+        } catch (UnstableStructureException e) {
+            throw new Unstable(e);
         }
-        return new Pass(sweep, cases, legBases, members, foundations, total);
+    }
+
+    /** An unstable case out of a worker thread (the workers take no checked exceptions). */
+    private static final class Unstable extends RuntimeException {
+        private final UnstableStructureException cause;
+
+        Unstable(UnstableStructureException cause) {
+            super(cause.getMessage(), cause, false, false);
+            this.cause = cause;
+        }
     }
 
     /**
