@@ -21,7 +21,13 @@ import org.ejml.sparse.csc.CommonOps_DSCC;
  */
 public final class CriticalLoad {
 
-    static final double TOLERANCE = 1e-9;
+    /**
+     * Convergence: μ changes by at most this, relative, between iterations. α_cr is read to three
+     * figures (the 10 and 3 limits, the factor 1/(1 − 1/α_cr)); a 50,000-DOF tower's leg modes lie
+     * close together, converge slowly, and took 45–60 iterations to 1e-9 against 32–45 to 1e-6
+     * (α_cr then within 2e-6 of the 1e-9 value).
+     */
+    static final double TOLERANCE = 1e-6;
     static final int MAX_ITERATIONS = 300;
     private static final int VECTORS = 6;
     private static final long SEED = 0xA1FACE;
@@ -53,11 +59,20 @@ public final class CriticalLoad {
         double[][] y = new double[q][];
         double[][] gx = new double[q][];
         for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
+            double[] block = new double[n * q];
             for (int j = 0; j < q; j++) {
                 gx[j] = new double[n];
                 SparseKernels.multiply(minusKg, x[j], gx[j]);
-                y[j] = gx[j].clone();
-                system.solveFree(y[j]);  // K y = −K_G x
+                for (int e = 0; e < n; e++) {
+                    block[e * q + j] = gx[j][e];
+                }
+            }
+            system.solveFree(block, q);  // K y = −K_G x, every vector with one pass over the factor
+            for (int j = 0; j < q; j++) {
+                y[j] = new double[n];
+                for (int e = 0; e < n; e++) {
+                    y[j][e] = block[e * q + j];
+                }
             }
             double[] ar = new double[q * q];
             double[] br = new double[q * q];
