@@ -84,7 +84,6 @@ public final class ModalAnalysis {
         double[] lambda = null;
         double[][] y = new double[q][];
         for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
-            int n = x[0].length;
             double[] block = new double[n * q];
             for (int j = 0; j < q; j++) {
                 double[] mx = times(m, x[j]);
