@@ -54,6 +54,7 @@ public class ServiceabilityBenchmark {
         SectionCatalogue catalogue = SectionCatalogue.standard();
         spec = SpecReader.read(Path.of(model), catalogue);
         tower = TowerGenerator.generate(spec, catalogue.with(spec.userSections()), SteelGrades.fromSpec(spec.material()));
+        spec = ComputedStructuralFactor.resolve(spec, tower, null, false).spec();   // as analyze fills it in
         loads = TowerLoads.build(tower, spec.loads());
         system = Solver.factor(StructuralModel.of(tower.frame()));
         ServiceabilityPlan plan = ServiceabilityPlan.of(tower, loads, spec.serviceability()).orElseThrow();

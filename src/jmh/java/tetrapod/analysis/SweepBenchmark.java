@@ -70,8 +70,9 @@ public class SweepBenchmark {
     @Setup(Level.Trial)
     public void setUp() throws Exception {
         SectionCatalogue catalogue = SectionCatalogue.standard();
-        TowerSpec spec = SpecReader.read(TOWER.formatted(stepDeg), catalogue);
-        Tower tower = TowerGenerator.generate(spec, catalogue, SteelGrades.fromSpec(spec.material()));
+        TowerSpec read = SpecReader.read(TOWER.formatted(stepDeg), catalogue);
+        Tower tower = TowerGenerator.generate(read, catalogue, SteelGrades.fromSpec(read.material()));
+        TowerSpec spec = ComputedStructuralFactor.resolve(read, tower, null, false).spec();   // as analyze fills it in
         loads = TowerLoads.build(tower, spec.loads());
         StructuralModel model = StructuralModel.of(tower.frame());
         FactoredSystem system = Solver.factor(model);

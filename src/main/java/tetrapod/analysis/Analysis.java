@@ -59,7 +59,16 @@ public final class Analysis {
      */
     public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
                                      ProgressListener progress) throws UnstableStructureException {
-        return run(tower, loads, checks, modes, defaultPlan(tower, loads), progress);
+        return run(tower, loads, checks, modes, progress, Runtime.getRuntime().availableProcessors());
+    }
+
+    /**
+     * As {@link #run(Tower, TowerLoads, ChecksSpec, int, ProgressListener)}, with the member checks
+     * of the sweep on {@code threads} threads (at least 1; the results are the same with any number).
+     */
+    public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
+                                     ProgressListener progress, int threads) throws UnstableStructureException {
+        return run(tower, loads, checks, modes, defaultPlan(tower, loads), progress, threads);
     }
 
     /**
@@ -69,6 +78,16 @@ public final class Analysis {
     public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
                                      Optional<ServiceabilityPlan> serviceability, ProgressListener progress)
             throws UnstableStructureException {
+        return run(tower, loads, checks, modes, serviceability, progress, Runtime.getRuntime().availableProcessors());
+    }
+
+    /**
+     * The analysis in full: the serviceability sweep of {@code serviceability} (empty for none) and the
+     * member checks of the sweep on {@code threads} threads (at least 1; the results do not depend on it).
+     */
+    public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
+                                     Optional<ServiceabilityPlan> serviceability, ProgressListener progress,
+                                     int threads) throws UnstableStructureException {
         StructuralModel model = StructuralModel.of(tower.frame());
         progress.progress("prepare model", 1, 1);
         FactoredSystem system = Solver.factor(model, progress);
@@ -79,12 +98,12 @@ public final class Analysis {
         }
         BasisResponses responses = BasisResponses.of(system, vectors, progress);
 
-        Pass first = pass(tower, loads, checks, model, system, basis, responses, progress, 1.0, Map.of());
+        Pass first = pass(tower, loads, checks, model, system, basis, responses, progress, threads, 1.0, Map.of());
         SecondOrder second = SecondOrder.of(first.cases());
         Map<String, Double> firstOrderAlpha = new HashMap<>();
         first.cases().forEach(c -> firstOrderAlpha.put(c.id(), c.alphaCr()));
         Pass used = second.applied()
-                ? pass(tower, loads, checks, model, system, basis, responses, progress, second.amplification(),
+                ? pass(tower, loads, checks, model, system, basis, responses, progress, threads, second.amplification(),
                         firstOrderAlpha)
                 : first;
         Sweep sweep = used.sweep();
@@ -113,7 +132,7 @@ public final class Analysis {
      */
     private static Pass pass(Tower tower, TowerLoads loads, ChecksSpec checks, StructuralModel model,
                              FactoredSystem system, LoadBasis basis, BasisResponses responses, ProgressListener progress,
-                             double sway, Map<String, Double> firstOrderAlpha) throws UnstableStructureException {
+                             int threads, double sway, Map<String, Double> firstOrderAlpha) throws UnstableStructureException {
         String sweeping = sway == 1.0 ? "sweep and checks" : "sweep and checks, second order";
         String solving = sway == 1.0 ? "cases in full" : "cases in full, second order";
         FoundationCheck footing = checks.foundationSpec()
@@ -122,7 +141,8 @@ public final class Analysis {
                 basis.components().stream().map(LoadComponent::loads).toList());
         double baseX = tower.isGenerated() ? tower.levels().get(0).widthX() : Double.NaN;
         double baseY = tower.isGenerated() ? tower.levels().get(0).widthY() : Double.NaN;
-        Sweep sweep = new Sweep(model, responses, MemberChecker.of(tower, checks), footing, resultants, baseX, baseY);
+        Sweep sweep = new Sweep(model, responses, MemberChecker.of(tower, checks), footing, resultants, baseX, baseY,
+                threads);
         Map<String, CaseKey> keys = new HashMap<>();
         List<Double> azimuths = loads.azimuths();
         long total = 0;
@@ -169,24 +189,58 @@ public final class Analysis {
                 addGoverning(reported, keys, e);
             }
         }
-        for (MemberEnvelope m : members) {
-            addGoverning(reported, keys, m.governingWhere());
-        }
+        // a member's governing case is not solved in full: its forces in that case are in its envelope,
+        // so that the cases written grow with the combinations and the supports, not with the members
         for (FoundationEnvelope f : foundations) {
             f.checks().values().forEach(g -> addGoverning(reported, keys, g.where()));
         }
-        List<SolvedCase> cases = new ArrayList<>(reported.size());
-        int solved = 0;
-        for (CaseKey key : reported.values()) {
+        List<CaseKey> toSolve = new ArrayList<>(reported.values());
+        SolvedCase[] solvedCases = new SolvedCase[toSolve.size()];
+        // each case is solved on its own (the factor is only read): on every core, a few at a time for the progress
+        try (Workers workers = new Workers(threads)) {
+            int batch = 2 * threads;
+            for (int from = 0; from < toSolve.size(); from += batch) {
+                int start = from;
+                int count = Math.min(batch, toSolve.size() - from);
+                workers.run(count, t -> solvedCases[start + t] = inFull(system, loads, toSolve.get(start + t), sway,
+                        firstOrderAlpha));
+                progress.progress(solving, start + count, toSolve.size());
+            }
+        } catch (Unstable e) {
+            throw e.cause;
+        }
+        List<SolvedCase> cases = List.of(solvedCases);
+        return new Pass(sweep, cases, legBases, members, foundations, total);
+    }
+
+    /**
+     * One reported case solved in full, its wind multiplied by {@code sway}, with the α_cr of its
+     * first-order forces.
+     *
+     * @throws Unstable carrying the {@link UnstableStructureException} of the case
+     */
+    private static SolvedCase inFull(FactoredSystem system, TowerLoads loads, CaseKey key, double sway,
+                                     Map<String, Double> firstOrderAlpha) {
+        try {
             double wind = key.combination().hasWind() ? sway : 1.0;
             Double alpha = firstOrderAlpha.get(key.id());
             if (alpha == null && wind != 1.0) {
                 alpha = solveCase(system, loads.loadCase(key)).alphaCr();   // a case that governs only amplified
             }
-            cases.add(solveCase(system, loads.loadCase(key, sway), wind, alpha));
-            progress.progress(solving, ++solved, reported.size());
+            return solveCase(system, loads.loadCase(key, sway), wind, alpha);
+        } catch (UnstableStructureException e) {
+            throw new Unstable(e);
         }
-        return new Pass(sweep, cases, legBases, members, foundations, total);
+    }
+
+    /** An unstable case out of a worker thread (the workers take no checked exceptions). */
+    private static final class Unstable extends RuntimeException {
+        private final UnstableStructureException cause;
+
+        Unstable(UnstableStructureException cause) {
+            super(cause.getMessage(), cause, false, false);
+            this.cause = cause;
+        }
     }
 
     /**

@@ -14,8 +14,9 @@ import tetrapod.solve.StructuralModel;
  * Everything the analysis found.
  *
  * @param cases       the cases reported in full: each combination without wind once, each with
- *                    wind at 0, 45, ... 315 degrees, and every case that governs a member, a leg
- *                    base or a footing
+ *                    wind at 0, 45, ... 315 degrees, and every case that governs a leg base
+ *                    reaction or a footing check (a member's governing case is named in its
+ *                    envelope, with its forces, and not solved in full)
  * @param wind        the wind on each panel at each reported azimuth
  * @param sweep       every leg base's reaction against azimuth, per combination with wind
  * @param legBases    governing reactions of each leg base over every case

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.TreeMap;
 import tetrapod.check.Extreme;
 import tetrapod.common.UnstableStructureException;
 import tetrapod.check.FoundationCheck;
@@ -12,14 +13,11 @@ import tetrapod.check.FoundationResult;
 import tetrapod.check.ReactionLevel;
 import tetrapod.check.HandMethod;
 import tetrapod.check.LegBaseForces;
-import tetrapod.check.MemberCheckResult;
 import tetrapod.check.MemberChecker;
 import tetrapod.check.MemberEnvelope;
-import tetrapod.check.MemberForces;
 import tetrapod.load.CaseKey;
 import tetrapod.load.Combination;
 import tetrapod.model.Frame;
-import tetrapod.model.Member;
 import tetrapod.model.Support;
 import tetrapod.solve.BasisResponses;
 import tetrapod.solve.StructuralModel;
@@ -35,24 +33,22 @@ final class Sweep {
 
     private final StructuralModel model;
     private final BasisResponses responses;
-    private final MemberChecker checker;
+    private final MemberSweep memberChecks;
+    private final List<CaseKey> keys = new ArrayList<>();
+    private MemberSweep.Result memberResult;
     private final FoundationCheck footing;
     private final LoadResultants resultants;
     private final double baseWidthX;
     private final double baseWidthY;
     private final List<Integer> supportNodes;
     private final double[] reactions;
-    private final double[] axial;
-    private final double[] ends = new double[12];
     private final double[] totals = new double[5];
     private final Map<String, List<double[]>> perCombination = new LinkedHashMap<>();
     private final Extreme[] compression;
     private final Extreme[] uplift;
     private final Extreme[] shear;
-    private final MemberEnvelope[] members;
     private final FoundationEnvelope[] foundations;
     private final List<HandComparison> hand = new ArrayList<>();
-    private final Map<Double, AzimuthUtilisation> byAzimuth = new java.util.TreeMap<>();
     private final double[] restraintForces;
     private final double[] restraintPeak;
     private final String[] restraintPeakCase;
@@ -60,28 +56,24 @@ final class Sweep {
     /**
      * @param footing    the footing check, or null when the model gives no foundation
      * @param baseWidthX leg spacing along x at the base, m; NaN for an explicit frame (no hand method)
+     * @param threads    threads for the member checks (at least 1; the results do not depend on it)
      */
     Sweep(StructuralModel model, BasisResponses responses, MemberChecker checker, FoundationCheck footing,
-          LoadResultants resultants, double baseWidthX, double baseWidthY) {
+          LoadResultants resultants, double baseWidthX, double baseWidthY, int threads) {
         this.model = model;
         Frame frame = model.frame();
         this.responses = responses;
-        this.checker = checker;
+        this.memberChecks = new MemberSweep(frame, responses, checker, threads);
         this.footing = footing;
         this.resultants = resultants;
         this.baseWidthX = baseWidthX;
         this.baseWidthY = baseWidthY;
         this.supportNodes = frame.supports().stream().map(Support::node).toList();
         this.reactions = new double[6 * supportNodes.size()];
-        this.axial = new double[frame.members().size()];
         int s = supportNodes.size();
         this.compression = filled(s);
         this.uplift = filled(s);
         this.shear = filled(s);
-        this.members = new MemberEnvelope[frame.members().size()];
-        for (int m = 0; m < members.length; m++) {
-            members[m] = MemberEnvelope.empty(frame.members().get(m).id());
-        }
         int autos = model.autoRestraints().size();
         this.restraintForces = new double[autos];
         this.restraintPeak = new double[autos];
@@ -107,6 +99,7 @@ final class Sweep {
         Combination combination = key.combination();
         Double azimuthDeg = key.azimuthDeg();
         String caseId = key.id();
+        keys.add(key);
         responses.requireLoadCarried(caseId, weights, restraintForces);
         for (int a = 0; a < restraintForces.length; a++) {
             if (restraintPeakCase[a] == null || Math.abs(restraintForces[a]) > restraintPeak[a]) {
@@ -138,25 +131,7 @@ final class Sweep {
             }
             footing(s, fx, fy, fz, caseId, azimuthDeg, ReactionLevel.FACTORED);
         }
-        responses.axialForces(weights, axial);
-        double worst = -1;
-        int worstMember = 0;
-        for (int m = 0; m < axial.length; m++) {
-            Member member = model.frame().members().get(m);
-            MemberForces forces = memberForces(m, member, weights);
-            MemberCheckResult checked = checker.check(member.id(), forces, id -> axial[model.memberIndex(id)]);
-            members[m] = members[m].with(checked, forces, caseId, azimuthDeg);
-            if (checked.governing().utilisation() > worst) {
-                worst = checked.governing().utilisation();
-                worstMember = member.id();
-            }
-        }
-        if (azimuthDeg != null && worst >= 0) {
-            AzimuthUtilisation old = byAzimuth.get(azimuthDeg);
-            if (old == null || worst > old.utilisation()) {
-                byAzimuth.put(azimuthDeg, new AzimuthUtilisation(azimuthDeg, worst, worstMember, combination.name()));
-            }
-        }
+        memberChecks.add(key, weights);
         if (azimuthDeg != null && !Double.isNaN(baseWidthX)) {
             hand.add(handComparison(combination.name(), azimuthDeg, weights, feCompression, feTension));
         }
@@ -183,15 +158,6 @@ final class Sweep {
         if (result != null) {
             foundations[s] = foundations[s].with(result, f, caseId, azimuthDeg, level);
         }
-    }
-
-    private MemberForces memberForces(int m, Member member, double[] weights) {
-        if (member.axialOnly()) {
-            return MemberForces.axial(axial[m]);
-        }
-        responses.endForces(m, weights, ends);
-        // End actions at i (fx..mz) then at j: my is component 4, mz component 5.
-        return new MemberForces(axial[m], ends[4], ends[10], ends[5], ends[11]);
     }
 
     private HandComparison handComparison(String combination, double azimuthDeg, double[] weights,
@@ -236,7 +202,15 @@ final class Sweep {
     }
 
     List<MemberEnvelope> memberEnvelopes() {
-        return List.of(members);
+        return members().envelopes();
+    }
+
+    /** The member checks of every case added (made once, after the last case). */
+    private MemberSweep.Result members() {
+        if (memberResult == null) {
+            memberResult = memberChecks.finish();
+        }
+        return memberResult;
     }
 
     List<FoundationEnvelope> foundationEnvelopes() {
@@ -245,6 +219,19 @@ final class Sweep {
 
     /** The largest member utilisation at each azimuth over every combination with wind, by ascending azimuth. */
     List<AzimuthUtilisation> utilisationByAzimuth() {
+        MemberSweep.Result r = members();
+        Map<Double, AzimuthUtilisation> byAzimuth = new TreeMap<>();
+        for (int c = 0; c < keys.size(); c++) {
+            Double azimuthDeg = keys.get(c).azimuthDeg();
+            double worst = r.worstUtilisation()[c];
+            if (azimuthDeg != null && worst >= 0) {
+                AzimuthUtilisation old = byAzimuth.get(azimuthDeg);
+                if (old == null || worst > old.utilisation()) {
+                    byAzimuth.put(azimuthDeg, new AzimuthUtilisation(azimuthDeg, worst, r.worstMember()[c],
+                            keys.get(c).combination().name()));
+                }
+            }
+        }
         return List.copyOf(byAzimuth.values());
     }
 

@@ -11,22 +11,20 @@ import java.util.Objects;
  * @param geometricAxis buckling about the geometric axes (i_y, i_z), out of the face's plane:
  *                      between the points held out of plane (the ends of the whole collinear
  *                      line of members, and a crossing when it holds)
- * @param note          how the lengths were found, for the report
  */
-public record BucklingLength(double memberLength, BucklingSpan minorAxis, BucklingSpan geometricAxis, String note) {
+public record BucklingLength(double memberLength, BucklingSpan minorAxis, BucklingSpan geometricAxis) {
 
     public BucklingLength {
         Objects.requireNonNull(minorAxis, "minorAxis");
         Objects.requireNonNull(geometricAxis, "geometricAxis");
-        note = note == null ? "" : note;
         if (!(memberLength > 0)) {
             throw new IllegalArgumentException("member length must be > 0 m");
         }
     }
 
     /** Both axes over the member's own length with no eccentric end (a leg, a general member). */
-    public static BucklingLength between(double memberLength, String note) {
+    public static BucklingLength between(double memberLength) {
         BucklingSpan span = new BucklingSpan(memberLength, 0, 0);
-        return new BucklingLength(memberLength, span, span, note);
+        return new BucklingLength(memberLength, span, span);
     }
 }

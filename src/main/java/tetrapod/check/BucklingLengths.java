@@ -3,7 +3,6 @@ package tetrapod.check;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.function.IntToDoubleFunction;
 import tetrapod.generate.Tower;
@@ -39,20 +38,31 @@ import tetrapod.model.spec.CrossingRule;
 public final class BucklingLengths {
 
     private final MemberChains chains;
-    private final Map<Integer, Member> members = new HashMap<>();
-    private final Map<Integer, Double> lengths = new HashMap<>();
+    private final List<Member> members;
+    private final Map<Integer, Integer> index = new HashMap<>();
+    private final double[] lengths;
     private final List<BucklingOverride> overrides;
     /** For each node, the chains (of diagonals or plan bracing) that pass through it. */
     private final Map<Integer, List<MemberChains.Chain>> passingThrough = new HashMap<>();
+    /** Per member (frame order): how its out-of-plane span is found in a case. */
+    private final Scan[] scans;
+
+    /**
+     * How the out-of-plane span of one member is found: from its position {@code k} in a line
+     * of {@code last} members, the span runs back and forward to the nearest interior nodes that
+     * hold. Node p (0 < p < last) holds always ({@code always[p]}), or when both members of some
+     * crossing partner line at p are in tension: the member indices {@code pairs[p][2q]} and
+     * {@code pairs[p][2q + 1]}. A leg or general member has no line ({@code last} = 0).
+     */
+    private record Scan(int k, int last, boolean[] always, int[][] pairs) { }
 
     private BucklingLengths(Frame frame, List<BucklingOverride> overrides) {
         this.chains = new MemberChains(frame);
         this.overrides = List.copyOf(overrides);
-        double[] l = frame.memberLengths();
-        for (int k = 0; k < l.length; k++) {
-            Member m = frame.members().get(k);
-            members.put(m.id(), m);
-            lengths.put(m.id(), l[k]);
+        this.members = frame.members();
+        this.lengths = frame.memberLengths();
+        for (int k = 0; k < members.size(); k++) {
+            index.put(members.get(k).id(), k);
         }
         for (MemberChains.Chain c : chains.all()) {
             if (c.role() == Role.DIAGONAL || c.role() == Role.PLAN) {
@@ -60,6 +70,10 @@ public final class BucklingLengths {
                     passingThrough.computeIfAbsent(c.nodes().get(k), n -> new ArrayList<>()).add(c);
                 }
             }
+        }
+        this.scans = new Scan[members.size()];
+        for (int m = 0; m < members.size(); m++) {
+            scans[m] = scan(members.get(m));
         }
     }
 
@@ -78,39 +92,55 @@ public final class BucklingLengths {
      * when the partner diagonal is in tension.
      */
     public BucklingLength forCase(int memberId, IntToDoubleFunction axialForce) {
-        Member m = member(memberId);
-        double length = lengths.get(memberId);
+        int m = indexOf(memberId);
+        return lengths(m, state(m, k -> axialForce.applyAsDouble(members.get(k).id())));
+    }
+
+    /**
+     * Which of its few possible buckling states member {@code memberIndex} (frame order) is in,
+     * for a case whose axial forces (N, positive in tension) {@code axialByIndex} gives by frame
+     * index: two cases in the same state have the same lengths ({@link #lengths}). Asks only for
+     * the forces of the member's crossing partners; 0 for legs and general members.
+     */
+    public int state(int memberIndex, IntToDoubleFunction axialByIndex) {
+        Scan scan = scans[memberIndex];
+        if (scan.last() == 0) {
+            return 0;
+        }
+        int start = scan.k();
+        while (start > 0 && !holds(scan, start, axialByIndex)) {
+            start--;
+        }
+        int end = scan.k() + 1;
+        while (end < scan.last() && !holds(scan, end, axialByIndex)) {
+            end++;
+        }
+        return start * (scan.last() + 1) + end;
+    }
+
+    /** The lengths of member {@code memberIndex} (frame order) in buckling state {@code state} ({@link #state}). */
+    public BucklingLength lengths(int memberIndex, int state) {
+        Member m = members.get(memberIndex);
+        double length = lengths[memberIndex];
         BucklingOverride override = override(m);
         double minorFactor = override == null ? 1.0 : override.minorAxisFactor();
         double geometricFactor = override == null ? 1.0 : override.geometricAxisFactor();
-        CrossingRule rule = override == null ? CrossingRule.AUTO : override.crossing();
         if (m.role() == Role.LEG || m.role() == Role.GENERAL) {
-            String why = m.role() == Role.LEG ? "leg: between bracing nodes, both directions" : "between the member's nodes";
-            BucklingLength base = BucklingLength.between(length, why);
+            BucklingLength base = BucklingLength.between(length);
             return new BucklingLength(length, base.minorAxis().scaled(minorFactor),
-                    base.geometricAxis().scaled(geometricFactor), why + factors(override));
+                    base.geometricAxis().scaled(geometricFactor));
         }
-        MemberChains.Chain chain = chains.of(memberId);
-        int k = chain.positionOf(memberId);
-        int last = chain.nodes().size() - 1;
+        Scan scan = scans[memberIndex];
+        MemberChains.Chain chain = chains.of(m.id());
+        int k = scan.k();
+        int last = scan.last();
         int ends = (k == 0 ? 1 : 0) + (k + 1 == last ? 1 : 0);
         BucklingSpan minor = new BucklingSpan(length, ends, 2 - ends);
-
-        int start = k;
-        while (start > 0 && !holds(chain, chain.nodes().get(start), rule, axialForce)) {
-            start--;
-        }
-        int end = k + 1;
-        while (end < last && !holds(chain, chain.nodes().get(end), rule, axialForce)) {
-            end++;
-        }
+        int start = state / (last + 1);
+        int end = state % (last + 1);
         int spanEnds = (start == 0 ? 1 : 0) + (end == last ? 1 : 0);
         BucklingSpan geometric = new BucklingSpan(chain.along().get(end) - chain.along().get(start), spanEnds, 2 - spanEnds);
-        String why = String.format(Locale.ROOT, "%s line of %d member(s), %.3f m; out of plane %.3f m%s",
-                m.role().jsonName(), chain.members().size(), chain.length(), geometric.length(),
-                spanEnds == 2 ? " (whole line)" : " (to the crossing)");
-        return new BucklingLength(length, minor.scaled(minorFactor), geometric.scaled(geometricFactor),
-                why + factors(override));
+        return new BucklingLength(length, minor.scaled(minorFactor), geometric.scaled(geometricFactor));
     }
 
     /** The lengths when no crossing partner is in tension (the longest out-of-plane lengths). */
@@ -137,8 +167,8 @@ public final class BucklingLengths {
         return chains.of(memberId).members();
     }
 
-    private Member member(int id) {
-        Member m = members.get(id);
+    private int indexOf(int id) {
+        Integer m = index.get(id);
         if (m == null) {
             throw new IllegalArgumentException("no member " + id);
         }
@@ -154,38 +184,53 @@ public final class BucklingLengths {
         return null;
     }
 
-    /** Whether the interior node {@code node} of {@code chain} holds it out of plane in this case. */
-    private boolean holds(MemberChains.Chain chain, int node, CrossingRule rule, IntToDoubleFunction axialForce) {
-        for (MemberChains.Chain other : passingThrough.getOrDefault(node, List.of())) {
-            if (other.index() == chain.index() || other.role() != chain.role()) {
-                continue;
+    /**
+     * The scan of one member. An interior node of its line holds it out of plane when a crossing
+     * partner line (another line of the same role through the node) is there and: always with
+     * the rule {@code supported}, never with {@code unsupported}, and by default when both
+     * members of that partner line at the node are in tension.
+     */
+    private Scan scan(Member m) {
+        if (m.role() == Role.LEG || m.role() == Role.GENERAL) {
+            return new Scan(0, 0, new boolean[0], new int[0][]);
+        }
+        MemberChains.Chain chain = chains.of(m.id());
+        BucklingOverride override = override(m);
+        CrossingRule rule = override == null ? CrossingRule.AUTO : override.crossing();
+        int last = chain.nodes().size() - 1;
+        boolean[] always = new boolean[last + 1];
+        int[][] pairs = new int[last + 1][];
+        for (int p = 0; p <= last; p++) {
+            List<Integer> found = new ArrayList<>();
+            int node = chain.nodes().get(p);
+            for (MemberChains.Chain other : passingThrough.getOrDefault(node, List.of())) {
+                if (other.index() == chain.index() || other.role() != chain.role()) {
+                    continue;
+                }
+                if (rule == CrossingRule.SUPPORTED) {
+                    always[p] = true;
+                } else if (rule == CrossingRule.AUTO) {
+                    int at = other.nodes().indexOf(node);
+                    found.add(indexOf(other.members().get(at - 1)));
+                    found.add(indexOf(other.members().get(at)));
+                }
             }
-            switch (rule) {
-                case SUPPORTED:
-                    return true;
-                case UNSUPPORTED:
-                    return false;
-                default:
-                    if (partnerInTension(other, node, axialForce)) {
-                        return true;
-                    }
+            pairs[p] = found.stream().mapToInt(Integer::intValue).toArray();
+        }
+        return new Scan(chain.positionOf(m.id()), last, always, pairs);
+    }
+
+    /** Whether interior node {@code p} of the member's line holds it out of plane in this case. */
+    private static boolean holds(Scan scan, int p, IntToDoubleFunction axialByIndex) {
+        if (scan.always()[p]) {
+            return true;
+        }
+        int[] pairs = scan.pairs()[p];
+        for (int q = 0; q < pairs.length; q += 2) {
+            if (axialByIndex.applyAsDouble(pairs[q]) > 0 && axialByIndex.applyAsDouble(pairs[q + 1]) > 0) {
+                return true;
             }
         }
         return false;
-    }
-
-    /** Both members of the partner line at the crossing are in tension. */
-    private static boolean partnerInTension(MemberChains.Chain partner, int node, IntToDoubleFunction axialForce) {
-        int k = partner.nodes().indexOf(node);
-        return axialForce.applyAsDouble(partner.members().get(k - 1)) > 0
-                && axialForce.applyAsDouble(partner.members().get(k)) > 0;
-    }
-
-    private static String factors(BucklingOverride o) {
-        if (o == null) {
-            return "";
-        }
-        return String.format(Locale.ROOT, "; user factors %.3g (minor), %.3g (geometric), crossing %s",
-                o.minorAxisFactor(), o.geometricAxisFactor(), o.crossing().jsonName());
     }
 }

@@ -1,6 +1,7 @@
 package tetrapod.check;
 
 import java.util.Locale;
+import tetrapod.model.Member;
 import tetrapod.model.Role;
 import tetrapod.model.SectionProperties;
 
@@ -36,14 +37,14 @@ final class En1993SlendernessLimit {
         return forces.inCompression() ? COMPRESSION : TENSION;                    // EN 1993-3-1 Annex H (recalled)
     }
 
-    static CheckResult check(MemberCheckInput in) {
-        SectionProperties p = in.member().section().properties();
-        double slenderness = Math.max(in.buckling().minorAxis().length() / p.iMin(),
-                in.buckling().geometricAxis().length() / En1993MemberCheck.geometricRadius(p));
-        Role role = in.member().role();
-        double limit = limit(role, in.forces());
+    static CheckResult check(Member member, BucklingLength buckling, MemberForces forces) {
+        SectionProperties p = member.section().properties();
+        double slenderness = Math.max(buckling.minorAxis().length() / p.iMin(),
+                buckling.geometricAxis().length() / En1993MemberCheck.geometricRadius(p));
+        Role role = member.role();
+        double limit = limit(role, forces);
         String what = role == Role.LEG ? "leg" : role == Role.REDUNDANT ? "redundant"
-                : in.forces().inCompression() ? "member in compression" : "member in tension or without force";
+                : forces.inCompression() ? "member in compression" : "member in tension or without force";
         return new CheckResult(CheckMode.SLENDERNESS_LIMIT, slenderness / limit,
                 role == Role.LEG ? "EN 1993-3-1 H.2 (1) (informative)"
                         : "EN 1993-3-1 Annex H (informative; limit recalled from memory)",

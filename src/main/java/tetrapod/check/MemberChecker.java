@@ -26,12 +26,14 @@ public final class MemberChecker {
     private final RedundantForces redundants;
     private final Map<Integer, Member> members = new HashMap<>();
     private final Map<Integer, Connection> connections = new HashMap<>();
+    private final List<Member> order;
 
     public MemberChecker(Frame frame, ChecksSpec checks) {
         this.frame = frame;
         this.method = MemberCheck.of(checks);
         this.buckling = BucklingLengths.of(frame, checks.bucklingLengths());
         this.redundants = new RedundantForces(frame, method);
+        this.order = frame.members();
         for (Member m : frame.members()) {
             members.put(m.id(), m);
             connections.put(m.id(), connectionFor(m, checks.connections()));
@@ -112,6 +114,25 @@ public final class MemberChecker {
     /** Whether member {@code memberId}'s design force depends on the forces of other members (a redundant). */
     public boolean hasNominalForce(int memberId) {
         return redundants.applies(memberId);
+    }
+
+    /**
+     * The strength utilisation of the member at frame index {@code memberIndex} as numbers alone,
+     * for sweeping many cases ({@link MemberUtilisation}: one thread at a time).
+     */
+    public MemberUtilisation utilisation(int memberIndex) {
+        return new MemberUtilisation(this, memberIndex, order.get(memberIndex));
+    }
+
+    /** The design axial force of the member at frame index {@code index} ({@link RedundantForces#designAxial}). */
+    double designAxial(int index, double axial, IntToDoubleFunction axialByIndex) {
+        return redundants.designAxial(index, axial, axialByIndex);
+    }
+
+    /** The resistances of the member at frame index {@code index} in buckling state {@code state}. */
+    MemberResistance resistance(int index, int state) {
+        Member m = order.get(index);
+        return method.resistance(m, frame.material(), buckling.lengths(index, state), connections.get(m.id()));
     }
 
     /** Checks every member of the frame for one load case, in the frame's member order. */

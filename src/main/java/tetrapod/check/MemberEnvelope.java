@@ -11,21 +11,23 @@ import java.util.List;
  *
  * @param governing      the strength check with the largest utilisation over all cases (null before any)
  * @param governingWhere its utilisation, case and azimuth
+ * @param governingForces the member's own forces in that case (before a redundant's nominal force),
+ *                       null before any case
  * @param maxTension     largest axial tension, N
  * @param maxCompression largest axial compression as a positive number, N
  * @param requirements   per requirement mode, its check at the largest ratio over all cases (a
  *                       buckling length, and so a slenderness, can depend on the forces of the
  *                       other diagonals), in the order the method first made them
  */
-public record MemberEnvelope(int member, CheckResult governing, Extreme governingWhere, Extreme maxTension,
-                             Extreme maxCompression, List<CheckResult> requirements) {
+public record MemberEnvelope(int member, CheckResult governing, Extreme governingWhere, MemberForces governingForces,
+                             Extreme maxTension, Extreme maxCompression, List<CheckResult> requirements) {
 
     public MemberEnvelope {
         requirements = List.copyOf(requirements);
     }
 
     public static MemberEnvelope empty(int member) {
-        return new MemberEnvelope(member, null, Extreme.NONE, Extreme.NONE, Extreme.NONE, List.of());
+        return new MemberEnvelope(member, null, Extreme.NONE, null, Extreme.NONE, Extreme.NONE, List.of());
     }
 
     /** The envelope with the case {@code caseId} (azimuth in degrees, or null) added. */
@@ -36,7 +38,8 @@ public record MemberEnvelope(int member, CheckResult governing, Extreme governin
         CheckResult candidate = result.governing();
         Extreme where = governingWhere.max(candidate.utilisation(), caseId, azimuthDeg);
         CheckResult kept = where == governingWhere ? governing : candidate;
-        return new MemberEnvelope(member, kept, where, maxTension.max(forces.tension(), caseId, azimuthDeg),
+        MemberForces keptForces = where == governingWhere ? governingForces : forces;
+        return new MemberEnvelope(member, kept, where, keptForces, maxTension.max(forces.tension(), caseId, azimuthDeg),
                 maxCompression.max(forces.compression(), caseId, azimuthDeg), worse(requirements, result.requirements()));
     }
 

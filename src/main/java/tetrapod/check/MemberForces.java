@@ -45,12 +45,12 @@ public record MemberForces(double axial, double myI, double myJ, double mzI, dou
 
     /** Largest bending moment about local y along the member, N·m (≥ 0). */
     public double maxMomentY() {
-        return Math.max(Math.abs(myI), Math.abs(myJ));
+        return largest(myI, myJ);
     }
 
     /** Largest bending moment about local z along the member, N·m (≥ 0). */
     public double maxMomentZ() {
-        return Math.max(Math.abs(mzI), Math.abs(mzJ));
+        return largest(mzI, mzJ);
     }
 
     public boolean hasMoments() {
@@ -59,15 +59,23 @@ public record MemberForces(double axial, double myI, double myJ, double mzI, dou
 
     /** ψ of the moment diagram about y: the smaller end moment over the larger, −1 ≤ ψ ≤ 1 (1 when none). */
     public double psiY() {
-        return psi(-myI, myJ);
+        return psi(myI, myJ);
     }
 
     /** ψ of the moment diagram about z. */
     public double psiZ() {
-        return psi(-mzI, mzJ);
+        return psi(mzI, mzJ);
     }
 
-    private static double psi(double internalI, double internalJ) {
+    /** The larger magnitude of the end moments {@code atI} and {@code atJ}, N·m (≥ 0). */
+    static double largest(double atI, double atJ) {
+        return Math.max(Math.abs(atI), Math.abs(atJ));
+    }
+
+    /** ψ of a linear moment diagram from the end moments {@code atI} and {@code atJ} (end forces, as the record's). */
+    static double psi(double atI, double atJ) {
+        double internalI = -atI;
+        double internalJ = atJ;
         double large = Math.abs(internalI) >= Math.abs(internalJ) ? internalI : internalJ;
         double small = large == internalI ? internalJ : internalI;
         return large == 0 ? 1.0 : small / large;

@@ -22,6 +22,8 @@ import tetrapod.model.Role;
 final class RedundantForces {
 
     private final Map<Integer, int[]> braced = new HashMap<>();
+    /** Per member (frame order): the frame indices of the members it braces; null when not a redundant. */
+    private final int[][] bracedIndices;
     private final double fraction;
     private final String clause;
 
@@ -29,6 +31,11 @@ final class RedundantForces {
         this.fraction = method.redundantForceFraction();
         this.clause = method.redundantForceClause();
         Map<Integer, List<Member>> atNode = new HashMap<>();
+        Map<Integer, Integer> index = new HashMap<>();
+        for (int k = 0; k < frame.members().size(); k++) {
+            index.put(frame.members().get(k).id(), k);
+        }
+        this.bracedIndices = new int[frame.members().size()][];
         for (Member m : frame.members()) {
             atNode.computeIfAbsent(m.i(), k -> new ArrayList<>()).add(m);
             atNode.computeIfAbsent(m.j(), k -> new ArrayList<>()).add(m);
@@ -46,6 +53,7 @@ final class RedundantForces {
                 }
             }
             braced.put(m.id(), ids.stream().mapToInt(Integer::intValue).toArray());
+            bracedIndices[index.get(m.id())] = ids.stream().mapToInt(index::get).toArray();
         }
     }
 
@@ -74,6 +82,26 @@ final class RedundantForces {
             return own;
         }
         return new MemberForces(-nominal, own.myI(), own.myJ(), own.mzI(), own.mzJ());
+    }
+
+    /**
+     * The design axial force (N, tension positive) of the member at frame index {@code index}: its
+     * own {@code axial}, or a redundant's nominal force as compression when that is larger; as
+     * {@link #designForces}, to the last bit.
+     *
+     * @param axialByIndex the axial force (N) of every member in the same case, by frame index
+     */
+    double designAxial(int index, double axial, IntToDoubleFunction axialByIndex) {
+        int[] ids = bracedIndices[index];
+        if (ids == null || ids.length == 0 || !(fraction > 0)) {
+            return axial;
+        }
+        double worst = 0;
+        for (int other : ids) {
+            worst = Math.max(worst, -axialByIndex.applyAsDouble(other));
+        }
+        double nominal = fraction * worst;
+        return nominal <= Math.max(0, -axial) ? axial : -nominal;
     }
 
     /** The largest compression (N, ≥ 0) among the members that redundant {@code id} braces. */

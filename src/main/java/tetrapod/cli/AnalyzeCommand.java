@@ -20,6 +20,7 @@ import tetrapod.common.BadInputException;
 import tetrapod.io.DefaultedKeys;
 import tetrapod.io.JsonOutput;
 import tetrapod.io.OutputFolder;
+import tetrapod.io.ResultsReader;
 import tetrapod.io.SpecWriter;
 import tetrapod.report.CsvTables;
 import tetrapod.report.ReportHtml;
@@ -129,7 +130,7 @@ final class AnalyzeCommand implements Callable<Integer> {
                 DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec())), source, loaded.responseFactor());
         JsonOutput.write(resultsFile, document);
         // everything else is built from what the file holds, as 'tetrapod report' builds it from the file
-        Results results = new Results(plainDocument(document));
+        Results results = new Results(plainDocument(ResultsReader.forReport(document)));
         CsvTables.writeAll(results, folder);
         watch.end("results.json, CSV");
         ViewData view = ResultViews.of(result, loaded.spec().checks()).withAncillaries(ResultViews.ancillaries(loaded.spec()));

@@ -39,7 +39,7 @@ final class ReportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Results results = new Results(ResultsReader.read(resultsFile));
+        Results results = new Results(ResultsReader.forReport(resultsFile));
         Path folder = resultsFile.toAbsolutePath().getParent();
         Path png = picture != null ? picture : folder.resolve("tower.png");
         if (picture != null && !Files.isRegularFile(picture)) {

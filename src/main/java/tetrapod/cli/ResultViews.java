@@ -7,8 +7,9 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.OptionalDouble;
+import java.util.function.IntToDoubleFunction;
 import tetrapod.model.spec.ChecksSpec;
-import tetrapod.check.MemberForces;
+import tetrapod.check.MemberUtilisation;
 import tetrapod.check.MemberChecker;
 import tetrapod.analysis.AnalysisResult;
 import tetrapod.analysis.LegBaseExtremes;
@@ -149,17 +150,23 @@ final class ResultViews {
         double[] axial = new double[members.size()];
         double[] utilisation = new double[members.size()];
         for (int k = 0; k < axial.length; k++) {
+            axial[k] = forces.getOrDefault(members.get(k).id(), Double.NaN);
+        }
+        IntToDoubleFunction axialByIndex = k -> Double.isNaN(axial[k]) ? 0.0 : axial[k];
+        for (int k = 0; k < axial.length; k++) {
             Member m = members.get(k);
-            axial[k] = forces.getOrDefault(m.id(), Double.NaN);
             MemberEndForces f = ends.get(m.id());
             if (f == null) {
                 utilisation[k] = Double.NaN;
                 continue;
             }
-            // end actions at i and j, as the sweep takes them: my, mz at each end
-            MemberForces design = m.axialOnly() ? MemberForces.axial(f.axial())
-                    : new MemberForces(f.axial(), f.atI().my(), f.atJ().my(), f.atI().mz(), f.atJ().mz());
-            utilisation[k] = checker.check(m.id(), design, id -> forces.getOrDefault(id, 0.0)).governing().utilisation();
+            // the numbers of the checks (the same bits as their governing utilisation), no notes:
+            // end actions at i and j, as the sweep takes them, my and mz at each end
+            MemberUtilisation u = checker.utilisation(k);
+            int state = u.state(axialByIndex);
+            double design = u.designAxial(f.axial(), axialByIndex);
+            utilisation[k] = m.axialOnly() ? u.of(state, design, 0, 0, 0, 0)
+                    : u.of(state, design, f.atI().my(), f.atJ().my(), f.atI().mz(), f.atJ().mz());
         }
         List<NodeVector> displacements = new ArrayList<>();
         for (NodeDisplacement d : c.solution().displacements()) {

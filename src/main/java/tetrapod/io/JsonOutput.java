@@ -32,13 +32,17 @@ import java.util.SortedSet;
  * written with its keys sorted, so that hash order never reaches a file. Likewise sets other than
  * {@link SortedSet} and {@link LinkedHashSet} are refused.
  *
- * <p>Layout: two-space indentation, "\n" line ends, a final newline. An object or array whose
- * members are all scalars or arrays of scalars stays on one line when that line is short.
+ * <p>Layout: two-space indentation, "\n" line ends, a final newline. An array of scalars stays on
+ * one line when it is short, else its items fill lines of that width; an object whose members are
+ * all scalars or arrays of scalars (a node's displacements, a member's end forces) stays on one line
+ * up to a longer width, so that a large file is mostly numbers, not indentation.
  */
 public final class JsonOutput {
 
-    /** Longest container written on one line, in characters. */
+    /** Longest array written on one line, and the width its items fill when it is longer, in characters. */
     private static final int INLINE_WIDTH = 100;
+    /** Longest object of scalars and arrays of scalars written on one line, in characters. */
+    private static final int RECORD_WIDTH = 400;
     private static final String INDENT = "  ";
 
     private JsonOutput() { }
@@ -145,9 +149,13 @@ public final class JsonOutput {
         }
 
         private void list(List<?> list, Where path, int depth) throws IOException {
-            String inline = inline(list, path);
+            String inline = inline(list, path, INLINE_WIDTH);
             if (inline != null) {
                 out.write(inline);
+                return;
+            }
+            if (allScalars(list, path)) {
+                filled(list, path, depth);
                 return;
             }
             out.write("[\n");
@@ -161,7 +169,7 @@ public final class JsonOutput {
         }
 
         private void object(Map<?, ?> map, Where path, int depth) throws IOException {
-            String inline = depth == 0 ? null : inline(map, path);
+            String inline = depth == 0 ? null : inline(map, path, RECORD_WIDTH);
             if (inline != null) {
                 out.write(inline);
                 return;
@@ -183,6 +191,31 @@ public final class JsonOutput {
             out.write("}");
         }
 
+        /** A long array of scalars, its items filling lines of {@link #INLINE_WIDTH} characters. */
+        private void filled(List<?> list, Where path, int depth) throws IOException {
+            out.write("[\n");
+            int width = 0;
+            for (int k = 0; k < list.size(); k++) {
+                String item = scalar(normalise(list.get(k), path.at(k)), path.at(k));
+                if (width > 0 && width + 2 + item.length() + 1 > INLINE_WIDTH) {   // + 1: the comma that may follow
+                    out.write(",\n");
+                    width = 0;
+                } else if (width > 0) {
+                    out.write(", ");
+                    width += 2;
+                }
+                if (width == 0) {
+                    indent(depth + 1);
+                    width = INDENT.length() * (depth + 1);
+                }
+                out.write(item);
+                width += item.length();
+            }
+            out.write("\n");
+            indent(depth);
+            out.write("]");
+        }
+
         private void indent(int depth) throws IOException {
             for (int k = 0; k < depth; k++) {
                 out.write(INDENT);
@@ -190,16 +223,26 @@ public final class JsonOutput {
         }
     }
 
-    /** The one-line form when every member is a scalar or an array of scalars and it is short; else null. */
-    private static String inline(Object container, Where path) {
+    /** The one-line form when every member is a scalar or an array of scalars and it fits {@code width}; else null. */
+    private static String inline(Object container, Where path, int width) {
         StringBuilder line = new StringBuilder();
-        if (!appendInline(line, container, path, true) || line.length() > INLINE_WIDTH) {
+        if (!appendInline(line, container, path, true, width) || line.length() > width) {
             return null;
         }
         return line.toString();
     }
 
-    private static boolean appendInline(StringBuilder line, Object value, Where path, boolean outer) {
+    private static boolean allScalars(List<?> list, Where path) {
+        for (Object item : list) {
+            Object v = normalise(item, path);
+            if (v instanceof List<?> || v instanceof Map<?, ?>) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static boolean appendInline(StringBuilder line, Object value, Where path, boolean outer, int width) {
         Object v = normalise(value, path);
         if (v instanceof List<?> list) {
             line.append('[');
@@ -211,7 +254,7 @@ public final class JsonOutput {
                 if (k > 0) {
                     line.append(", ");
                 }
-                if (!appendInline(line, item, path.at(k), false) || line.length() > INLINE_WIDTH) {
+                if (!appendInline(line, item, path.at(k), false, width) || line.length() > width) {
                     return false;
                 }
             }
@@ -237,8 +280,8 @@ public final class JsonOutput {
                 if (item instanceof Map<?, ?>) {
                     return false;
                 }
-                if (!appendInline(line, item, path.key(e.getKey()), item instanceof List<?>)
-                        || line.length() > INLINE_WIDTH) {
+                if (!appendInline(line, item, path.key(e.getKey()), item instanceof List<?>, width)
+                        || line.length() > width) {
                     return false;
                 }
             }

@@ -45,17 +45,8 @@ final class TextFiles {
 
     /** The text of {@code file}, refused when it is no regular file or holds more than {@code maxBytes}. */
     static String readUtf8(Path file, long maxBytes, String kind) throws BadInputException {
-        if (Files.isDirectory(file)) {
-            throw refusal(file, "it is a folder, not a " + kind);
-        }
-        if (Files.exists(file) && !Files.isRegularFile(file)) {
-            throw refusal(file, "it is not a regular file (a device, pipe or socket); give a " + kind);
-        }
+        requireReadable(file, maxBytes, kind);
         try {
-            long size = Files.size(file);
-            if (size > maxBytes) {
-                throw tooLarge(file, size, maxBytes, kind);
-            }
             byte[] bytes;
             try (InputStream in = Files.newInputStream(file)) {
                 bytes = in.readNBytes((int) Math.min(Integer.MAX_VALUE - 8, maxBytes + 1));
@@ -77,6 +68,31 @@ final class TextFiles {
         }
     }
 
+    /** Refuses a folder, a device, a missing file or one larger than {@code maxBytes}, each with its reason. */
+    static void requireReadable(Path file, long maxBytes, String kind) throws BadInputException {
+        if (Files.isDirectory(file)) {
+            throw refusal(file, "it is a folder, not a " + kind);
+        }
+        if (Files.exists(file) && !Files.isRegularFile(file)) {
+            throw refusal(file, "it is not a regular file (a device, pipe or socket); give a " + kind);
+        }
+        try {
+            long size = Files.size(file);
+            if (size > maxBytes) {
+                throw tooLarge(file, size, maxBytes, kind);
+            }
+        } catch (NoSuchFileException e) {
+            throw refusal(file, "no such file");
+        } catch (IOException e) {
+            throw refusal(file, e.getMessage());
+        }
+    }
+
+    /** A file that cannot be read as it should, with the reason (bad input). */
+    static BadInputException refusal(Path file, String reason) {
+        return new BadInputException(Problem.at("$", "cannot read " + file + ": " + reason));
+    }
+
     private static BadInputException tooLarge(Path file, long size, long maxBytes, String kind) {
         return refusal(file, String.format(Locale.ROOT, "%s is larger than the %s limit of a %s",
                 megabytes(size), megabytes(maxBytes), kind));
@@ -86,7 +102,4 @@ final class TextFiles {
         return String.format(Locale.ROOT, "%.1f MB (%d bytes)", bytes / 1e6, bytes);
     }
 
-    private static BadInputException refusal(Path file, String reason) {
-        return new BadInputException(Problem.at("$", "cannot read " + file + ": " + reason));
-    }
 }

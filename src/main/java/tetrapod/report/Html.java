@@ -1,13 +1,53 @@
 package tetrapod.report;
 
-/** Writes HTML text: every piece of text escaped, tags closed by the caller in order. */
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+
+/**
+ * Writes HTML text: every piece of text escaped, tags closed by the caller in order. Either kept in
+ * memory ({@link #toString}) or passed on to a writer in pieces as it grows ({@link #Html(Writer)},
+ * {@link #flush}), so that a long report is never one string.
+ */
 final class Html {
 
     /** Tags inside running text: no line break after them, which would show as a space. */
     private static final java.util.Set<String> INLINE = java.util.Set.of("a", "span", "strong", "em", "code", "sub",
             "sup");
 
-    private final StringBuilder out = new StringBuilder(1 << 16);
+    /** Pending text passed on to the sink beyond this many characters. */
+    private static final int PIECE = 1 << 16;
+
+    private final StringBuilder out = new StringBuilder(PIECE);
+    private final Writer sink;
+
+    /** HTML kept in memory. */
+    Html() {
+        this.sink = null;
+    }
+
+    /** HTML passed on to {@code sink} as it grows; {@link #flush} at the end. */
+    Html(Writer sink) {
+        this.sink = sink;
+    }
+
+    /** Passes what is pending on to the sink. */
+    void flush() throws IOException {
+        if (sink != null) {
+            sink.append(out);
+            out.setLength(0);
+        }
+    }
+
+    private void passOn() {
+        if (sink != null && out.length() > PIECE) {
+            try {
+                flush();
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
+        }
+    }
 
     /** Text made safe for HTML content and attribute values. */
     static String escape(String text) {
@@ -55,6 +95,7 @@ final class Html {
     }
 
     Html close(String tag) {
+        passOn();
         out.append("</").append(tag).append('>');
         if (!INLINE.contains(tag)) {
             out.append('\n');
@@ -80,6 +121,7 @@ final class Html {
         return name + "=\"" + escape(value) + "\"";
     }
 
+    /** The HTML kept in memory (of an HTML with a sink: what is not yet passed on). */
     @Override
     public String toString() {
         return out.toString();

@@ -40,9 +40,15 @@ public final class ReportHtml {
      * (size-history.json as plain values) is given.
      */
     public static String build(Results results, Optional<byte[]> towerPng, Optional<Map<String, Object>> sizingHistory) {
+        Html out = new Html();
+        build(out, results, towerPng, sizingHistory);
+        return out.toString();
+    }
+
+    private static void build(Html out, Results results, Optional<byte[]> towerPng,
+                              Optional<Map<String, Object>> sizingHistory) {
         ReportInput input = new ReportInput(results, towerPng, sizingHistory);
         List<Section> sections = sections(sizingHistory.isPresent());
-        Html out = new Html();
         String title = "Tower calculation: " + results.name();
         TitleBlock titleBlock = new TitleBlock(results);
         out.raw("<!DOCTYPE html>\n").open("html", "lang=\"en\"").raw("\n").open("head").raw("\n")
@@ -75,7 +81,6 @@ public final class ReportHtml {
                 + Tree.str(results.document(), "format") + "). The files beside this report: results.json (every "
                 + "number, SI units), members.csv, reactions.csv, wind.csv, requirements.csv, serviceability.csv, tower.png.").close("footer");
         out.close("body").close("html");
-        return out.toString();
     }
 
     /** Writes the page to {@code file} atomically. */
@@ -86,7 +91,15 @@ public final class ReportHtml {
     /** Writes the page, with its sizing history when given, to {@code file} atomically. */
     public static void write(Path file, Results results, Optional<byte[]> towerPng,
                              Optional<Map<String, Object>> sizingHistory) throws IOException {
-        AtomicFiles.writeString(file, build(results, towerPng, sizingHistory));
+        try {
+            AtomicFiles.writeText(file, writer -> {
+                Html out = new Html(writer);
+                build(out, results, towerPng, sizingHistory);
+                out.flush();
+            });
+        } catch (UncheckedIOException e) {
+            throw e.getCause();
+        }
     }
 
     /** The sections in order; the sizing history after the foundations when there is one. */

@@ -1,63 +1,66 @@
 package tetrapod.report;
 
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import java.util.TreeMap;
 import tetrapod.analysis.AnalysisResult;
 import tetrapod.analysis.AutoRestraintPeak;
-import tetrapod.analysis.ComputedStructuralFactor;
 import tetrapod.analysis.AzimuthUtilisation;
-import tetrapod.generate.SteelMass;
-import tetrapod.generate.Tower;
-import tetrapod.io.ResultsReader;
-import tetrapod.load.Combination;
-import tetrapod.model.Material;
-import tetrapod.model.spec.LoadAction;
+import tetrapod.analysis.ComputedStructuralFactor;
 import tetrapod.analysis.HandComparison;
-import tetrapod.analysis.NaturalMode;
-import tetrapod.analysis.SecondOrder;
+import tetrapod.analysis.HandGoverning;
+import tetrapod.analysis.LegBaseExtremes;
+import tetrapod.analysis.LegBaseSweep;
 import tetrapod.analysis.MotionPeak;
 import tetrapod.analysis.Movement;
+import tetrapod.analysis.NaturalMode;
+import tetrapod.analysis.SecondOrder;
 import tetrapod.analysis.ServiceMotion;
 import tetrapod.analysis.ServiceabilityResult;
-import tetrapod.load.ServiceWind;
-import tetrapod.analysis.HandGoverning;
-import tetrapod.load.Asce7Ice;
-import tetrapod.analysis.LegBaseExtremes;
+import tetrapod.analysis.SolvedCase;
 import tetrapod.check.Extreme;
 import tetrapod.check.FoundationEnvelope;
 import tetrapod.check.HandMethod;
 import tetrapod.check.MemberEnvelope;
-import tetrapod.analysis.LegBaseSweep;
-import tetrapod.analysis.SolvedCase;
-import tetrapod.load.AzimuthWind;
-import tetrapod.load.PanelForce;
+import tetrapod.check.MemberForces;
+import tetrapod.generate.SteelMass;
+import tetrapod.generate.Tower;
+import tetrapod.io.ResultsReader;
 import tetrapod.io.SpecWriter;
+import tetrapod.load.Asce7GustFactor;
+import tetrapod.load.Asce7Ice;
+import tetrapod.load.AzimuthWind;
+import tetrapod.load.Combination;
+import tetrapod.load.En1991StructuralFactor;
+import tetrapod.load.PanelForce;
+import tetrapod.load.ResponseFactor;
+import tetrapod.load.ServiceWind;
 import tetrapod.model.Frame;
+import tetrapod.model.Material;
 import tetrapod.model.Member;
 import tetrapod.model.Node;
+import tetrapod.model.NodeForce;
 import tetrapod.model.Restraint;
 import tetrapod.model.SectionProperties;
 import tetrapod.model.Support;
 import tetrapod.model.Vec3;
 import tetrapod.model.spec.ActionFactorSet;
 import tetrapod.model.spec.ActionFactors;
+import tetrapod.model.spec.LoadAction;
 import tetrapod.model.spec.TowerSpec;
+import tetrapod.model.spec.WindSpec;
 import tetrapod.solve.AutoRestraint;
 import tetrapod.solve.ContinuityNode;
 import tetrapod.solve.EndForces;
 import tetrapod.solve.MemberEndForces;
 import tetrapod.solve.NodeDisplacement;
-import tetrapod.model.NodeForce;
 import tetrapod.solve.Solution;
 import tetrapod.solve.StructuralModel;
-import tetrapod.load.Asce7GustFactor;
-import tetrapod.load.En1991StructuralFactor;
-import tetrapod.load.ResponseFactor;
-import tetrapod.model.spec.WindSpec;
 
 /**
  * results.json as ordered plain values (the machine contract of DESIGN.md and
@@ -114,7 +117,9 @@ public final class ResultsDocument {
         doc.put("input", SpecWriter.toMap(spec));
         doc.put("basis", basis(spec));
         doc.put("model", model(result.model(), result.autoRestraints()));
-        doc.put("cases", result.cases().stream().map(ResultsDocument::solvedCase).toList());
+        Set<Integer> axialOnly = new HashSet<>();
+        result.model().frame().members().stream().filter(Member::axialOnly).forEach(mb -> axialOnly.add(mb.id()));
+        doc.put("cases", result.cases().stream().map(c -> solvedCase(c, axialOnly)).toList());
         if (spec.loads().wind() instanceof WindSpec.En1991 en) {
             doc.put("structuralFactor", structuralFactor(en, given,
                     computed.filter(En1991StructuralFactor.class::isInstance).map(En1991StructuralFactor.class::cast)));
@@ -206,6 +211,14 @@ public final class ResultsDocument {
         m.put("note", e.governing().note());
         m.put("case", e.governingWhere().caseId());
         m.put("azimuthDeg", e.governingWhere().azimuthDeg());
+        if (e.governingForces() != null) {
+            MemberForces f = e.governingForces();
+            Map<String, Object> forces = new LinkedHashMap<>();
+            forces.put("N", f.axial());
+            forces.put("My", List.of(f.myI(), f.myJ()));
+            forces.put("Mz", List.of(f.mzI(), f.mzJ()));
+            m.put("forces", forces);
+        }
         m.put("maxTension", extreme(e.maxTension()));
         m.put("maxCompression", extreme(e.maxCompression()));
         return m;
@@ -539,7 +552,8 @@ public final class ResultsDocument {
         return m;
     }
 
-    private static Map<String, Object> solvedCase(SolvedCase c) {
+    /** @param axialOnly the ids of the members that carry axial force only: their N alone is written */
+    private static Map<String, Object> solvedCase(SolvedCase c, Set<Integer> axialOnly) {
         Solution s = c.solution();
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("id", c.id());
@@ -548,7 +562,7 @@ public final class ResultsDocument {
         m.put("loads", nodeForces(summedByNode(s.loads().loads())));
         m.put("displacements", s.displacements().stream().map(ResultsDocument::displacement).toList());
         m.put("reactions", nodeForces(s.reactions()));
-        m.put("memberForces", s.memberForces().stream().map(ResultsDocument::memberForces).toList());
+        m.put("memberForces", s.memberForces().stream().map(f -> memberForces(f, axialOnly.contains(f.member()))).toList());
         m.put("equilibriumError", s.equilibriumError());
         m.put("alphaCr", Double.isFinite(c.alphaCr()) ? c.alphaCr() : null);
         m.put("windAmplification", c.windAmplification());
@@ -587,12 +601,15 @@ public final class ResultsDocument {
         return m;
     }
 
-    private static Map<String, Object> memberForces(MemberEndForces f) {
+    /** A member's end forces; of an axial-only member its N alone (its end forces are −N and N along its axis). */
+    private static Map<String, Object> memberForces(MemberEndForces f, boolean axialOnly) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("member", f.member());
         m.put("N", f.axial());
-        m.put("endI", six(f.atI()));
-        m.put("endJ", six(f.atJ()));
+        if (!axialOnly) {
+            m.put("endI", six(f.atI()));
+            m.put("endJ", six(f.atJ()));
+        }
         return m;
     }
 

@@ -107,6 +107,59 @@ public final class BasisResponses {
     }
 
     /**
+     * As {@link #axialForces(double[], double[])}, into {@code out} from {@code offset} on (output,
+     * length ≥ offset + members).
+     */
+    public void axialForces(double[] weights, double[] out, int offset) {
+        if (weights.length != axial.length) {
+            throw new IllegalArgumentException("expected " + axial.length + " weights, got " + weights.length);
+        }
+        Arrays.fill(out, offset, offset + members, 0.0);
+        for (int k = 0; k < weights.length; k++) {
+            double w = weights[k];
+            if (w != 0) {
+                double[] v = axial[k];
+                for (int i = 0; i < members; i++) {
+                    out[offset + i] += w * v[i];
+                }
+            }
+        }
+    }
+
+    /** The axial force of the member at {@code memberIndex} for {@code weights}, N: the value {@link #axialForces} gives it. */
+    public double axialForce(int memberIndex, double[] weights) {
+        double sum = 0.0;
+        for (int k = 0; k < weights.length; k++) {
+            double w = weights[k];
+            if (w != 0) {
+                sum += w * axial[k][memberIndex];
+            }
+        }
+        return sum;
+    }
+
+    /**
+     * End force component {@code component} (0–5 at i, 6–11 at j, as {@link #endForces}) of the
+     * member at {@code memberIndex} for {@code weights}: the value {@link #endForces} gives it.
+     */
+    public double endForce(int memberIndex, int component, double[] weights) {
+        int at = memberIndex * 12 + component;
+        double sum = 0.0;
+        for (int k = 0; k < weights.length; k++) {
+            double w = weights[k];
+            if (w != 0) {
+                sum += w * endForces[k][at];
+            }
+        }
+        return sum;
+    }
+
+    /** End force component {@code component} of the member at {@code memberIndex} in the response to basis vector {@code k}. */
+    public double basisEndForce(int k, int memberIndex, int component) {
+        return endForces[k][memberIndex * 12 + component];
+    }
+
+    /**
      * End forces of the member at {@code memberIndex} (frame order) for {@code weights}, into
      * {@code out} (output, length ≥ 12): the end actions at i (fx..mz) then at j, local axes, as
      * {@link MemberEndForces}.

@@ -1,11 +1,15 @@
 package tetrapod.solve;
 
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Random;
+import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.DMatrixSparseCSC;
 import org.ejml.data.DMatrixSparseTriplet;
 import org.ejml.ops.DConvertMatrixStruct;
+import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
+import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
 import org.ejml.sparse.csc.CommonOps_DSCC;
 
 /**
@@ -15,15 +19,31 @@ import org.ejml.sparse.csc.CommonOps_DSCC;
  * GeometricLines}): the chord rotation (P-Δ) of every member, a bracing member split at nodes that
  * only its bending holds taken as one straight line, so that a member's own buckling between its
  * end nodes (P-δ, covered by the member checks) does not enter α_cr. Written as
- * (−K_G) φ = μ K φ with μ = 1/α, the largest positive μ gives α_cr; it is found by subspace iteration with the one Cholesky factor of K (Bathe,
- * <i>Finite Element Procedures</i> §11.6, recalled from memory). Tension (negative μ) stiffens and
+ * (−K_G) φ = μ K φ with μ = 1/α, the largest positive μ gives α_cr. It is found by the Lanczos
+ * method on K⁻¹(−K_G), symmetric in the K inner product, with the one Cholesky factor of K, full
+ * reorthogonalisation and a seeded start, stopped when the Ritz residual estimate β_m |s_m| of the
+ * largest μ is below {@link #TOLERANCE} of it (B. N. Parlett, <i>The Symmetric Eigenvalue
+ * Problem</i>, ch. 13, recalled from memory). The legs of a tall tower give many close μ, which a
+ * subspace iteration of a few vectors approaches slowly (45–60 iterations of 6 solves each on a
+ * 50,000-DOF tower; Lanczos takes one solve per step). Tension (negative μ) stiffens and
  * never buckles; a case whose forces cannot buckle the structure has α_cr = +∞.
  */
 public final class CriticalLoad {
 
+    /**
+     * Convergence: μ changes by at most this, relative, between iterations. α_cr is read to three
+     * figures (the 10 and 3 limits, the factor 1/(1 − 1/α_cr)); a 50,000-DOF tower's leg modes lie
+     * close together, converge slowly, and took 45–60 iterations to 1e-9 against 32–45 to 1e-6
+     * (α_cr then within 2e-6 of the 1e-9 value).
+     */
+    /** Converged when the Ritz residual of the largest μ is at most this, relative to μ. */
     static final double TOLERANCE = 1e-9;
-    static final int MAX_ITERATIONS = 300;
-    private static final int VECTORS = 6;
+    /** Most Lanczos steps (vectors kept for the reorthogonalisation). */
+    static final int MAX_STEPS = 300;
+    /** The tridiagonal problem is solved every this many steps to test convergence. */
+    private static final int CHECK_EVERY = 4;
+    /** A largest μ below this fraction of the largest |μ| is round-off (α_cr above 10¹⁰ times the smallest). */
+    private static final double ROUND_OFF = 1e-10;
     private static final long SEED = 0xA1FACE;
 
     private CriticalLoad() { }
@@ -40,55 +60,100 @@ public final class CriticalLoad {
             return Double.POSITIVE_INFINITY;
         }
         DMatrixSparseCSC minusKg = minusGeometric(model, axial);
-        int q = Math.min(VECTORS, n);
+        int steps = Math.min(MAX_STEPS, n);
+        List<double[]> v = new ArrayList<>();     // K-orthonormal Lanczos vectors
+        List<double[]> kv = new ArrayList<>();    // K v of each, carried along (no product with K)
+        double[] alpha = new double[steps];
+        double[] beta = new double[steps];
+        // start: v = K⁻¹ b for a seeded random b, so that K v = b is known
         Random random = new Random(SEED);
-        double[][] x = new double[q][n];
-        for (double[] v : x) {
-            for (int e = 0; e < n; e++) {
-                v[e] = random.nextDouble() - 0.5;
-            }
+        double[] b = new double[n];
+        for (int e = 0; e < n; e++) {
+            b[e] = random.nextDouble() - 0.5;
         }
-        double previous = Double.NaN;
+        double[] first = b.clone();
+        system.solveFree(first);
+        double norm = Math.sqrt(dot(first, b));
+        v.add(scaled(first, 1 / norm));
+        kv.add(scaled(b, 1 / norm));
         double mu = 0;
-        double[][] y = new double[q][];
-        double[][] gx = new double[q][];
-        for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
-            for (int j = 0; j < q; j++) {
-                gx[j] = new double[n];
-                SparseKernels.multiply(minusKg, x[j], gx[j]);
-                y[j] = gx[j].clone();
-                system.solveFree(y[j]);  // K y = −K_G x
-            }
-            double[] ar = new double[q * q];
-            double[] br = new double[q * q];
-            for (int i = 0; i < q; i++) {
-                double[] gy = new double[n];
-                SparseKernels.multiply(minusKg, y[i], gy);
-                for (int j = i; j < q; j++) {
-                    ar[i * q + j] = ar[j * q + i] = dot(y[j], gy);      // Yᵀ (−K_G) Y
-                    br[i * q + j] = br[j * q + i] = dot(y[j], gx[i]);   // Yᵀ K Y = Yᵀ (−K_G) X
+        double scale = 0;                                             // the largest |μ| met, for round-off
+        for (int j = 0; j < steps; j++) {
+            double[] g = new double[n];
+            SparseKernels.multiply(minusKg, v.get(j), g);           // −K_G v_j
+            alpha[j] = dot(v.get(j), g);
+            scale = Math.max(scale, Math.abs(alpha[j]));
+            double[] w = g.clone();
+            system.solveFree(w);                                      // w = K⁻¹ (−K_G) v_j, K w = g
+            double[] kw = g;
+            for (int pass = 0; pass < 2; pass++) {                    // full reorthogonalisation, twice
+                for (int i = 0; i <= j; i++) {
+                    double c = dot(kv.get(i), w);
+                    axpy(-c, v.get(i), w);
+                    axpy(-c, kv.get(i), kw);
                 }
             }
-            RitzProblem.symmetrise(br, q);
-            RitzProblem ritz = RitzProblem.solve(ar, br, q);
-            double[] values = ritz.values();
-            mu = values[q - 1];
-            for (int j = 0; j < q; j++) {
-                double[] column = new double[n];
-                for (int i = 0; i < q; i++) {
-                    double c = ritz.vectors()[j][i];
-                    for (int e = 0; e < n; e++) {
-                        column[e] += c * y[i][e];
-                    }
+            beta[j] = Math.sqrt(Math.max(dot(w, kw), 0));
+            scale = Math.max(scale, beta[j]);
+            boolean exhausted = beta[j] <= 1e-14 * Math.max(Math.abs(alpha[j]), Double.MIN_NORMAL) || j + 1 == steps;
+            if (exhausted || (j + 1) % CHECK_EVERY == 0) {
+                double[] ritz = largestRitz(alpha, beta, j + 1);
+                mu = ritz[0];
+                if (exhausted || Math.abs(beta[j] * ritz[1]) <= TOLERANCE * Math.abs(mu)) {
+                    break;
                 }
-                x[j] = column;
             }
-            if (Math.abs(mu - previous) <= TOLERANCE * Math.abs(mu)) {
-                break;
-            }
-            previous = mu;
+            v.add(scaled(w, 1 / beta[j]));
+            kv.add(scaled(kw, 1 / beta[j]));
         }
-        return mu > 0 ? 1 / mu : Double.POSITIVE_INFINITY;
+        // tension alone: no positive μ beyond the round-off of the largest tension ones
+        return mu > ROUND_OFF * scale ? 1 / mu : Double.POSITIVE_INFINITY;
+    }
+
+    /**
+     * The largest eigenvalue θ of the m×m tridiagonal T (diagonal {@code alpha}, off-diagonal
+     * {@code beta}) and the last component of its unit eigenvector: β_m |s_m| bounds the residual of
+     * the Ritz pair (Lanczos' error estimate).
+     */
+    private static double[] largestRitz(double[] alpha, double[] beta, int m) {
+        DMatrixRMaj t = new DMatrixRMaj(m, m);
+        for (int i = 0; i < m; i++) {
+            t.set(i, i, alpha[i]);
+            if (i + 1 < m) {
+                t.set(i, i + 1, beta[i]);
+                t.set(i + 1, i, beta[i]);
+            }
+        }
+        EigenDecomposition_F64<DMatrixRMaj> eig = DecompositionFactory_DDRM.eig(m, true, true);
+        if (!eig.decompose(t)) {
+            throw new IllegalStateException("critical load: the tridiagonal eigenproblem of " + m + " steps failed");
+        }
+        int best = 0;
+        for (int k = 1; k < m; k++) {
+            if (eig.getEigenvalue(k).getReal() > eig.getEigenvalue(best).getReal()) {
+                best = k;
+            }
+        }
+        DMatrixRMaj s = eig.getEigenVector(best);
+        double length = 0;
+        for (int i = 0; i < m; i++) {
+            length += s.get(i) * s.get(i);
+        }
+        return new double[] {eig.getEigenvalue(best).getReal(), s.get(m - 1) / Math.sqrt(length)};
+    }
+
+    private static double[] scaled(double[] x, double factor) {
+        double[] out = new double[x.length];
+        for (int e = 0; e < x.length; e++) {
+            out[e] = factor * x[e];
+        }
+        return out;
+    }
+
+    private static void axpy(double a, double[] x, double[] y) {
+        for (int e = 0; e < x.length; e++) {
+            y[e] += a * x[e];
+        }
     }
 
     /** −K_G on the free DOFs, both triangles, line by line ({@link GeometricLines}). */

@@ -63,6 +63,17 @@ public final class FactoredSystem {
     }
 
     /**
+     * Solves K_ff·X = B in place for {@code q} right-hand sides held row by row
+     * ({@link SparseKernels#choleskySolve(DMatrixSparseCSC, double[], int)}), each the same to the
+     * last bit as {@link #solveFree(double[])} gives it.
+     */
+    void solveFree(double[] b, int q) {
+        if (lower != null) {
+            SparseKernels.choleskySolve(lower, b, q);
+        }
+    }
+
+    /**
      * ‖K x − λ M x‖ / ‖λ M x‖ on the free DOFs, M = diag(m): how well (λ, x) is an eigenpair
      * (dimensionless; 0 when λ M x is zero).
      */

@@ -84,9 +84,19 @@ public final class ModalAnalysis {
         double[] lambda = null;
         double[][] y = new double[q][];
         for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
+            double[] block = new double[n * q];
             for (int j = 0; j < q; j++) {
-                y[j] = times(m, x[j]);
-                system.solveFree(y[j]);
+                double[] mx = times(m, x[j]);
+                for (int e = 0; e < n; e++) {
+                    block[e * q + j] = mx[e];
+                }
+            }
+            system.solveFree(block, q);   // K Y = M X, every vector with one pass over the factor
+            for (int j = 0; j < q; j++) {
+                y[j] = new double[n];
+                for (int e = 0; e < n; e++) {
+                    y[j][e] = block[e * q + j];
+                }
             }
             double[] kr = new double[q * q];
             double[] mr = new double[q * q];

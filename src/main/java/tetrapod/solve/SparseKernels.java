@@ -51,6 +51,48 @@ final class SparseKernels {
         TriangularSolver_DSCC.solveTranL(lower, b);
     }
 
+    /**
+     * Solves L Lᵀ X = B in place for {@code q} right-hand sides held row by row ({@code b[i * q + r]}
+     * is row i of right-hand side r): the factor is read twice in all, not twice per right-hand side.
+     * Each right-hand side sees the operations of {@link #choleskySolve(DMatrixSparseCSC, double[])}
+     * in the same order, so the results are the same to the last bit. The factor is EJML's lower
+     * Cholesky factor, its diagonal entry first in each column.
+     */
+    static void choleskySolve(DMatrixSparseCSC lower, double[] b, int q) {
+        int n = lower.numCols;
+        int[] start = lower.col_idx;
+        int[] rows = lower.nz_rows;
+        double[] values = lower.nz_values;
+        for (int col = 0; col < n; col++) {                       // L y = b
+            int at = col * q;
+            double d = values[start[col]];
+            for (int r = 0; r < q; r++) {
+                b[at + r] /= d;
+            }
+            for (int p = start[col] + 1; p < start[col + 1]; p++) {
+                int row = rows[p] * q;
+                double l = values[p];
+                for (int r = 0; r < q; r++) {
+                    b[row + r] -= l * b[at + r];
+                }
+            }
+        }
+        for (int col = n - 1; col >= 0; col--) {                  // Lᵀ x = y
+            int at = col * q;
+            for (int p = start[col] + 1; p < start[col + 1]; p++) {
+                int row = rows[p] * q;
+                double l = values[p];
+                for (int r = 0; r < q; r++) {
+                    b[at + r] -= l * b[row + r];
+                }
+            }
+            double d = values[start[col]];
+            for (int r = 0; r < q; r++) {
+                b[at + r] /= d;
+            }
+        }
+    }
+
     /** The diagonal of A (0 where not stored), new array. */
     static double[] diagonal(DMatrixSparseCSC a) {
         double[] d = new double[a.numCols];

@@ -33,7 +33,7 @@ import tetrapod.solve.StructuralModel;
 class ServiceabilitySuperpositionTest {
 
     private static final String TOWER = TestTowers.squareTower("""
-            { "wind": { "method": "en1991", "basicSpeed": 28.0, "terrain": "II",
+            { "wind": { "method": "en1991", "basicSpeed": 28.0, "terrain": "II", "structuralFactor": 1.0,
                         "directionFactors": [1.0, 0.9, 0.8, 0.7, 0.8, 0.9, 1.0, 0.95, 0.85, 0.75, 0.85, 0.95] },
               "ancillaries": [
                 { "kind": "point", "name": "dish", "height": 17.0, "weight": 1.2, "area": 1.1, "forceCoefficient": 1.5, "face": "+x" },

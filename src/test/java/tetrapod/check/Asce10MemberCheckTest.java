@@ -88,7 +88,7 @@ class Asce10MemberCheckTest {
     }
 
     private static BucklingLength diagonalLengths() {
-        return new BucklingLength(1.6, new BucklingSpan(1.6, 1, 1), new BucklingSpan(3.2, 2, 0), "test");
+        return new BucklingLength(1.6, new BucklingSpan(1.6, 1, 1), new BucklingSpan(3.2, 2, 0));
     }
 
     private static CheckResult find(MemberCheckResult r, CheckMode mode) {
@@ -137,7 +137,7 @@ class Asce10MemberCheckTest {
     @Test
     void legSlendernessLimit() {
         MemberCheckResult r = new Asce10MemberCheck().check(new MemberCheckInput(
-                Fixtures.member(2, Role.LEG, Fixtures.l80x10()), Fixtures.A36, BucklingLength.between(2.4, "leg"),
+                Fixtures.member(2, Role.LEG, Fixtures.l80x10()), Fixtures.A36, BucklingLength.between(2.4),
                 Connection.assumed(Role.LEG), MemberForces.axial(-10e3)));
         assertEquals(154.58 / 150, find(r, CheckMode.SLENDERNESS_LIMIT).utilisation(), 1e-3);
     }

@@ -33,7 +33,7 @@ class En1993MemberCheckTest {
 
     /** A diagonal of an X pair: 1.60 m to the crossing (v–v), 3.20 m out of plane (the crossing not holding). */
     private static BucklingLength diagonalLengths() {
-        return new BucklingLength(1.6, new BucklingSpan(1.6, 1, 1), new BucklingSpan(3.2, 2, 0), "test");
+        return new BucklingLength(1.6, new BucklingSpan(1.6, 1, 1), new BucklingSpan(3.2, 2, 0));
     }
 
     private static MemberCheckResult check(Connection c, double axial) {
@@ -137,7 +137,7 @@ class En1993MemberCheckTest {
         // second moments are not used by the cross-section check; plausible values for a 120x8
         SectionProperties p = new SectionProperties(area, 255e-8, 255e-8, 405e-8, 105e-8, 4e-8, 0.0325, 0.0325, 1, 14.6);
         Section section = new Section("L120x8 sharp", shape, p);
-        BucklingLength lengths = BucklingLength.between(0.5, "short");
+        BucklingLength lengths = BucklingLength.between(0.5);
         MemberCheckResult r = CHECK.check(new MemberCheckInput(Fixtures.member(1, Role.DIAGONAL, section), Fixtures.S355,
                 lengths, twoBolts(), MemberForces.axial(-300e3)));
         CheckResult compression = find(r, CheckMode.COMPRESSION, "(6.11)");
@@ -166,7 +166,7 @@ class En1993MemberCheckTest {
         Section tube = new Section("CHS88.9x4", new SectionShape.Tube(d, t), p);
         MemberForces forces = new MemberForces(-100e3, -2e3, 2e3, 0, 0);
         MemberCheckResult r = CHECK.check(new MemberCheckInput(Fixtures.member(3, Role.LEG, tube), Fixtures.S355,
-                BucklingLength.between(2.0, "leg"), Connection.assumed(Role.LEG), forces));
+                BucklingLength.between(2.0), Connection.assumed(Role.LEG), forces));
         assertEquals(0.5240, find(r, CheckMode.COMBINED, "(6.2)").utilisation(), HAND);
         assertEquals(0.7454, find(r, CheckMode.COMBINED, "6.3.3").utilisation(), HAND);
         assertEquals(1.0, forces.psiY(), 1e-12);
@@ -176,7 +176,7 @@ class En1993MemberCheckTest {
     @Test
     void legSlendernessLimit() {
         MemberCheckResult r = CHECK.check(new MemberCheckInput(Fixtures.member(2, Role.LEG, Fixtures.l80x10()),
-                Fixtures.S355, BucklingLength.between(2.4, "leg"), Connection.assumed(Role.LEG), MemberForces.axial(-1e3)));
+                Fixtures.S355, BucklingLength.between(2.4), Connection.assumed(Role.LEG), MemberForces.axial(-1e3)));
         assertEquals(154.58 / 120, find(r, CheckMode.SLENDERNESS_LIMIT, "H.2").utilisation(), 1e-3);
     }
 

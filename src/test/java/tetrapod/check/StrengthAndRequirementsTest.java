@@ -23,7 +23,7 @@ class StrengthAndRequirementsTest {
             true, 1, ConnectedLeg.LONG, false);
 
     private static BucklingLength lengths(double outOfPlane) {
-        return new BucklingLength(1.6, new BucklingSpan(1.6, 1, 1), new BucklingSpan(outOfPlane, 2, 0), "test");
+        return new BucklingLength(1.6, new BucklingSpan(1.6, 1, 1), new BucklingSpan(outOfPlane, 2, 0));
     }
 
     private static MemberCheckResult check(MemberCheck method, double axial, double outOfPlane) {

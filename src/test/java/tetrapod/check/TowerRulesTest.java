@@ -36,7 +36,7 @@ class TowerRulesTest {
     private static CheckResult slenderness(Role role, double axial) {
         MemberCheckResult r = new En1993MemberCheck(PartialFactors.RECOMMENDED).check(new MemberCheckInput(
                 Fixtures.member(1, role, Fixtures.l80x10()), Fixtures.S355,
-                new BucklingLength(1.6, new BucklingSpan(1.6, 1, 1), new BucklingSpan(3.2, 2, 0), "test"), TWO_BOLTS,
+                new BucklingLength(1.6, new BucklingSpan(1.6, 1, 1), new BucklingSpan(3.2, 2, 0)), TWO_BOLTS,
                 MemberForces.axial(axial)));
         return r.requirements().stream().filter(q -> q.mode() == CheckMode.SLENDERNESS_LIMIT).findFirst().orElseThrow();
     }

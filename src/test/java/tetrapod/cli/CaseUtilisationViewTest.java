@@ -9,8 +9,13 @@ import java.util.Map;
 import org.junit.jupiter.api.Test;
 import tetrapod.analysis.Analysis;
 import tetrapod.analysis.AnalysisResult;
+import tetrapod.analysis.SolvedCase;
+import tetrapod.check.MemberChecker;
 import tetrapod.check.MemberEnvelope;
+import tetrapod.check.MemberForces;
 import tetrapod.common.ProgressListener;
+import tetrapod.model.Member;
+import tetrapod.solve.MemberEndForces;
 import tetrapod.view.Colouring;
 import tetrapod.view.ViewCase;
 import tetrapod.view.ViewData;
@@ -44,6 +49,34 @@ class CaseUtilisationViewTest {
             compared++;
         }
         assertTrue(compared > 100, compared + " members compared");
+    }
+
+    /** Every member of every case: the view's number is the checks' own governing utilisation, to the last bit. */
+    @Test
+    void everyMemberOfEveryCaseHasTheUtilisationOfTheChecksInFull() throws Exception {
+        LoadedModel loaded = LoadedModel.read(Path.of("models/harbour-beacon-rectangular.json"));
+        AnalysisResult result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(), 1,
+                ProgressListener.NONE);
+        ViewData data = ResultViews.of(result, loaded.spec().checks());
+        MemberChecker checker = MemberChecker.of(result.tower(), loaded.spec().checks());
+        var members = result.tower().frame().members();
+        int compared = 0;
+        for (int c = 0; c < result.cases().size(); c++) {
+            SolvedCase solved = result.cases().get(c);
+            ViewCase view = data.cases().get(c + 1);
+            Map<Integer, MemberEndForces> ends = new HashMap<>();
+            solved.solution().memberForces().forEach(f -> ends.put(f.member(), f));
+            for (int k = 0; k < members.size(); k++) {
+                Member m = members.get(k);
+                MemberEndForces f = ends.get(m.id());
+                MemberForces forces = m.axialOnly() ? MemberForces.axial(f.axial())
+                        : new MemberForces(f.axial(), f.atI().my(), f.atJ().my(), f.atI().mz(), f.atJ().mz());
+                double full = checker.check(m.id(), forces, id -> ends.get(id).axial()).governing().utilisation();
+                assertEquals(full, view.scalars().get(Colouring.UTILISATION).get(k), 0, solved.id() + ", member " + m.id());
+                compared++;
+            }
+        }
+        assertTrue(compared > 1000, compared + " member cases compared");
     }
 
     private static int indexOf(AnalysisResult result, int memberId) {

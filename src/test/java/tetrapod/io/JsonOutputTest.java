@@ -70,8 +70,28 @@ class JsonOutputTest {
             many.add(k + 0.5);
         }
         String text = JsonOutput.toJson(Map.of("a", many));
-        assertTrue(text.startsWith("{\n  \"a\": [\n    0.5,\n    1.5,\n"), text);
-        assertTrue(text.endsWith("    29.5\n  ]\n}\n"), text);
+        assertTrue(text.startsWith("{\n  \"a\": [\n    0.5, 1.5, 2.5, "), text);
+        assertTrue(text.endsWith(", 29.5\n  ]\n}\n"), text);
+        assertTrue(text.lines().allMatch(l -> l.length() <= 100), text);
+        assertTrue(text.lines().count() > 3, "30 numbers of 4-5 characters need more than one line of 100: " + text);
+        assertEquals(many.toString().replace(" ", ""), text.substring(text.indexOf('['), text.indexOf(']') + 1)
+                .replaceAll("\\s", ""), "every number once, in order");
+    }
+
+    @Test
+    void anObjectOfNumbersStaysOnOneLineUpToTheLongerWidth() {
+        Map<String, Object> forces = new LinkedHashMap<>();
+        forces.put("member", 12);
+        forces.put("N", -17216064.399081193);
+        forces.put("endI", new double[] {17216064.399081193, -32008.13635325432, 28602.339680075645, -94.95837468035425,
+            -20278.328678190708, -18628.23911380768});
+        forces.put("endJ", new double[] {-17216064.399081193, 32008.13635325432, -28602.339680075645, 94.95837468035425,
+            12939.813150137663, 10415.89675718546});
+        String text = JsonOutput.toJson(List.of(forces, forces));
+        String[] lines = text.split("\n");
+        assertEquals(4, lines.length, text);          // [, the two objects, ]
+        assertTrue(lines[1].length() > 100 && lines[1].length() <= 400, lines[1]);
+        assertTrue(lines[1].startsWith("  { \"member\": 12, \"N\": -1.7216064399081193E7, \"endI\": ["), lines[1]);
     }
 
     @Test

@@ -3,8 +3,10 @@ package tetrapod.report;
 import com.fasterxml.jackson.databind.JsonNode;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import tetrapod.solve.DenseSystem;
 import tetrapod.solve.NaturalElement;
 
@@ -26,6 +28,7 @@ final class ResultsStructure {
     private final DenseSystem system;
     private final Map<Integer, NaturalElement> elements = new HashMap<>();
     private final Map<Integer, int[]> ends = new HashMap<>();
+    private final Set<Integer> axialOnly = new HashSet<>();
     private final List<List<double[]>> constrained = new ArrayList<>();
     private final List<Restraint> restraints = new ArrayList<>();
     private final boolean[][] supportHeld;
@@ -50,6 +53,9 @@ final class ResultsStructure {
                     e * m.get("A").asDouble(), e * m.get("Iy").asDouble(), e * m.get("Iz").asDouble(),
                     m.get("G").asDouble() * m.get("J").asDouble(), truss || m.get("axialOnly").asBoolean());
             elements.put(m.get("id").asInt(), element);
+            if (truss || m.get("axialOnly").asBoolean()) {
+                axialOnly.add(m.get("id").asInt());
+            }
             ends.put(m.get("id").asInt(), new int[] {i, j});
             system.addMember(i, j, element);
         }
@@ -145,6 +151,11 @@ final class ResultsStructure {
     /** K·u − f: the forces the supports and restraints exert, 6 per node index. */
     double[] residual(double[] u, double[] f) {
         return system.residual(u, f);
+    }
+
+    /** Whether member {@code id} carries axial force only (a truss, or model.members[].axialOnly). */
+    boolean axialOnly(int id) {
+        return axialOnly.contains(id);
     }
 
     /** End actions of member {@code id} in its local axes from u: {at i (6), at j (6)}. */

@@ -45,6 +45,33 @@ class ModalAnalysisTest {
     }
 
     /**
+     * A. K. Chopra, <i>Dynamics of Structures</i>, the two-storey shear frame of Chapter 10's first
+     * worked examples (example number recalled from memory as 10.4): lower storey mass 2m and
+     * stiffness 2k, upper mass m and stiffness k give ω₁² = k/(2m), ω₂² = 2k/m, with modes (½, 1)
+     * and (−1, 1). Worked again here from det(K − ω²M) = 0, K = [[3k, −k], [−k, k]],
+     * M = diag(2m, m): 2m²ω⁴ − 5kmω² + 2k² = 0. The storeys are two bars in a line, k = EA/L.
+     */
+    @Test
+    void theTwoStoreyShearFrameOfTheTextbookHasItsFrequenciesAndModes() throws Exception {
+        var stiff = TestFrames.section("lower", 2e-4, 1e-8, 1e-8, 1e-9);
+        var soft = TestFrames.section("upper", 1e-4, 1e-8, 1e-8, 1e-9);
+        Frame frame = TestFrames.frame("shear frame", Idealisation.TRUSS, TestFrames.STEEL,
+                List.of(new Node(1, 0, 0, 0), new Node(2, 3, 0, 0), new Node(3, 6, 0, 0)),
+                List.of(TestFrames.bar(1, 1, 2, stiff), TestFrames.bar(2, 2, 3, soft)),
+                List.of(new Support(1, Restraint.FIXED)));
+        double m = 1200;
+        double k = E * 1e-4 / 3;
+        List<ModalAnalysis.Mode> modes = ModalAnalysis.lowest(Solver.factor(StructuralModel.of(frame)),
+                new double[] {0, 2 * m, m}, 2);
+        assertEquals(k / (2 * m), modes.get(0).omegaSquared(), 1e-9 * k / m);
+        assertEquals(2 * k / m, modes.get(1).omegaSquared(), 1e-9 * k / m);
+        double[] first = modes.get(0).shape();
+        double[] second = modes.get(1).shape();
+        assertEquals(0.5, first[6] / first[12], 1e-9);      // node 2 over node 3, along the line
+        assertEquals(-1.0, second[6] / second[12], 1e-9);
+    }
+
+    /**
      * A 10 m cantilever of 40 beam-columns with the mass of 100 kg/m lumped at the nodes: the first
      * bending frequencies f = β² / (2π L²) √(EI / m̄), β₁ = 1.8751, β₂ = 4.6941 (Euler–Bernoulli
      * cantilever; e.g. R.D. Blevins, Formulas for Natural Frequency and Mode Shape, Table 8-1,

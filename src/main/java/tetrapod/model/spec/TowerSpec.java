@@ -92,12 +92,13 @@ public record TowerSpec(String name, String description, Idealisation idealisati
                 planBracingLevels, userSections, frame, loads, null);
     }
 
-    /** The values of this model that belong to the other family than its basis (warnings when allowed). */
+    /** This spec with other loads, everything else kept. */
     public TowerSpec withLoads(LoadsSpec l) {
         return new TowerSpec(name, description, idealisation, base, segments, material, supports, connectionAllowance,
-                planBracingLevels, userSections, frame, l, checks, basis, mixedBasis, project);
+                planBracingLevels, userSections, frame, l, checks, basis, mixedBasis, project, serviceability);
     }
 
+    /** The values of this model that belong to the other family than its basis (warnings when allowed). */
     public List<BasisMix> basisMixes() {
         return BasisMixes.of(this);
     }
