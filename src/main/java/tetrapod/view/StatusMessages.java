@@ -65,6 +65,12 @@ public final class StatusMessages {
         return noDeformedShape(vc).map(why -> "deformed shape not shown: " + why);
     }
 
+    /** Stepping into {@code vc}, which lacks the chosen colouring: roles are shown until a case has it. */
+    public static String colouringNotShown(ViewCase vc, Colouring chosen) {
+        return "coloured by role: '" + vc.name() + "' has no " + chosen.optionName() + " values; "
+                + chosen.optionName() + " comes back in a case that has them";
+    }
+
     /** A click that found no member while none was picked. */
     public static String nothingPicked() {
         return String.format(Locale.ROOT, "click: no member within %.0f px of the cursor", Picking.TOLERANCE_PX);

@@ -72,9 +72,14 @@ public final class ViewerSession {
             int index = Math.floorMod(options.caseIndex() + s.step(), data.cases().size());
             Colouring c = data.cases().get(index).offers(preferred) ? preferred : Colouring.ROLE;
             options = options.withCase(index).withColouring(c);
-            if (options.deformed()) {
-                status = StatusMessages.deformedNotShown(data.cases().get(index)).orElse("");
+            List<String> unshown = new ArrayList<>();
+            if (c != preferred) {
+                unshown.add(StatusMessages.colouringNotShown(data.cases().get(index), preferred));
             }
+            if (options.deformed()) {
+                StatusMessages.deformedNotShown(data.cases().get(index)).ifPresent(unshown::add);
+            }
+            status = String.join("\n", unshown);
             rebuild();
         } else if (action instanceof ViewerAction.NextColouring) {
             List<Colouring> offered = data.colourings(options.caseIndex());

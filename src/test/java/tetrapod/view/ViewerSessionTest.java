@@ -123,8 +123,11 @@ class ViewerSessionTest {
         assertEquals(Colouring.AZIMUTH, s.options().colouring());
         s.apply(new ViewerAction.StepCase(1));
         assertEquals(Colouring.ROLE, s.options().colouring(), "the wind case has no governing azimuths");
+        assertEquals("coloured by role: 'wind 0' has no azimuth values; azimuth comes back in a case that has them",
+                s.status());
         s.apply(new ViewerAction.StepCase(1));
         assertEquals(Colouring.AZIMUTH, s.options().colouring());
+        assertEquals("", s.status());
     }
 
     @Test
