@@ -3,8 +3,6 @@ package tetrapod.cli;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
-import java.util.OptionalDouble;
 import tetrapod.analysis.NaturalMode;
 import tetrapod.model.Frame;
 import tetrapod.model.Vec3;
@@ -27,7 +25,7 @@ final class ModeViews {
         String name = String.format(Locale.ROOT, "mode %d: %.3f Hz, %s%s", mode.number(), mode.frequencyHz(),
                 mode.kind().label(), mode.swayDirectionDeg() == null ? ""
                         : String.format(Locale.ROOT, " along %d°", Math.round(mode.swayDirectionDeg()) % 180));
-        ViewCase c = new ViewCase(name, OptionalDouble.empty(), Map.of(), shape, List.of(), List.of());
+        ViewCase c = ViewCase.shape(name, shape);
         return new ViewData(frame, List.of(c), Colouring.ROLE);
     }
 }

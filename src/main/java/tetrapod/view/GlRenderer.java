@@ -29,6 +29,9 @@ final class GlRenderer implements AutoCloseable {
     private final int uOverlayViewport;
     private final int segmentVao;
     private final int segmentVbo;
+    private final int triadVao;
+    private final int triadVbo;
+    private final int triadInstances;
     private final int overlayVao;
     private final int overlayVbo;
     private final int atlasTexture;
@@ -50,17 +53,13 @@ final class GlRenderer implements AutoCloseable {
 
         segmentVao = glGenVertexArrays();
         segmentVbo = glGenBuffers();
-        glBindVertexArray(segmentVao);
-        glBindBuffer(GL_ARRAY_BUFFER, segmentVbo);
-        int stride = SegmentInstances.FLOATS * Float.BYTES;
-        int[] sizes = {3, 3, 3, 2, 1};
-        long offset = 0;
-        for (int loc = 0; loc < sizes.length; loc++) {
-            glEnableVertexAttribArray(loc);
-            glVertexAttribPointer(loc, sizes[loc], GL_FLOAT, false, stride, offset);
-            glVertexAttribDivisor(loc, 1);
-            offset += (long) sizes[loc] * Float.BYTES;
-        }
+        instanceLayout(segmentVao, segmentVbo);
+        triadVao = glGenVertexArrays();
+        triadVbo = glGenBuffers();
+        instanceLayout(triadVao, triadVbo);
+        SegmentInstances triad = AxisTriad.segments();
+        triadInstances = triad.count();
+        upload(triadVbo, List.of(triad));
 
         overlayVao = glGenVertexArrays();
         overlayVbo = glGenBuffers();
@@ -79,6 +78,22 @@ final class GlRenderer implements AutoCloseable {
         glTexParameteri(GL_TEXTURE_2D, GL_TEXTURE_MAG_FILTER, GL_NEAREST);
         glTexParameteri(GL_TEXTURE_2D, GL_TEXTURE_WRAP_S, GL_CLAMP_TO_EDGE);
         glTexParameteri(GL_TEXTURE_2D, GL_TEXTURE_WRAP_T, GL_CLAMP_TO_EDGE);
+    }
+
+    /** Segment instances from {@code vbo} as the vertex attributes of {@code vao} (see shaders/segment.vert). */
+    private static void instanceLayout(int vao, int vbo) {
+        glBindVertexArray(vao);
+        glBindBuffer(GL_ARRAY_BUFFER, vbo);
+        int stride = SegmentInstances.FLOATS * Float.BYTES;
+        int[] sizes = {3, 3, 3, 2, 1};
+        long offset = 0;
+        for (int loc = 0; loc < sizes.length; loc++) {
+            glEnableVertexAttribArray(loc);
+            glVertexAttribPointer(loc, sizes[loc], GL_FLOAT, false, stride, offset);
+            glVertexAttribDivisor(loc, 1);
+            offset += (long) sizes[loc] * Float.BYTES;
+        }
+        glBindVertexArray(0);
     }
 
     /** Clears the bound framebuffer and draws the scene seen by {@code camera} on a {@code width} × {@code height} viewport. */
@@ -114,14 +129,45 @@ final class GlRenderer implements AutoCloseable {
         glUniform1f(uPixelScale, height / 1000f);
         glBindVertexArray(segmentVao);
         glDrawArraysInstanced(GL_TRIANGLE_STRIP, 0, 4, instances);
+        if (scene.axisTriad()) {
+            drawTriad(camera, width, height);
+        }
 
         drawOverlay(overlay, width, height);
         glBindVertexArray(0);
         glUseProgram(0);
     }
 
+    /** The axis triad in its own viewport, over the tower (its depth cleared), with the camera's rotation only. */
+    private void drawTriad(Camera camera, int width, int height) {
+        ScreenRect v = AxisTriad.viewport(width, height);
+        int side = (int) v.width();
+        int x = (int) v.x0();
+        int y = height - (int) v.y1();  // OpenGL counts rows from the bottom
+        glEnable(GL_SCISSOR_TEST);
+        glScissor(x, y, side, side);
+        glClear(GL_DEPTH_BUFFER_BIT);
+        glViewport(x, y, side, side);
+        try (MemoryStack stack = MemoryStack.stackPush()) {
+            FloatBuffer m = stack.mallocFloat(16);
+            AxisTriad.camera(camera).viewProjection(side, side, new org.joml.Matrix4f()).get(m);
+            glUniformMatrix4fv(uViewProjection, false, m);
+        }
+        glUniform2f(uSegmentViewport, side, side);
+        glUniform1f(uPixelScale, side / 1000f);
+        glBindVertexArray(triadVao);
+        glDrawArraysInstanced(GL_TRIANGLE_STRIP, 0, 4, triadInstances);
+        glDisable(GL_SCISSOR_TEST);
+        glViewport(0, 0, width, height);
+    }
+
     private void upload(Scene scene) {
-        List<SegmentInstances> batches = List.of(scene.ground(), scene.decorations(), scene.members());
+        instances = upload(segmentVbo, List.of(scene.ground(), scene.decorations(), scene.members()));
+        uploaded = scene;
+    }
+
+    /** Writes {@code batches} into {@code vbo}; returns how many instances. */
+    private static int upload(int vbo, List<SegmentInstances> batches) {
         int total = 0;
         for (SegmentInstances b : batches) {
             total += b.count();
@@ -132,13 +178,12 @@ final class GlRenderer implements AutoCloseable {
                 b.writeTo(buffer);
             }
             buffer.flip();
-            glBindBuffer(GL_ARRAY_BUFFER, segmentVbo);
+            glBindBuffer(GL_ARRAY_BUFFER, vbo);
             glBufferData(GL_ARRAY_BUFFER, buffer, GL_STATIC_DRAW);
         } finally {
             memFree(buffer);
         }
-        instances = total;
-        uploaded = scene;
+        return total;
     }
 
     private void drawOverlay(List<PlacedImage> placed, int width, int height) {
@@ -204,6 +249,8 @@ final class GlRenderer implements AutoCloseable {
     public void close() {
         glDeleteTextures(atlasTexture);
         glDeleteBuffers(segmentVbo);
+        glDeleteBuffers(triadVbo);
+        glDeleteVertexArrays(triadVao);
         glDeleteBuffers(overlayVbo);
         glDeleteVertexArrays(segmentVao);
         glDeleteVertexArrays(overlayVao);

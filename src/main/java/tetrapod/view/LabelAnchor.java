@@ -18,7 +18,16 @@ public sealed interface LabelAnchor {
         }
     }
 
-    /** In a corner of the image, {@code inset} reference px from both edges. */
+    /**
+     * At the corner or side of the image farthest from the tower's projected bounding box,
+     * {@code inset} reference px from the edges ({@link InfoBoxPlacement}).
+     */
+    record AwayFromTower(double inset) implements LabelAnchor { }
+
+    /**
+     * In a corner of the image, {@code inset} reference px from both edges; labels in the same corner
+     * stack (in a bottom corner the later one goes above, in a top corner below).
+     */
     record AtCorner(Corner corner, double inset) implements LabelAnchor {
         public AtCorner {
             Objects.requireNonNull(corner, "corner");

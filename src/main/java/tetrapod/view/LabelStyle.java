@@ -7,7 +7,8 @@ public enum LabelStyle {
     REACTION(15, 0x1F2328, false, false),
     WIND(16, 0x0E6E78, true, false),
     INFO(16, 0x1F2328, false, true),
-    HELP(14, 0x50565C, false, false);
+    HELP(14, 0x50565C, false, false),
+    STATUS(15, 0x7A3A00, true, true);
 
     final int size;
     final Rgb colour;

@@ -2,11 +2,14 @@ package tetrapod.view;
 
 import java.awt.image.BufferedImage;
 import java.util.ArrayList;
+import java.util.EnumMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * Where the scene's labels and legend go on the image for one camera; shared by both renderers.
- * Corner labels and the legend are placed first, then the labels at points: axis and wind
+ * Corner labels (stacked when they share a corner) and the legend are placed first, then the axis
+ * triad's labels, then the info box away from the tower, then the labels at points: axis and wind
  * labels, then the reaction labels; a label at a point that would cover one already placed is
  * moved up or down, by its own height at a time, to the nearest free place.
  */
@@ -24,14 +27,39 @@ final class OverlayLayout {
     static List<PlacedImage> place(Scene scene, Projector projector, LabelPainter painter) {
         List<PlacedImage> placed = new ArrayList<>();
         double s = painter.scale();
+        int gap = (int) Math.ceil(GAP * s);
+        Map<LabelAnchor.Corner, Integer> stacked = new EnumMap<>(LabelAnchor.Corner.class);
         for (SceneLabel label : scene.labels()) {
             if (label.anchor() instanceof LabelAnchor.AtCorner at) {
-                placed.add(corner(painter.text(label.text(), label.style()), at.corner(), at.inset() * s, projector));
+                BufferedImage image = painter.text(label.text(), label.style());
+                int offset = stacked.getOrDefault(at.corner(), 0);
+                placed.add(corner(image, at.corner(), at.inset() * s, offset, projector));
+                stacked.put(at.corner(), offset + image.getHeight() + gap);
             }
         }
         scene.legend().ifPresent(legend -> placed.add(
-                corner(painter.legend(legend), LabelAnchor.Corner.RIGHT_MIDDLE, LEGEND_INSET * s, projector)));
-        int gap = (int) Math.ceil(GAP * s);
+                corner(painter.legend(legend), LabelAnchor.Corner.RIGHT_MIDDLE, LEGEND_INSET * s, 0, projector)));
+        List<ScreenRect> taken = new ArrayList<>();
+        for (PlacedImage p : placed) {
+            taken.add(rect(p));
+        }
+        if (scene.axisTriad()) {
+            Camera camera = projector.camera();
+            taken.add(AxisTriad.viewport(projector.width(), projector.height()));
+            placed.addAll(AxisTriad.labels(camera, projector.width(), projector.height(), painter));
+        }
+        for (SceneLabel label : scene.labels()) {
+            if (label.anchor() instanceof LabelAnchor.AwayFromTower away) {
+                BufferedImage image = painter.text(label.text(), label.style());
+                ScreenRect tower = InfoBoxPlacement.towerBounds(scene.members(), projector)
+                        .orElse(ScreenRect.at(projector.width() / 2.0, projector.height() / 2.0, 0, 0));
+                ScreenRect r = InfoBoxPlacement.place(projector.width(), projector.height(), image.getWidth(),
+                        image.getHeight(), tower, taken, away.inset() * s);
+                PlacedImage p = new PlacedImage(image, (int) Math.round(r.x0()), (int) Math.round(r.y0()));
+                placed.add(p);
+                taken.add(rect(p));
+            }
+        }
         for (boolean reactions : new boolean[] {false, true}) {
             for (SceneLabel label : scene.labels()) {
                 if (label.anchor() instanceof LabelAnchor.AtPoint at && (label.style() == LabelStyle.REACTION) == reactions) {
@@ -43,6 +71,10 @@ final class OverlayLayout {
             }
         }
         return placed;
+    }
+
+    static ScreenRect rect(PlacedImage p) {
+        return ScreenRect.at(p.x(), p.y(), p.image().getWidth(), p.image().getHeight());
     }
 
     private static PlacedImage atPoint(BufferedImage image, LabelAnchor.AtPoint at, Projector projector, double s) {
@@ -80,13 +112,16 @@ final class OverlayLayout {
                 && a.y() < b.y() + b.image().getHeight() + gap && b.y() < a.y() + a.image().getHeight() + gap;
     }
 
-    private static PlacedImage corner(BufferedImage image, LabelAnchor.Corner corner, double inset, Projector p) {
+    /** In {@code corner}, moved {@code offset} px away from the edge it stacks from (up at the bottom, down at the top). */
+    private static PlacedImage corner(BufferedImage image, LabelAnchor.Corner corner, double inset, int offset,
+                                      Projector p) {
         int i = (int) Math.round(inset);
         int right = p.width() - image.getWidth() - i;
-        int bottom = p.height() - image.getHeight() - i;
+        int bottom = p.height() - image.getHeight() - i - offset;
+        int top = i + offset;
         return switch (corner) {
-            case TOP_LEFT -> new PlacedImage(image, i, i);
-            case TOP_RIGHT -> new PlacedImage(image, right, i);
+            case TOP_LEFT -> new PlacedImage(image, i, top);
+            case TOP_RIGHT -> new PlacedImage(image, right, top);
             case BOTTOM_LEFT -> new PlacedImage(image, i, bottom);
             case BOTTOM_RIGHT -> new PlacedImage(image, right, bottom);
             case RIGHT_MIDDLE -> new PlacedImage(image, right, (p.height() - image.getHeight()) / 2);

@@ -10,6 +10,7 @@ import org.joml.Vector4f;
  */
 public final class Projector {
 
+    private final Camera camera;
     private final Matrix4f viewProjection;
     private final int width;
     private final int height;
@@ -19,9 +20,14 @@ public final class Projector {
         if (width < 1 || height < 1) {
             throw new IllegalArgumentException("viewport must be at least 1 x 1 px, was " + width + " x " + height);
         }
+        this.camera = camera;
         this.viewProjection = camera.viewProjection(width, height, new Matrix4f());
         this.width = width;
         this.height = height;
+    }
+
+    public Camera camera() {
+        return camera;
     }
 
     public int width() {

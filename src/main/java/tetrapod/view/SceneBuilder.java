@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import tetrapod.model.Frame;
 import tetrapod.model.Member;
 import tetrapod.model.Node;
@@ -128,7 +129,7 @@ public final class SceneBuilder {
             labels.add(new SceneLabel(caption(data, vc, options.colouring(), scale), LabelStyle.CAPTION,
                     new LabelAnchor.AtCorner(LabelAnchor.Corner.TOP_LEFT, 16)));
         }
-        return new Scene(members, ground.build(), deco.build(), arrows, labels, legend, Bounds.of(framed));
+        return new Scene(members, ground.build(), deco.build(), arrows, labels, legend, Bounds.of(framed), false);
     }
 
     /** The larger of the frame's height and its plan diagonal, m. */
@@ -201,6 +202,13 @@ public final class SceneBuilder {
         String second = vc.name() + " · colour: " + colouring.optionName();
         if (deformation > 0) {
             second += String.format(Locale.ROOT, " · deformed shape ×%s", trim(deformation));
+            if (!vc.shapeOnly()) {
+                OptionalDouble top = TopDisplacement.of(data.frame(), vc.displacements());
+                if (top.isPresent()) {
+                    second += String.format(Locale.ROOT, "\ntop displacement %.1f mm (largest horizontal, top level)",
+                            top.getAsDouble() * 1000);
+                }
+            }
         }
         return data.frame().name() + "\n" + second;
     }

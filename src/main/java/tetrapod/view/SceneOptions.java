@@ -52,6 +52,11 @@ public record SceneOptions(int caseIndex, Colouring colouring, boolean deformed,
                 caption);
     }
 
+    public SceneOptions withAxes(boolean on) {
+        return new SceneOptions(caseIndex, colouring, deformed, deformationScale, grid, on, reactions, wind, legend,
+                caption);
+    }
+
     public SceneOptions withGrid(boolean on) {
         return new SceneOptions(caseIndex, colouring, deformed, deformationScale, on, axes, reactions, wind, legend,
                 caption);

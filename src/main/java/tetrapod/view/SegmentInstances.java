@@ -58,6 +58,13 @@ public final class SegmentInstances {
         return data[k * FLOATS + 11] != 0;
     }
 
+    /** The instances of {@code a} followed by those of {@code b}. */
+    public static SegmentInstances concat(SegmentInstances a, SegmentInstances b) {
+        float[] all = Arrays.copyOf(a.data, (a.count + b.count) * FLOATS);
+        System.arraycopy(b.data, 0, all, a.count * FLOATS, b.count * FLOATS);
+        return new SegmentInstances(all, a.count + b.count);
+    }
+
     /** Copies every instance into {@code dest} (output) from its position; returns it. */
     public FloatBuffer writeTo(FloatBuffer dest) {
         return dest.put(data, 0, count * FLOATS);

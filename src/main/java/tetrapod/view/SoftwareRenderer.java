@@ -25,6 +25,15 @@ public final class SoftwareRenderer {
             g.fillRect(0, 0, width, height);
             paintSorted(g, projector, List.of(scene.ground()));
             paintSorted(g, projector, List.of(scene.decorations(), scene.members()));
+            if (scene.axisTriad()) {
+                ScreenRect v = AxisTriad.viewport(width, height);
+                Graphics2D inset = (Graphics2D) g.create((int) v.x0(), (int) v.y0(), (int) v.width(), (int) v.height());
+                try {
+                    paintSorted(inset, AxisTriad.projector(camera, v), List.of(AxisTriad.segments()));
+                } finally {
+                    inset.dispose();
+                }
+            }
             for (PlacedImage p : OverlayLayout.place(scene, projector, new LabelPainter(height))) {
                 g.drawImage(p.image(), p.x(), p.y(), null);
             }

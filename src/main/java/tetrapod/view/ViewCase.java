@@ -23,10 +23,12 @@ import java.util.OptionalDouble;
  * @param requirementBreaks indexes (frame member order) of the members that break a requirement
  *                       that does not depend on the load (slenderness, bolt spacing, width-to-
  *                       thickness); drawn with a mark of their own, never as a utilisation colour
+ * @param shapeOnly      the displacements are a shape without a size of their own (a natural mode):
+ *                       drawn, but no displacement in mm is shown for them
  */
 public record ViewCase(String name, OptionalDouble windAzimuthDeg, Map<Colouring, MemberScalars> scalars,
                        List<NodeVector> displacements, List<NodeVector> reactions, List<String> memberNotes,
-                       List<Integer> requirementBreaks) {
+                       List<Integer> requirementBreaks, boolean shapeOnly) {
 
     public ViewCase {
         Objects.requireNonNull(name, "name");
@@ -44,10 +46,22 @@ public record ViewCase(String name, OptionalDouble windAzimuthDeg, Map<Colouring
         requirementBreaks = List.copyOf(requirementBreaks);
     }
 
+    /** A case whose displacements are real ones, m. */
+    public ViewCase(String name, OptionalDouble windAzimuthDeg, Map<Colouring, MemberScalars> scalars,
+                    List<NodeVector> displacements, List<NodeVector> reactions, List<String> memberNotes,
+                    List<Integer> requirementBreaks) {
+        this(name, windAzimuthDeg, scalars, displacements, reactions, memberNotes, requirementBreaks, false);
+    }
+
+    /** A shape to draw deformed that has no size of its own, e.g. a natural mode. */
+    public static ViewCase shape(String name, List<NodeVector> shape) {
+        return new ViewCase(name, OptionalDouble.empty(), Map.of(), shape, List.of(), List.of(), List.of(), true);
+    }
+
     /** A case in which no member breaks a requirement (or none is known). */
     public ViewCase(String name, OptionalDouble windAzimuthDeg, Map<Colouring, MemberScalars> scalars,
                     List<NodeVector> displacements, List<NodeVector> reactions, List<String> memberNotes) {
-        this(name, windAzimuthDeg, scalars, displacements, reactions, memberNotes, List.of());
+        this(name, windAzimuthDeg, scalars, displacements, reactions, memberNotes, List.of(), false);
     }
 
     /** A case with nothing but a name and, optionally, a wind direction. */

@@ -2,12 +2,16 @@ package tetrapod.view;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalInt;
 
 /**
- * The state behind the window, as plain Java: camera, case, colouring, toggles and picked member,
- * changed by {@link ViewerAction}s, and the scene to draw for it. The window only feeds it input
- * and draws {@link #scene()} with {@link #camera()}. Not thread-safe.
+ * The state behind the window, as plain Java: camera, case, colouring, toggles, picked member and
+ * status line, changed by {@link ViewerAction}s, and the scene to draw for it. The window only feeds
+ * it input and draws {@link #scene()} with {@link #camera()}. The x, y, z directions are drawn as an
+ * inset triad (when the options ask for axes) instead of at the grid's corner, so that orbit and
+ * zoom never lose them. A key that would change nothing leaves the state as it is and says why in
+ * the status line. Not thread-safe.
  */
 public final class ViewerSession {
 
@@ -20,12 +24,15 @@ public final class ViewerSession {
     private Camera camera;
     private OptionalInt picked = OptionalInt.empty();
     private boolean help = true;
+    private final boolean triad;
+    private String status = "";
     private Scene base;
     private Scene decorated;
 
     public ViewerSession(ViewData data, SceneOptions options, int width, int height) {
         this.data = data;
-        this.options = options;
+        this.triad = options.axes();
+        this.options = options.withAxes(false);
         this.preferred = options.colouring();
         resize(width, height);
         rebuild();
@@ -41,6 +48,20 @@ public final class ViewerSession {
 
     /** Applies an action; returns whether the picture changed. Snapshot and Close are the window's. */
     public boolean apply(ViewerAction action) {
+        Optional<String> why = StatusMessages.whyNothing(action, data, options);
+        if (why.isPresent()) {
+            return say(why.get());
+        }
+        if (action instanceof ViewerAction.Snapshot || action instanceof ViewerAction.Close) {
+            return false;  // the window's business
+        }
+        String before = status;
+        status = "";
+        boolean changed = change(action);
+        return changed || !before.equals(status);
+    }
+
+    private boolean change(ViewerAction action) {
         if (action instanceof ViewerAction.Orbit o) {
             camera = camera.orbit(o.dYaw(), o.dPitch());
         } else if (action instanceof ViewerAction.Pan p) {
@@ -51,6 +72,14 @@ public final class ViewerSession {
             int index = Math.floorMod(options.caseIndex() + s.step(), data.cases().size());
             Colouring c = data.cases().get(index).offers(preferred) ? preferred : Colouring.ROLE;
             options = options.withCase(index).withColouring(c);
+            List<String> unshown = new ArrayList<>();
+            if (c != preferred) {
+                unshown.add(StatusMessages.colouringNotShown(data.cases().get(index), preferred));
+            }
+            if (options.deformed()) {
+                StatusMessages.deformedNotShown(data.cases().get(index)).ifPresent(unshown::add);
+            }
+            status = String.join("\n", unshown);
             rebuild();
         } else if (action instanceof ViewerAction.NextColouring) {
             List<Colouring> offered = data.colourings(options.caseIndex());
@@ -58,9 +87,6 @@ public final class ViewerSession {
             options = options.withColouring(preferred);
             rebuild();
         } else if (action instanceof ViewerAction.UseColouring u) {
-            if (!data.cases().get(options.caseIndex()).offers(u.colouring()) || u.colouring() == options.colouring()) {
-                return false;
-            }
             preferred = u.colouring();
             options = options.withColouring(preferred);
             rebuild();
@@ -76,12 +102,30 @@ public final class ViewerSession {
         } else if (action instanceof ViewerAction.ResetCamera) {
             camera = framing();
         } else if (action instanceof ViewerAction.Pick p) {
+            OptionalInt before = picked;
             picked = Picking.memberAt(base, new Projector(camera, width, height), p.x(), p.y());
             decorated = null;
+            if (picked.isEmpty() && before.isEmpty()) {
+                status = StatusMessages.nothingPicked();
+            }
         } else {
-            return false;  // Snapshot, Close: the window's business
+            return false;
         }
         return true;
+    }
+
+    private boolean say(String why) {
+        if (why.equals(status)) {
+            return false;
+        }
+        status = why;
+        decorated = null;
+        return true;
+    }
+
+    /** The status line: why the last key did nothing, or what the last change leaves unshown; "" for none. */
+    public String status() {
+        return status;
     }
 
     public Camera camera() {
@@ -104,17 +148,28 @@ public final class ViewerSession {
         return height;
     }
 
-    /** The scene to draw: the case's scene with the picked member's description and the help. */
+    /**
+     * The scene to draw: the case's scene with the picked member highlighted and its description
+     * away from the tower, the help, the status line above it, and the axis triad.
+     */
     public Scene scene() {
         if (decorated == null) {
             List<SceneLabel> extra = new ArrayList<>();
             picked.ifPresent(m -> extra.add(new SceneLabel(MemberDescription.of(data, options.caseIndex(), m),
-                    LabelStyle.INFO, new LabelAnchor.AtCorner(LabelAnchor.Corner.BOTTOM_RIGHT, 16))));
+                    LabelStyle.INFO, new LabelAnchor.AwayFromTower(16))));
             if (help) {
                 extra.add(new SceneLabel(InputMap.HELP, LabelStyle.HELP,
                         new LabelAnchor.AtCorner(LabelAnchor.Corner.BOTTOM_LEFT, 12)));
             }
-            decorated = base.withLabels(extra);
+            if (!status.isEmpty()) {
+                extra.add(new SceneLabel(status, LabelStyle.STATUS,
+                        new LabelAnchor.AtCorner(LabelAnchor.Corner.BOTTOM_LEFT, 12)));
+            }
+            Scene s = base.withLabels(extra).withAxisTriad(triad);
+            if (picked.isPresent()) {
+                s = s.withDecorations(PickHighlight.of(base.members(), picked.getAsInt()));
+            }
+            decorated = s;
         }
         return decorated;
     }

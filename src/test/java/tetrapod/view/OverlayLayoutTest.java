@@ -54,6 +54,41 @@ class OverlayLayoutTest {
         assertEquals(List.of(), overlaps(placed));
     }
 
+    /**
+     * The window's overlays (caption, legend, help with the status line stacked above it, the axis
+     * triad's letters, the picked member's box, the wind label) never cover one another, in the
+     * first view and after orbiting, zooming and panning (issue 16 item 8).
+     */
+    @Test
+    void theWindowsOverlaysDoNotOverlap() {
+        ViewData data = ViewData.geometryOnly(frame, OptionalDouble.of(30));
+        int width = 1280;
+        int height = 960;
+        ViewerSession s = new ViewerSession(data, SceneOptions.defaults(data), width, height);
+        int leg = ViewFixtures.withRole(frame, tetrapod.model.Role.LEG).get(3);
+        Vec3 a = s.scene().members().start(leg);
+        Vec3 b = s.scene().members().end(leg);
+        double[] xy = new double[4];
+        new Projector(s.camera(), width, height).project((a.x() + b.x()) / 2, (a.y() + b.y()) / 2, (a.z() + b.z()) / 2, xy);
+        s.apply(new ViewerAction.Pick(xy[0], xy[1]));
+        assertTrue(s.picked().isPresent());
+        s.apply(new ViewerAction.StepCase(1));
+        assertTrue(!s.status().isEmpty(), "a status line to place");
+        for (ViewerAction move : List.of(new ViewerAction.Zoom(1), new ViewerAction.Zoom(0.4), new ViewerAction.Pan(-200, 80),
+                new ViewerAction.Zoom(3), new ViewerAction.Pan(300, 0))) {
+            s.apply(move);
+            // each move clears the status line: say it again
+            s.apply(new ViewerAction.StepCase(1));
+            for (double yaw : new double[] {0, 0.8, 1.9, 3.3}) {
+                s.apply(new ViewerAction.Orbit(yaw, 0));
+                s.apply(new ViewerAction.StepCase(1));
+                List<PlacedImage> placed = OverlayLayout.place(s.scene(), new Projector(s.camera(), width, height),
+                        new LabelPainter(height));
+                assertEquals(List.of(), overlaps(placed), move + ", turned " + yaw);
+            }
+        }
+    }
+
     private static List<PlacedImage> layout(Scene scene, int width, int height) {
         Camera camera = Camera.framing(scene.bounds(), width, height, Camera.DEFAULT_YAW, Camera.DEFAULT_PITCH);
         return OverlayLayout.place(scene, new Projector(camera, width, height), new LabelPainter(height));

@@ -184,6 +184,78 @@ abstract class RenderContract {
         assertTrue(swatch > 20, "no overstress swatch in the legend");
     }
 
+    /** Issue 16 item 8: the x, y, z triad is still there, in its inset, after zooming in, panning and orbiting. */
+    @Test
+    void theAxisTriadShowsInItsInsetAfterZoomPanAndOrbit() {
+        ViewData data = ViewFixtures.utilisation(frame, 0.3, 0, 0.3);
+        ViewerSession s = new ViewerSession(data, SceneOptions.defaults(data), W, H);
+        s.apply(new ViewerAction.Zoom(0.1));
+        s.apply(new ViewerAction.Pan(250, -120));
+        s.apply(new ViewerAction.Orbit(0.5, 0.35));
+        ScreenRect inset = AxisTriad.viewport(W, H);
+        try (PictureRenderer renderer = PictureRenderer.start(List.of(route()))) {
+            Picture with = renderer.draw(s.scene(), s.camera(), W, H);
+            Picture without = renderer.draw(s.scene().withAxisTriad(false), s.camera(), W, H);
+            assertEquals(route(), with.route());
+            for (Rgb axis : List.of(GroundDecorations.AXIS_X, GroundDecorations.AXIS_Y, GroundDecorations.AXIS_Z)) {
+                int n = count(with.image(), inset, axis);
+                assertTrue(n > 15, axis + " pixels in the inset: " + n);
+            }
+            assertEquals(0, count(without.image(), inset, GroundDecorations.AXIS_X), "the x colour only comes from the triad");
+        }
+    }
+
+    /** Issue 16 item 8: the picked member's near-black outline shows along it and nowhere else. */
+    @Test
+    void thePickedMemberIsOutlinedAlongItsLength() {
+        int front = frontMember();
+        ViewData data = ViewFixtures.utilisation(frame, 0.3, front, 0.3);
+        Scene plain = SceneBuilder.build(data, SceneOptions.defaults(data).membersOnly());
+        Scene scene = plain.withDecorations(PickHighlight.of(plain.members(), front));
+        Camera camera = Camera.framing(scene.bounds(), W, H, Camera.DEFAULT_YAW, Camera.DEFAULT_PITCH);
+        try (PictureRenderer renderer = PictureRenderer.start(List.of(route()))) {
+            BufferedImage image = renderer.draw(scene, camera, W, H).image();
+            BufferedImage before = renderer.draw(plain, camera, W, H).image();
+            Projector p = new Projector(camera, W, H);
+            double[] a = new double[4];
+            double[] b = new double[4];
+            project(p, scene.members(), front, a, b);
+            double reach = p.pixels(scene.decorations().startWidth(scene.decorations().count() - 3)) / 2 + 3;
+            int along = 0;
+            int elsewhere = 0;
+            int outlineBefore = 0;
+            for (int y = 0; y < H; y++) {
+                for (int x = 0; x < W; x++) {
+                    if (PickHighlight.OUTLINE.channelDistance(before.getRGB(x, y) & 0xffffff) <= SAME_COLOUR) {
+                        outlineBefore++;
+                    }
+                    if (PickHighlight.OUTLINE.channelDistance(image.getRGB(x, y) & 0xffffff) <= SAME_COLOUR) {
+                        if (distance(a, b, x + 0.5, y + 0.5) <= reach) {
+                            along++;
+                        } else {
+                            elsewhere++;
+                        }
+                    }
+                }
+            }
+            assertEquals(0, outlineBefore, "no outline colour without a pick");
+            assertTrue(along > 60, "outline pixels along the picked member: " + along);
+            assertEquals(0, elsewhere, "outline pixels away from the picked member");
+        }
+    }
+
+    private static int count(BufferedImage image, ScreenRect r, Rgb colour) {
+        int n = 0;
+        for (int y = (int) r.y0(); y < (int) r.y1(); y++) {
+            for (int x = (int) r.x0(); x < (int) r.x1(); x++) {
+                if (colour.channelDistance(image.getRGB(x, y) & 0xffffff) <= SAME_COLOUR) {
+                    n++;
+                }
+            }
+        }
+        return n;
+    }
+
     /** Distance in px from (x, y) to the segment from a to b. */
     static double distance(double[] a, double[] b, double x, double y) {
         double t = PickingTest.closest(a, b, new double[] {x, y});
