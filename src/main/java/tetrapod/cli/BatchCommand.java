@@ -123,7 +123,7 @@ final class BatchCommand implements Callable<Integer> {
     }
 
     /** One tower × scenario as analyze does it; every end becomes an outcome with analyze's exit code and line. */
-    private static Outcome analyse(Path model, String shown, Optional<Path> reportFolder, String link,
+    static Outcome analyse(Path model, String shown, Optional<Path> reportFolder, String link,
                                    PictureRenderer pictures) {
         try {
             LoadedModel loaded = LoadedModel.forAnalysis(model);
