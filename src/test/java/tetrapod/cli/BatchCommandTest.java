@@ -154,22 +154,32 @@ class BatchCommandTest {
         assertEquals("9.500", summary(out).get(0).get("max_utilisation"), "taken from the record, not analysed again");
     }
 
-    /** A CSV manifest: paths relative to it, a parameter column as one more scenario, a missing file a bad-input row. */
+    /**
+     * A CSV manifest: paths relative to it, a parameter column as one more scenario, a missing file a
+     * bad-input row, an unstable tower an exit-3 row.
+     */
     @Test
     void csvManifestWithParametersAndAMissingModel(@TempDir Path dir) throws IOException {
         fleet(dir);
         Path csv = dir.resolve("fleet.csv");
-        Files.writeString(csv, "model,loads.wind.basicSpeed\ntowers/a-small.json,30\ntowers/missing.json,\n");
+        Path unstable = Path.of("src/test/resources/load-path/one-face-braced-truss.json").toAbsolutePath();
+        Files.writeString(csv, "model,loads.wind.basicSpeed\ntowers/a-small.json,30\ntowers/missing.json,\n"
+                + unstable + ",\n");
         Path out = dir.resolve("run");
         CliRun run = CliRun.of("batch", csv.toString(), "-o", out.toString());
         assertEquals(ExitCode.DONE, run.exitCode(), run.err());
         List<CSVRecord> rows = summary(out);
-        assertEquals(List.of("base", "parameters", "base"), rows.stream().map(r -> r.get("scenario")).toList());
+        assertEquals(List.of("base", "parameters", "base", "base"), rows.stream().map(r -> r.get("scenario")).toList());
         assertEquals("towers/a-small.json", rows.get(0).get("model"));
         assertTrue(Files.readString(out.resolve("scenarios/parameters/a-small.json")).contains("\"basicSpeed\": 30"));
         assertEquals("2", rows.get(2).get("exit_code"));
         assertTrue(rows.get(2).get("message").contains("missing.json") && rows.get(2).get("message").contains("no such file"),
                 rows.get(2).get("message"));
+        // LostLoadCommandTest's tower: analyze ends it with exit 3, so the batch row has exit class 3 and the free node
+        assertEquals("3", rows.get(3).get("exit_code"), rows.get(3).get("message"));
+        assertEquals("unstable", rows.get(3).get("status"));
+        assertTrue(rows.get(3).get("message").contains("one-face-braced-truss.json: ") && rows.get(3).get("message")
+                .contains("node"), rows.get(3).get("message"));
     }
 
     @Test
