@@ -33,7 +33,7 @@ public final class SummaryPage {
         h.append("<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\"><title>Fleet run: ")
                 .append(esc(manifest)).append("</title>\n<style>body{font:14px/1.4 sans-serif;margin:2em;max-width:80em}"
                 + "table{border-collapse:collapse}td,th{border:1px solid #bbb;padding:2px 6px;text-align:left}"
-                + "td.n{text-align:right}tr.fail td{background:#fde8e8}.caution{border:1px solid #a60;padding:.5em;"
+                + "td.n{text-align:right}td.m{min-width:28em}tr.fail td{background:#fde8e8}.caution{border:1px solid #a60;padding:.5em;"
                 + "background:#fff8e6}</style></head><body>\n");
         h.append("<h1>Fleet run: ").append(esc(manifest)).append("</h1>\n");
         h.append("<p class=\"caution\">Results must be checked by a qualified engineer against the codes that apply"
@@ -73,7 +73,7 @@ public final class SummaryPage {
             for (int k = 5; k <= 15; k++) {
                 t.append(k == 7 || k == 14 ? "<td>" : "<td class=\"n\">").append(esc(c.get(k))).append("</td>");
             }
-            t.append("<td>").append(esc(c.get(4))).append("</td></tr>\n");
+            t.append("<td class=\"m\">").append(esc(c.get(4))).append("</td></tr>\n");
         }
         return t.append("</table>\n").toString();
     }
