@@ -11,12 +11,4 @@ import java.util.Optional;
 public record Scenario(String name, Optional<Path> file, Object patch, Optional<String> unreadable) {
 
     public static final String BASE = "base";
-
-    public static Scenario base() {
-        return new Scenario(BASE, Optional.empty(), null, Optional.empty());
-    }
-
-    public boolean isBase() {
-        return file.isEmpty() && patch == null;
-    }
 }
