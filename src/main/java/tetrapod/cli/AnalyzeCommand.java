@@ -90,15 +90,9 @@ final class AnalyzeCommand implements Callable<Integer> {
             pictures.prepare(PICTURE_WIDTH, PICTURE_HEIGHT);
             watch.end("read, generate, loads");
             try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
-                result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
-                        modes == null ? NaturalModes.DEFAULT_COUNT : modes, loaded.serviceability(),
-                        StageTimes.both(progress, watch));
+                result = analyse(loaded, modes, StageTimes.both(progress, watch));
             }
-            if (modes != null && result.modes().size() < modes) {
-                throw BadInputException.at("--modes", "asked for " + modes + " modes; the structure has only "
-                        + result.modes().size() + " free translations that carry mass");
-            }
-            route = write(loaded, result, outputs.staging(), watch, pictures);
+            route = write(model, document(model, loaded, result), loaded, result, outputs.staging(), watch, pictures);
             outputs.commit();
         }
 
@@ -116,18 +110,37 @@ final class AnalyzeCommand implements Callable<Integer> {
     }
 
     @SuppressWarnings("unchecked")
-    private static Map<String, Object> plainDocument(Map<String, Object> document) {
+    static Map<String, Object> plainDocument(Map<String, Object> document) {
         return (Map<String, Object>) JsonOutput.plain(document);
     }
 
-    /** Writes every output into {@code folder}; returns the line saying what drew tower.png. */
-    private String write(LoadedModel loaded, AnalysisResult result, Path folder, StageTimes watch, PictureRenderer pictures)
+    /**
+     * The analysis of a loaded model as analyze runs it (batch runs the same); {@code modes} null
+     * for the default count.
+     */
+    static AnalysisResult analyse(LoadedModel loaded, Integer modes, tetrapod.common.ProgressListener progress)
             throws Exception {
-        Path resultsFile = folder.resolve("results.json");
+        AnalysisResult result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
+                modes == null ? NaturalModes.DEFAULT_COUNT : modes, loaded.serviceability(), progress);
+        if (modes != null && result.modes().size() < modes) {
+            throw BadInputException.at("--modes", "asked for " + modes + " modes; the structure has only "
+                    + result.modes().size() + " free translations that carry mass");
+        }
+        return result;
+    }
+
+    /** The results document (results.json as plain values) of {@code model}'s analysis. */
+    static Map<String, Object> document(Path model, LoadedModel loaded, AnalysisResult result) throws Exception {
         ResultsDocument.Source source = new ResultsDocument.Source(model.getFileName().toString(),
                 tetrapod.io.Sha256.of(model), new Version().getVersion()[0]);
-        Map<String, Object> document = ResultsDocument.build(loaded.spec(), result,
+        return ResultsDocument.build(loaded.spec(), result,
                 DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec())), source, loaded.responseFactor());
+    }
+
+    /** Writes every output of {@code document} into {@code folder}; returns the line saying what drew tower.png. */
+    static String write(Path model, Map<String, Object> document, LoadedModel loaded, AnalysisResult result,
+                        Path folder, StageTimes watch, PictureRenderer pictures) throws Exception {
+        Path resultsFile = folder.resolve("results.json");
         JsonOutput.write(resultsFile, document);
         // everything else is built from what the file holds, as 'tetrapod report' builds it from the file
         Results results = new Results(plainDocument(ResultsReader.forReport(document)));

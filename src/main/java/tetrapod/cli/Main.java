@@ -12,7 +12,7 @@ import picocli.CommandLine.Option;
         description = "Analysis and checking of four-leg steel lattice towers.%n"
                 + "Results must be checked by a qualified engineer against the codes that apply locally.",
         footer = "%n" + ExitCode.HELP,
-        subcommands = {AnalyzeCommand.class, SizeCommand.class, ValidateCommand.class, NewCommand.class,
+        subcommands = {AnalyzeCommand.class, BatchCommand.class, SizeCommand.class, ValidateCommand.class, NewCommand.class,
                 GeometryCommand.class, RenderCommand.class, ViewCommand.class, ReportCommand.class,
                 CommandLine.HelpCommand.class})
 public final class Main implements Runnable {

@@ -1,0 +1,97 @@
+package tetrapod.batch;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Optional;
+import java.util.stream.Stream;
+import tetrapod.common.BadInputException;
+import tetrapod.io.AtomicFiles;
+import tetrapod.io.JsonOutput;
+import tetrapod.io.PlainJson;
+
+/**
+ * The folder of a fleet run: {@value #MARKER} says a batch run owns it; {@code work/<hash>.json}
+ * holds each finished piece of work, so that a resumed run skips it; {@code scenarios/<scenario>/}
+ * the patched models; {@code reports/<tower>/<scenario>/} the reports when asked for; and the summary.
+ * A folder that holds anything else, or another run's results without {@code --resume}, is refused.
+ */
+public final class RunFolder {
+
+    static final String MARKER = "batch.json";
+    static final String FORMAT = "tetrapod-batch/1";
+
+    private final Path root;
+
+    private RunFolder(Path root) {
+        this.root = root;
+    }
+
+    /** Opens {@code folder} for a run; {@code resume} allows one that holds an earlier run's results. */
+    public static RunFolder open(Path folder, boolean resume, Path manifest, String program)
+            throws BadInputException, IOException {
+        if (Files.exists(folder) && !Files.isDirectory(folder)) {
+            throw BadInputException.at("-o", folder + " is a file, not a folder: choose a folder with -o");
+        }
+        boolean empty = !Files.exists(folder);
+        if (!empty) {
+            try (Stream<Path> entries = Files.list(folder)) {
+                empty = entries.findAny().isEmpty();
+            }
+        }
+        Path marker = folder.resolve(MARKER);
+        if (!empty && !Files.isRegularFile(marker)) {
+            throw BadInputException.at("-o", folder + " holds files that no batch run wrote: choose a new or empty"
+                    + " folder with -o");
+        }
+        if (!empty && !resume) {
+            throw BadInputException.at("-o", folder + " holds the results of an earlier batch run: give --resume to"
+                    + " finish it, or choose a new folder with -o");
+        }
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("format", FORMAT);
+        m.put("program", program);
+        m.put("manifest", manifest.toAbsolutePath().normalize().toString());
+        JsonOutput.write(marker, m);
+        Files.createDirectories(folder.resolve("work"));
+        return new RunFolder(folder);
+    }
+
+    public Path root() {
+        return root;
+    }
+
+    /** Where the patched model of {@code tower} under {@code scenario} is written. */
+    Path patchedModel(String scenario, String towerId) {
+        return root.resolve("scenarios").resolve(scenario).resolve(towerId + ".json");
+    }
+
+    /** The report folder of {@code tower} under {@code scenario}, relative to the run's folder. */
+    static String reportLink(String towerId, String scenario) {
+        return "reports/" + towerId + "/" + scenario;
+    }
+
+    /** A finished piece of work, if an earlier run recorded one. */
+    Optional<Outcome> finished(String hash) {
+        Path file = root.resolve("work").resolve(hash + ".json");
+        if (!Files.isRegularFile(file)) {
+            return Optional.empty();
+        }
+        try {
+            return Optional.of(Outcome.fromMap((Map<?, ?>) PlainJson.read(file)));
+        } catch (BadInputException | RuntimeException unreadable) {
+            return Optional.empty(); // not what this program writes: the work is done again
+        }
+    }
+
+    void record(String hash, Outcome outcome) throws IOException {
+        JsonOutput.write(root.resolve("work").resolve(hash + ".json"), outcome.toMap());
+    }
+
+    void writePatched(Path file, byte[] bytes) throws IOException {
+        AtomicFiles.writeBytes(file, bytes);
+    }
+
+}

@@ -1,0 +1,160 @@
+package tetrapod.cli;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.TreeMap;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+import tetrapod.analysis.AnalysisResult;
+import tetrapod.batch.FleetRun;
+import tetrapod.batch.Manifest;
+import tetrapod.batch.Outcome;
+import tetrapod.batch.ResultFigures;
+import tetrapod.batch.RunFolder;
+import tetrapod.batch.Scenario;
+import tetrapod.batch.SummaryPage;
+import tetrapod.batch.SummaryRow;
+import tetrapod.batch.SummaryTable;
+import tetrapod.common.BadInputException;
+import tetrapod.common.ProgressListener;
+import tetrapod.io.ModelPatches;
+import tetrapod.io.OutputFolder;
+import tetrapod.report.Results;
+import tetrapod.view.PictureRenderer;
+import tetrapod.view.RenderRequest;
+
+/** Fleet re-checks: many towers under many scenarios, each analysed exactly as analyze does it. */
+@Command(name = "batch", mixinStandardHelpOptions = true,
+        description = "Analyse every tower of a manifest (a folder of model files, or a CSV file with a 'model' column of "
+                + "paths relative to it and optional parameter columns) unpatched ('base') and under each scenario "
+                + "(a JSON Merge Patch file, RFC 7386), on every core; writes summary.csv and summary.html into DIR. A "
+                + "model that cannot be analysed is a row with its exit class and message; the run goes on.%n"
+                + "Results must be checked by a qualified engineer against the codes that apply locally.")
+final class BatchCommand implements Callable<Integer> {
+
+    @Parameters(paramLabel = "MANIFEST", description = "A folder of model files (*.json) or a CSV manifest.")
+    Path manifest;
+
+    @Option(names = {"-o", "--output"}, paramLabel = "DIR", required = true,
+            description = "Folder of the run: new or empty, or an earlier run's with --resume.")
+    Path output;
+
+    @Option(names = "--scenario", paramLabel = "PATCH.json",
+            description = "A JSON Merge Patch applied to every tower; named by its file name. Repeatable.")
+    List<Path> scenarios = new ArrayList<>();
+
+    @Option(names = "--resume", description = "Continue an earlier run in DIR: work it finished is not done again.")
+    boolean resume;
+
+    @Option(names = "--threads", paramLabel = "N",
+            description = "Analyses run at once (default: the number of processors).")
+    Integer threads;
+
+    @Option(names = "--reports", description = "Also write each tower's full analyze output (report.html, results.json,"
+            + " CSV tables, tower.png) under DIR/reports/<tower>/<scenario>/, linked from summary.html.")
+    boolean reports;
+
+    @Option(names = {"-q", "--quiet"}, description = "No progress bar (there is none anyway when the output is not a"
+            + " terminal).")
+    boolean quiet;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintWriter out = spec.commandLine().getOut();
+        int pool = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
+        if (pool < 1) {
+            throw BadInputException.at("--threads", "must be at least 1, was " + pool);
+        }
+        Manifest towers = Manifest.read(manifest);
+        List<Scenario> patches = scenarios(scenarios);
+        String program = new Version().getVersion()[0];
+        RunFolder folder = RunFolder.open(output, resume, manifest, program);
+        List<SummaryRow> rows;
+        try (PictureRenderer pictures = reports ? PictureRenderer.start(RenderRequest.ALL_ROUTES) : null;
+             ProgressBars progress = ProgressBars.forCommand(quiet)) {
+            rows = FleetRun.run(towers, patches, folder, pool, reports, program,
+                    (model, reportFolder, link) -> analyse(model, shown(model), reportFolder, link, pictures), progress);
+        }
+        SummaryTable.write(output.resolve(SummaryTable.FILE), rows);
+        SummaryPage.write(output.resolve(SummaryPage.FILE), rows, manifest.toString());
+        Map<String, Integer> statuses = new TreeMap<>();
+        rows.forEach(r -> statuses.merge(r.outcome().status(), 1, Integer::sum));
+        out.println(rows.size() + " towers × scenarios (" + towers.towers().size() + " towers): " + statuses.entrySet()
+                .stream().map(e -> e.getValue() + " " + e.getKey()).reduce((a, b) -> a + ", " + b).orElse(""));
+        out.println("summary written to " + output + ": " + SummaryTable.FILE + ", " + SummaryPage.FILE);
+        out.println("Results must be checked by a qualified engineer against the codes that apply locally.");
+        return ExitCode.DONE;
+    }
+
+    /** The scenario patches, named by their file names; a file that cannot be read makes bad-input rows. */
+    private static List<Scenario> scenarios(List<Path> files) throws BadInputException {
+        List<Scenario> out = new ArrayList<>();
+        Set<String> names = new HashSet<>(Set.of(Scenario.BASE, Manifest.PARAMETERS));
+        for (Path f : files) {
+            String file = f.getFileName() == null ? "" : f.getFileName().toString();
+            String name = (file.endsWith(".json") ? file.substring(0, file.length() - 5) : file)
+                    .replaceAll("[^A-Za-z0-9._-]", "_");
+            if (name.isEmpty() || name.chars().allMatch(c -> c == '.') || !names.add(name)) {
+                throw BadInputException.at("--scenario", "the scenario name '" + name + "' (from " + f + ") is used "
+                        + "twice or is reserved (base, parameters): rename the patch file");
+            }
+            try {
+                out.add(new Scenario(name, Optional.of(f), ModelPatches.readPatch(f), Optional.empty()));
+            } catch (BadInputException e) {
+                out.add(new Scenario(name, Optional.of(f), null, Optional.of(f + ": " + e.problems().get(0)
+                        + more(e.problems().size() - 1))));
+            }
+        }
+        return out;
+    }
+
+    /** One tower × scenario as analyze does it; every end becomes an outcome with analyze's exit code and line. */
+    static Outcome analyse(Path model, String shown, Optional<Path> reportFolder, String link,
+                                   PictureRenderer pictures) {
+        try {
+            LoadedModel loaded = LoadedModel.forAnalysis(model);
+            AnalysisResult result = AnalyzeCommand.analyse(loaded, null, ProgressListener.NONE);
+            Map<String, Object> document = AnalyzeCommand.document(model, loaded, result);
+            if (reportFolder.isPresent()) {
+                try (OutputFolder outputs = OutputFolder.open(reportFolder.get(), AnalyzeCommand.OUTPUTS)) {
+                    AnalyzeCommand.write(model, document, loaded, result, outputs.staging(), new StageTimes(), pictures);
+                    outputs.commit();
+                }
+            }
+            return Outcome.done(ResultFigures.of(new Results(AnalyzeCommand.plainDocument(document))),
+                    reportFolder.isPresent() ? link : null);
+        } catch (Throwable t) {
+            StringWriter text = new StringWriter();
+            int code = Failures.report(t, new PrintWriter(text), false);
+            List<String> lines = text.toString().lines().filter(l -> l.startsWith("error: ") || l.startsWith("internal"))
+                    .toList();
+            String first = lines.isEmpty() ? t.toString() : lines.get(0).replaceFirst("^error: ", "");
+            return Outcome.failed(code, shown + ": " + first + more(lines.size() - 1));
+        }
+    }
+
+    /** A model file as a row names it: a patched model relative to the run's folder (where summary.csv is). */
+    private String shown(Path model) {
+        Path root = output.toAbsolutePath().normalize();
+        Path file = model.toAbsolutePath().normalize();
+        return file.startsWith(root) ? root.relativize(file).toString() : model.toString();
+    }
+
+    private static String more(int others) {
+        return others <= 0 ? "" : " (and " + others + " more problem" + (others == 1 ? "" : "s") + ")";
+    }
+}
