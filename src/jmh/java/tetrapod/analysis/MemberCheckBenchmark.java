@@ -144,7 +144,7 @@ public class MemberCheckBenchmark {
                     forces = MemberForces.axial(axial[m]);
                 } else {
                     responses.endForces(m, w, ends);
-                    forces = new MemberForces(axial[m], ends[4], ends[10], ends[5], ends[11]);
+                    forces = MemberForces.ofEndActions(axial[m], ends);
                 }
                 MemberCheckResult r = checker.check(member.id(), forces, id -> axial[index.memberIndex(id)]);
                 sum += r.utilisation();

@@ -25,6 +25,14 @@ public record MemberForces(double axial, double myI, double myJ, double mzI, dou
         return new MemberForces(n, 0, 0, 0, 0);
     }
 
+    /**
+     * The forces from the 12 end actions of the stiffness method in local axes, at i (fx, fy, fz,
+     * mx, my, mz) then at j, with the axial force {@code axial} (N, positive in tension).
+     */
+    public static MemberForces ofEndActions(double axial, double[] ends) {
+        return new MemberForces(axial, ends[4], ends[10], ends[5], ends[11]);
+    }
+
     public boolean inTension() {
         return axial > 0;
     }

@@ -206,8 +206,7 @@ public final class FastEnvelope {
                     forces = MemberForces.axial(axial[m]);
                 } else {
                     responses.endForces(m, weights, ends);
-                    // End actions at i (fx..mz) then at j: my is component 4, mz component 5.
-                    forces = new MemberForces(axial[m], ends[4], ends[10], ends[5], ends[11]);
+                    forces = MemberForces.ofEndActions(axial[m], ends);
                 }
                 BucklingLength lengths = maskable[m] ? lengths(m, mask)
                         : buckling.forCase(member.id(), id -> axial[index.get(id)]);

@@ -73,7 +73,7 @@ public final class CriticalLoad {
         }
         double[] first = b.clone();
         system.solveFree(first);
-        double norm = Math.sqrt(dot(first, b));
+        double norm = Math.sqrt(SparseKernels.dot(first, b));
         v.add(scaled(first, 1 / norm));
         kv.add(scaled(b, 1 / norm));
         double mu = 0;
@@ -81,19 +81,19 @@ public final class CriticalLoad {
         for (int j = 0; j < steps; j++) {
             double[] g = new double[n];
             SparseKernels.multiply(minusKg, v.get(j), g);           // −K_G v_j
-            alpha[j] = dot(v.get(j), g);
+            alpha[j] = SparseKernels.dot(v.get(j), g);
             scale = Math.max(scale, Math.abs(alpha[j]));
             double[] w = g.clone();
             system.solveFree(w);                                      // w = K⁻¹ (−K_G) v_j, K w = g
             double[] kw = g;
             for (int pass = 0; pass < 2; pass++) {                    // full reorthogonalisation, twice
                 for (int i = 0; i <= j; i++) {
-                    double c = dot(kv.get(i), w);
+                    double c = SparseKernels.dot(kv.get(i), w);
                     axpy(-c, v.get(i), w);
                     axpy(-c, kv.get(i), kw);
                 }
             }
-            beta[j] = Math.sqrt(Math.max(dot(w, kw), 0));
+            beta[j] = Math.sqrt(Math.max(SparseKernels.dot(w, kw), 0));
             scale = Math.max(scale, beta[j]);
             boolean exhausted = beta[j] <= 1e-14 * Math.max(Math.abs(alpha[j]), Double.MIN_NORMAL) || j + 1 == steps;
             if (exhausted || (j + 1) % CHECK_EVERY == 0) {
@@ -180,14 +180,6 @@ public final class CriticalLoad {
         DMatrixSparseCSC csc = DConvertMatrixStruct.convert(t, (DMatrixSparseCSC) null);
         CommonOps_DSCC.duplicatesAdd(csc, null);
         return csc;
-    }
-
-    private static double dot(double[] a, double[] b) {
-        double s = 0;
-        for (int e = 0; e < a.length; e++) {
-            s += a[e] * b[e];
-        }
-        return s;
     }
 
     /** Member axial forces of a solution in frame member order, N. */

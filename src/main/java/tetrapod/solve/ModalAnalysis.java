@@ -104,8 +104,8 @@ public final class ModalAnalysis {
                 double[] mxi = times(m, x[i]);
                 double[] myi = times(m, y[i]);
                 for (int j = i; j < q; j++) {
-                    kr[i * q + j] = kr[j * q + i] = dot(y[j], mxi);  // Yᵀ K Y = Yᵀ M X, as K Y = M X
-                    mr[i * q + j] = mr[j * q + i] = dot(y[j], myi);
+                    kr[i * q + j] = kr[j * q + i] = SparseKernels.dot(y[j], mxi);  // Yᵀ K Y = Yᵀ M X, as K Y = M X
+                    mr[i * q + j] = mr[j * q + i] = SparseKernels.dot(y[j], myi);
                 }
             }
             RitzProblem.symmetrise(kr, q);
@@ -162,14 +162,6 @@ public final class ModalAnalysis {
             out[e] = m[e] * v[e];
         }
         return out;
-    }
-
-    private static double dot(double[] a, double[] b) {
-        double s = 0;
-        for (int e = 0; e < a.length; e++) {
-            s += a[e] * b[e];
-        }
-        return s;
     }
 
     /** A free-DOF vector as nodes × 6 in tower axes (eliminated DOFs 0). */

@@ -93,6 +93,15 @@ final class SparseKernels {
         }
     }
 
+    /** aᵀ b of two dense vectors of the same length. */
+    static double dot(double[] a, double[] b) {
+        double s = 0;
+        for (int e = 0; e < a.length; e++) {
+            s += a[e] * b[e];
+        }
+        return s;
+    }
+
     /** The diagonal of A (0 where not stored), new array. */
     static double[] diagonal(DMatrixSparseCSC a) {
         double[] d = new double[a.numCols];

@@ -164,7 +164,7 @@ class MemberSweepTest {
                     forces = MemberForces.axial(axial[m]);
                 } else {
                     responses.endForces(m, weights, ends);
-                    forces = new MemberForces(axial[m], ends[4], ends[10], ends[5], ends[11]);
+                    forces = MemberForces.ofEndActions(axial[m], ends);
                 }
                 MemberCheckResult checked = checker.check(member.id(), forces, id -> axial[model.memberIndex(id)]);
                 envelopes[m] = envelopes[m].with(checked, forces, key.id(), key.azimuthDeg());
