@@ -88,9 +88,26 @@ public final class Analysis {
     public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
                                      Optional<ServiceabilityPlan> serviceability, ProgressListener progress,
                                      int threads) throws UnstableStructureException {
-        StructuralModel model = StructuralModel.of(tower.frame());
-        progress.progress("prepare model", 1, 1);
-        FactoredSystem system = Solver.factor(model, progress);
+        return run(tower, loads, checks, modes, serviceability, Optional.empty(), progress, threads);
+    }
+
+    /**
+     * As {@link #run(Tower, TowerLoads, ChecksSpec, int, Optional, ProgressListener, int)}, with the
+     * tower's stiffness already factorised ({@code factored}: the one the response factor's modes were
+     * computed with; empty to factorise it here). The factor is the same either way.
+     */
+    public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
+                                     Optional<ServiceabilityPlan> serviceability, Optional<FactoredSystem> factored,
+                                     ProgressListener progress, int threads) throws UnstableStructureException {
+        FactoredSystem system;
+        if (factored.isPresent()) {
+            system = factored.get();
+        } else {
+            StructuralModel model = StructuralModel.of(tower.frame());
+            progress.progress("prepare model", 1, 1);
+            system = Solver.factor(model, progress);
+        }
+        StructuralModel model = system.model();
         LoadBasis basis = loads.basis();
         List<LoadVector> vectors = new ArrayList<>(basis.size());
         for (LoadComponent c : basis.components()) {
