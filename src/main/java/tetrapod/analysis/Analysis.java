@@ -88,9 +88,26 @@ public final class Analysis {
     public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
                                      Optional<ServiceabilityPlan> serviceability, ProgressListener progress,
                                      int threads) throws UnstableStructureException {
-        StructuralModel model = StructuralModel.of(tower.frame());
-        progress.progress("prepare model", 1, 1);
-        FactoredSystem system = Solver.factor(model, progress);
+        return run(tower, loads, checks, modes, serviceability, Optional.empty(), progress, threads);
+    }
+
+    /**
+     * As {@link #run(Tower, TowerLoads, ChecksSpec, int, Optional, ProgressListener, int)}, with the
+     * tower's stiffness already factorised ({@code factored}: the one the response factor's modes were
+     * computed with; empty to factorise it here). The factor is the same either way.
+     */
+    public static AnalysisResult run(Tower tower, TowerLoads loads, ChecksSpec checks, int modes,
+                                     Optional<ServiceabilityPlan> serviceability, Optional<FactoredSystem> factored,
+                                     ProgressListener progress, int threads) throws UnstableStructureException {
+        FactoredSystem system;
+        if (factored.isPresent()) {
+            system = factored.get();
+        } else {
+            StructuralModel model = StructuralModel.of(tower.frame());
+            progress.progress("prepare model", 1, 1);
+            system = Solver.factor(model, progress);
+        }
+        StructuralModel model = system.model();
         LoadBasis basis = loads.basis();
         List<LoadVector> vectors = new ArrayList<>(basis.size());
         for (LoadComponent c : basis.components()) {
@@ -195,51 +212,129 @@ public final class Analysis {
             f.checks().values().forEach(g -> addGoverning(reported, keys, g.where()));
         }
         List<CaseKey> toSolve = new ArrayList<>(reported.values());
-        SolvedCase[] solvedCases = new SolvedCase[toSolve.size()];
-        // each case is solved on its own (the factor is only read): on every core, a few at a time for the progress
-        try (Workers workers = new Workers(threads)) {
-            int batch = 2 * threads;
-            for (int from = 0; from < toSolve.size(); from += batch) {
-                int start = from;
-                int count = Math.min(batch, toSolve.size() - from);
-                workers.run(count, t -> solvedCases[start + t] = inFull(system, loads, toSolve.get(start + t), sway,
-                        firstOrderAlpha));
-                progress.progress(solving, start + count, toSolve.size());
-            }
-        } catch (Unstable e) {
-            throw e.cause;
-        }
-        List<SolvedCase> cases = List.of(solvedCases);
+        List<SolvedCase> cases = inFull(system, loads, toSolve, sway, firstOrderAlpha, threads, solving, progress);
         return new Pass(sweep, cases, legBases, members, foundations, total);
     }
 
+    /** Cases whose α_cr are found together, per thread (each keeps its Lanczos vectors meanwhile). */
+    private static final int ALPHA_BLOCK = 8;
+
     /**
-     * One reported case solved in full, its wind multiplied by {@code sway}, with the α_cr of its
-     * first-order forces.
+     * The reported cases solved in full, their wind multiplied by {@code sway}, each with the α_cr of
+     * its first-order forces: every case solved on its own (the factor is only read), on every core;
+     * then the α_cr still to find, a few cases together on each core ({@link CriticalLoad#factors},
+     * the same bits as one at a time). A case that fails stops the run with the error it met first
+     * (its solve, its α_cr ≤ 1), the first such case in order.
      *
-     * @throws Unstable carrying the {@link UnstableStructureException} of the case
+     * @throws UnstableStructureException of the first case that fails
      */
-    private static SolvedCase inFull(FactoredSystem system, TowerLoads loads, CaseKey key, double sway,
-                                     Map<String, Double> firstOrderAlpha) {
-        try {
-            double wind = key.combination().hasWind() ? sway : 1.0;
-            Double alpha = firstOrderAlpha.get(key.id());
-            if (alpha == null && wind != 1.0) {
-                alpha = solveCase(system, loads.loadCase(key)).alphaCr();   // a case that governs only amplified
+    private static List<SolvedCase> inFull(FactoredSystem system, TowerLoads loads, List<CaseKey> keys, double sway,
+                                           Map<String, Double> firstOrderAlpha, int threads, String solving,
+                                           ProgressListener progress) throws UnstableStructureException {
+        int count = keys.size();
+        InFull[] work = new InFull[count];
+        try (Workers workers = new Workers(threads)) {
+            workers.run(count, k -> work[k] = InFull.solve(system, loads, keys.get(k), sway, firstOrderAlpha));
+            progress.progress(solving, 0, count);
+            List<Integer> open = new ArrayList<>();
+            for (int k = 0; k < count; k++) {
+                if (work[k].axial != null) {
+                    open.add(k);
+                }
             }
-            return solveCase(system, loads.loadCase(key, sway), wind, alpha);
-        } catch (UnstableStructureException e) {
-            throw new Unstable(e);
+            int groups = Math.max(Math.min(threads, open.size()), (open.size() + ALPHA_BLOCK - 1) / ALPHA_BLOCK);
+            int size = groups == 0 ? 0 : (open.size() + groups - 1) / groups;
+            for (int round = 0; round < groups; round += threads) {
+                int first = round;
+                int inRound = Math.min(threads, groups - round);
+                workers.run(inRound, t -> {
+                    List<Integer> mine = open.subList(Math.min(open.size(), (first + t) * size),
+                            Math.min(open.size(), (first + t + 1) * size));
+                    List<double[]> axial = new ArrayList<>(mine.size());
+                    mine.forEach(k -> axial.add(work[k].axial));
+                    double[] alpha = CriticalLoad.factors(system, axial);
+                    for (int i = 0; i < mine.size(); i++) {
+                        work[mine.get(i)].alphaCr = alpha[i];
+                    }
+                });
+                progress.progress(solving, Math.min(open.size(), (round + inRound) * size), open.size());
+            }
+        }
+        List<SolvedCase> out = new ArrayList<>(count);
+        for (InFull w : work) {
+            out.add(w.result());
+        }
+        progress.progress(solving, count, count);
+        return out;
+    }
+
+    /** One reported case solved, with what its α_cr needs or the α_cr it keeps, and any failure met so far. */
+    private static final class InFull {
+        private LoadCase loadCase;
+        private Solution solution;
+        private double wind;
+        private double[] axial;                 // the first-order forces whose α_cr is still to find, else null
+        private double alphaCr = Double.NaN;
+        private UnstableStructureException before;      // met before the α_cr
+        private UnstableStructureException after;       // met after it (an amplified case's own solve)
+
+        /** The case's own solve, and the first-order one first when only the amplified case was reported. */
+        static InFull solve(FactoredSystem system, TowerLoads loads, CaseKey key, double sway,
+                            Map<String, Double> firstOrderAlpha) {
+            InFull w = new InFull();
+            w.wind = key.combination().hasWind() ? sway : 1.0;
+            w.loadCase = loads.loadCase(key, sway);
+            Double given = firstOrderAlpha.get(key.id());
+            try {
+                if (given == null && w.wind != 1.0) {
+                    // a case that governs only amplified: the α_cr of its first-order forces
+                    LoadCase firstOrder = loads.loadCase(key);
+                    Solution s = system.solve(new LoadVector(firstOrder.id(), firstOrder.loads()));
+                    s.requireLoadCarried(firstOrder.id());
+                    w.axial = CriticalLoad.axialForces(s);
+                }
+            } catch (UnstableStructureException e) {
+                w.before = e;
+                return w;
+            }
+            try {
+                w.solution = system.solve(new LoadVector(w.loadCase.id(), w.loadCase.loads()));
+                w.solution.requireLoadCarried(w.loadCase.id());
+            } catch (UnstableStructureException e) {
+                if (w.axial != null) {
+                    w.after = e;
+                } else {
+                    w.before = e;
+                    return w;
+                }
+            }
+            if (given != null) {
+                w.alphaCr = given;
+            } else if (w.axial == null) {
+                w.axial = CriticalLoad.axialForces(w.solution);
+            }
+            return w;
+        }
+
+        SolvedCase result() throws UnstableStructureException {
+            if (before != null) {
+                throw before;
+            }
+            requireStable(loadCase.id(), alphaCr);
+            if (after != null) {
+                throw after;
+            }
+            return new SolvedCase(loadCase.id(), loadCase.combination(), loadCase.azimuthDeg(), solution, alphaCr, wind);
         }
     }
 
-    /** An unstable case out of a worker thread (the workers take no checked exceptions). */
-    private static final class Unstable extends RuntimeException {
-        private final UnstableStructureException cause;
-
-        Unstable(UnstableStructureException cause) {
-            super(cause.getMessage(), cause, false, false);
-            this.cause = cause;
+    /** @throws UnstableStructureException when α_cr ≤ 1: the structure buckles as a whole under the case's forces */
+    private static void requireStable(String caseId, double alphaCr) throws UnstableStructureException {
+        if (alphaCr <= 1) {
+            throw new UnstableStructureException(String.format(java.util.Locale.ROOT, "unstable structure: in case '%s' "
+                    + "the elastic critical load factor α_cr is %.3f (≤ 1): the structure buckles as a whole under "
+                    + "these forces (EN 1993-1-1 5.2.1); stiffen the legs or the bracing", caseId, alphaCr),
+                    java.util.List.of());
         }
     }
 
@@ -296,12 +391,7 @@ public final class Analysis {
         solution.requireLoadCarried(loadCase.id());
         double alphaCr = firstOrderAlpha != null ? firstOrderAlpha
                 : CriticalLoad.factor(system, CriticalLoad.axialForces(solution));
-        if (alphaCr <= 1) {
-            throw new UnstableStructureException(String.format(java.util.Locale.ROOT, "unstable structure: in case '%s' "
-                    + "the elastic critical load factor α_cr is %.3f (≤ 1): the structure buckles as a whole under "
-                    + "these forces (EN 1993-1-1 5.2.1); stiffen the legs or the bracing", loadCase.id(), alphaCr),
-                    java.util.List.of());
-        }
+        requireStable(loadCase.id(), alphaCr);
         return new SolvedCase(loadCase.id(), loadCase.combination(), loadCase.azimuthDeg(), solution, alphaCr,
                 windAmplification);
     }

@@ -1,7 +1,10 @@
 package tetrapod.analysis;
 
+import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
+import java.util.Set;
+import tetrapod.check.Extreme;
 import tetrapod.check.FoundationEnvelope;
 import tetrapod.check.MemberEnvelope;
 import tetrapod.generate.Tower;
@@ -63,6 +66,29 @@ public record AnalysisResult(Tower tower, TowerLoads loads, StructuralModel mode
     /** The cases in which the hand method is compared for compression and for uplift; empty without a comparison. */
     public Optional<HandGoverning> handGoverning() {
         return HandGoverning.of(hand);
+    }
+
+    /**
+     * The ids of the cases that govern a leg base reaction (largest compression, uplift, shear) or a
+     * footing check: those whose vectors results.json writes (docs/methods.md, "The cases written in full").
+     */
+    public Set<String> governingCaseIds() {
+        Set<String> ids = new HashSet<>();
+        for (LegBaseExtremes leg : legBases) {
+            for (Extreme e : List.of(leg.compression(), leg.uplift(), leg.shear())) {
+                if (e != null && e.caseId() != null) {
+                    ids.add(e.caseId());
+                }
+            }
+        }
+        for (FoundationEnvelope f : foundations) {
+            f.checks().values().forEach(g -> {
+                if (g.where() != null && g.where().caseId() != null) {
+                    ids.add(g.where().caseId());
+                }
+            });
+        }
+        return ids;
     }
 
     /** The largest utilisation of any member or footing. */

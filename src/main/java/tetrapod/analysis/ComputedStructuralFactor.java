@@ -60,6 +60,16 @@ public final class ComputedStructuralFactor {
      */
     public static Resolved resolve(TowerSpec spec, Tower tower, TowerLoads formed, boolean alsoWhenGiven)
             throws BadInputException, UnstableStructureException {
+        return resolve(spec, tower, formed, alsoWhenGiven, null);
+    }
+
+    /**
+     * As {@link #resolve(TowerSpec, Tower, TowerLoads, boolean)}, with the stiffness of {@code tower}
+     * already factorised ({@code factored}, or null to factorise it here when the modes are needed):
+     * the analysis that follows uses the same factor (issue 15: it was done twice).
+     */
+    public static Resolved resolve(TowerSpec spec, Tower tower, TowerLoads formed, boolean alsoWhenGiven,
+                                   FactoredSystem factored) throws BadInputException, UnstableStructureException {
         WindSpec wind = spec.loads().wind();
         boolean en = wind instanceof WindSpec.En1991;
         boolean us = wind instanceof WindSpec.Asce7;
@@ -70,7 +80,7 @@ public final class ComputedStructuralFactor {
         }
         TowerSpec unit = toCompute ? withFactor(spec, 1.0) : spec;
         TowerLoads loads = formed != null ? formed : TowerLoads.build(tower, unit.loads());
-        FactoredSystem system = Solver.factor(StructuralModel.of(tower.frame()));
+        FactoredSystem system = factored != null ? factored : Solver.factor(StructuralModel.of(tower.frame()));
         List<NaturalMode> modes = NaturalModes.of(system, loads.basis(), MODES);
         if (modes.isEmpty()) {
             if (!toCompute) {

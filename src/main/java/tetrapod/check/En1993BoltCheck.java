@@ -77,18 +77,18 @@ public final class En1993BoltCheck implements BoltCheck {
 
         @Override
         public List<CheckResult> check(double force) {
-            CheckResult shear = new CheckResult(CheckMode.BOLT_SHEAR, shear(force),
+            CheckResult shear = CheckResult.noted(CheckMode.BOLT_SHEAR, shear(force),
                     "EN 1993-1-8 3.6.1, Table 3.4 (F_v,Rd)",
-                    String.format(Locale.ROOT, "%d × M%.0f %s, F_v,Rd = %.1f kN per plane%s", c.bolts(), c.diameter() * 1e3,
+                    () -> String.format(Locale.ROOT, "%d × M%.0f %s, F_v,Rd = %.1f kN per plane%s", c.bolts(), c.diameter() * 1e3,
                             c.grade().jsonName(), fvRd / 1e3, c.assumed() ? " (assumed connection)" : ""));
-            CheckResult bearing = new CheckResult(CheckMode.BOLT_BEARING, bearing(force),
+            CheckResult bearing = CheckResult.noted(CheckMode.BOLT_BEARING, bearing(force),
                     "EN 1993-1-8 3.6.1, Table 3.4 (F_b,Rd)",
-                    String.format(Locale.ROOT, "k1 = %.3f, α_b = %.3f, F_b,Rd = %.1f kN per bolt, t = %.1f mm%s", k1, alphaB,
+                    () -> String.format(Locale.ROOT, "k1 = %.3f, α_b = %.3f, F_b,Rd = %.1f kN per bolt, t = %.1f mm%s", k1, alphaB,
                             fbRd / 1e3, thickness * 1e3,
                             lapLimit ? ", single-bolt lap limit 1.5 f_u d t/γM2 (3.6.1 (10))" : ""));
-            CheckResult detailing = new CheckResult(CheckMode.BOLT_SPACING, spacing,
+            CheckResult detailing = CheckResult.noted(CheckMode.BOLT_SPACING, spacing,
                     "EN 1993-1-8 3.5, Table 3.3 (minimum e1, e2 ≥ 1.2 d0, p1 ≥ 2.2 d0)",
-                    String.format(Locale.ROOT, "d0 = %.0f mm, e1 = %.0f, e2 = %.0f, p1 = %.0f mm", c.holeDiameter() * 1e3,
+                    () -> String.format(Locale.ROOT, "d0 = %.0f mm, e1 = %.0f, e2 = %.0f, p1 = %.0f mm", c.holeDiameter() * 1e3,
                             c.endDistance() * 1e3, c.edgeDistance() * 1e3, c.pitch() * 1e3));
             return List.of(shear, bearing, detailing);
         }

@@ -220,30 +220,30 @@ final class En1993Resistance implements MemberResistance {
                     "EN 1993-1-1 5.5.2, Table 5.2", cls.note()));
         }
         if (f.axial() >= 0) {
-            out.add(new CheckResult(CheckMode.TENSION, tension(f.tension()), "EN 1993-1-1 6.2.3 (6.6)",
-                    String.format(Locale.ROOT, "N_pl,Rd = %.1f kN", nplRd / 1e3)));
+            out.add(CheckResult.noted(CheckMode.TENSION, tension(f.tension()), "EN 1993-1-1 6.2.3 (6.6)",
+                    () -> String.format(Locale.ROOT, "N_pl,Rd = %.1f kN", nplRd / 1e3)));
             if (net != null) {
                 out.add(net.check(f.tension()));
             }
         } else {
-            out.add(new CheckResult(CheckMode.COMPRESSION, compression(f.compression()),
+            out.add(CheckResult.noted(CheckMode.COMPRESSION, compression(f.compression()),
                     cls.sectionClass() == 4 ? "EN 1993-1-1 6.2.4 (6.11); EN 1993-1-5 4.4" : "EN 1993-1-1 6.2.4 (6.10)",
-                    String.format(Locale.ROOT, "N_c,Rd = %.1f kN, %s", ncRd / 1e3, cls.note())));
+                    () -> String.format(Locale.ROOT, "N_c,Rd = %.1f kN, %s", ncRd / 1e3, cls.note())));
             out.add(bucklingCheck(f.compression()));
             if (!Double.isNaN(sigmaPerNewton)) {
                 out.add(eccentricityCheck(f.compression()));
             }
         }
         if (f.hasMoments() && bending) {
-            out.add(new CheckResult(CheckMode.COMBINED, crossSection(f.axial(), f.maxMomentY(), f.maxMomentZ()),
+            out.add(CheckResult.noted(CheckMode.COMBINED, crossSection(f.axial(), f.maxMomentY(), f.maxMomentZ()),
                     "EN 1993-1-1 6.2.1 (7) (6.2)",
-                    String.format(Locale.ROOT, "My = %.2f kN·m, Mz = %.2f kN·m, W_el,u = %.1f cm³, W_el,v = %.1f cm³",
+                    () -> String.format(Locale.ROOT, "My = %.2f kN·m, Mz = %.2f kN·m, W_el,u = %.1f cm³, W_el,v = %.1f cm³",
                             f.maxMomentY() / 1e3, f.maxMomentZ() / 1e3, wy * 1e6, wz * 1e6)));
             if (f.inCompression()) {
                 double eq61 = eq661(f.compression(), f.maxMomentY(), f.maxMomentZ(), f.psiY(), f.psiZ());
                 double eq62 = eq662(f.compression(), f.maxMomentY(), f.maxMomentZ(), f.psiY(), f.psiZ());
-                out.add(new CheckResult(CheckMode.COMBINED, Math.max(eq61, eq62), "EN 1993-1-1 6.3.3 (6.61), (6.62), Annex B",
-                        String.format(Locale.ROOT, "(6.61) %.3f, (6.62) %.3f; C_my = %.2f, C_mz = %.2f, χ_LT = 1 (assumed)",
+                out.add(CheckResult.noted(CheckMode.COMBINED, Math.max(eq61, eq62), "EN 1993-1-1 6.3.3 (6.61), (6.62), Annex B",
+                        () -> String.format(Locale.ROOT, "(6.61) %.3f, (6.62) %.3f; C_my = %.2f, C_mz = %.2f, χ_LT = 1 (assumed)",
                                 eq61, eq62, cm(f.psiY()), cm(f.psiZ()))));
             }
         }
@@ -259,8 +259,8 @@ final class En1993Resistance implements MemberResistance {
         String clause = "EN 1993-1-1 6.3.1 (6.46)-(6.49), Table 6.2 curve " + curve.name().toLowerCase(Locale.ROOT)
                 + (annexBB ? "; BB.1.2 (BB.1)" : oneLegWeb ? "; BB.1.2 (2) (one bolt: L_cr = L)" : "")
                 + (member.role() == Role.LEG ? "; EN 1993-3-1 H.2 (2)" : "");
-        return new CheckResult(CheckMode.COMPRESSION_BUCKLING, buckling(compression), clause,
-                String.format(Locale.ROOT, "L_v = %.3f m, λ̄v = %.3f → %.3f, χv = %.3f; L_yz = %.3f m, λ̄ = %.3f → %.3f,"
+        return CheckResult.noted(CheckMode.COMPRESSION_BUCKLING, buckling(compression), clause,
+                () -> String.format(Locale.ROOT, "L_v = %.3f m, λ̄v = %.3f → %.3f, χv = %.3f; L_yz = %.3f m, λ̄ = %.3f → %.3f,"
                                 + " χ = %.3f; N_b,Rd = %.1f kN", buckling.minorAxis().length(), lambdaV, effV, chiV,
                         buckling.geometricAxis().length(), lambdaG, effG, chiG, nbRd / 1e3));
     }
@@ -275,8 +275,8 @@ final class En1993Resistance implements MemberResistance {
     private CheckResult eccentricityCheck(double compression) {
         AngleGeometry g = new AngleGeometry((SectionShape.Angle) member.section().shape(), member.section().properties());
         double sigma = compression * sigmaPerNewton;
-        return new CheckResult(CheckMode.COMBINED, eccentricity(compression), "EN 1993-1-1 BB.1.2 (2), 6.2.9.2 (6.42)",
-                String.format(Locale.ROOT, "one bolt: force on the bolt line, out-of-plane eccentricity %.1f mm,"
+        return CheckResult.noted(CheckMode.COMBINED, eccentricity(compression), "EN 1993-1-1 BB.1.2 (2), 6.2.9.2 (6.42)",
+                () -> String.format(Locale.ROOT, "one bolt: force on the bolt line, out-of-plane eccentricity %.1f mm,"
                         + " σ_max = %.1f MPa", g.outOfPlaneEccentricity(connection.connectedLeg()) * 1e3, sigma / 1e6));
     }
 
@@ -328,22 +328,17 @@ final class En1993Resistance implements MemberResistance {
         CheckResult check(double n) {
             String assumed = c.assumed() ? " (assumed connection)" : "";
             if (bolts == 0) {
-                return new CheckResult(CheckMode.NET_SECTION, ratio(n), "EN 1993-1-1 6.2.3 (6.7)",
-                        String.format(Locale.ROOT, "%d hole(s) of %.0f mm, A_net = %.0f mm², N_u,Rd = %.1f kN%s",
+                return CheckResult.noted(CheckMode.NET_SECTION, ratio(n), "EN 1993-1-1 6.2.3 (6.7)",
+                        () -> String.format(Locale.ROOT, "%d hole(s) of %.0f mm, A_net = %.0f mm², N_u,Rd = %.1f kN%s",
                                 c.holesInSection(), c.holeDiameter() * 1e3, netArea * 1e6, resistance / 1e3, assumed));
             }
-            String clause;
-            String note;
-            if (bolts == 1) {
-                clause = "EN 1993-1-8 3.10.3 (3.11)";
-                note = String.format(Locale.ROOT, "one bolt, e2 = %.0f mm", c.edgeDistance() * 1e3);
-            } else {
-                clause = bolts == 2 ? "EN 1993-1-8 3.10.3 (3.12), Table 3.8" : "EN 1993-1-8 3.10.3 (3.13), Table 3.8";
-                note = String.format(Locale.ROOT, "%d bolts, p1/d0 = %.2f, β = %.3f, A_net = %.0f mm²", bolts,
-                        c.pitch() / c.holeDiameter(), beta, netArea * 1e6);
-            }
-            return new CheckResult(CheckMode.NET_SECTION, ratio(n), clause,
-                    note + String.format(Locale.ROOT, ", N_u,Rd = %.1f kN%s", Math.max(resistance, 0) / 1e3, assumed));
+            String clause = bolts == 1 ? "EN 1993-1-8 3.10.3 (3.11)"
+                    : bolts == 2 ? "EN 1993-1-8 3.10.3 (3.12), Table 3.8" : "EN 1993-1-8 3.10.3 (3.13), Table 3.8";
+            return CheckResult.noted(CheckMode.NET_SECTION, ratio(n), clause, () -> (bolts == 1
+                    ? String.format(Locale.ROOT, "one bolt, e2 = %.0f mm", c.edgeDistance() * 1e3)
+                    : String.format(Locale.ROOT, "%d bolts, p1/d0 = %.2f, β = %.3f, A_net = %.0f mm²", bolts,
+                            c.pitch() / c.holeDiameter(), beta, netArea * 1e6))
+                    + String.format(Locale.ROOT, ", N_u,Rd = %.1f kN%s", Math.max(resistance, 0) / 1e3, assumed));
         }
     }
 }

@@ -45,9 +45,9 @@ final class En1993SlendernessLimit {
         double limit = limit(role, forces);
         String what = role == Role.LEG ? "leg" : role == Role.REDUNDANT ? "redundant"
                 : forces.inCompression() ? "member in compression" : "member in tension or without force";
-        return new CheckResult(CheckMode.SLENDERNESS_LIMIT, slenderness / limit,
+        return CheckResult.noted(CheckMode.SLENDERNESS_LIMIT, slenderness / limit,
                 role == Role.LEG ? "EN 1993-3-1 H.2 (1) (informative)"
                         : "EN 1993-3-1 Annex H (informative; limit recalled from memory)",
-                String.format(Locale.ROOT, "%s L/i = %.1f, limit %.0f", what, slenderness, limit));
+                () -> String.format(Locale.ROOT, "%s L/i = %.1f, limit %.0f", what, slenderness, limit));
     }
 }

@@ -97,11 +97,15 @@ public final class MemberChecker {
         if (design == forces) {
             return result;
         }
-        String note = redundants.note(member.id(), axialForce);
+        // the forces now (axialForce may read a buffer that changes), the words when asked for
+        double braced = redundants.bracedCompression(member.id(), axialForce);
         List<CheckResult> noted = new ArrayList<>(result.checks().size());
         for (CheckResult c : result.checks()) {
             noted.add(c.mode().isRequirement() ? c
-                    : new CheckResult(c.mode(), c.utilisation(), c.clause(), c.note().isEmpty() ? note : c.note() + "; " + note));
+                    : CheckResult.noted(c.mode(), c.utilisation(), c.clause(), () -> {
+                        String note = redundants.note(braced);
+                        return c.note().isEmpty() ? note : c.note() + "; " + note;
+                    }));
         }
         return new MemberCheckResult(result.member(), noted);
     }

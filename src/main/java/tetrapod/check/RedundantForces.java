@@ -105,7 +105,7 @@ final class RedundantForces {
     }
 
     /** The largest compression (N, ≥ 0) among the members that redundant {@code id} braces. */
-    private double bracedCompression(int id, IntToDoubleFunction axial) {
+    double bracedCompression(int id, IntToDoubleFunction axial) {
         double worst = 0;
         for (int other : braced.get(id)) {
             worst = Math.max(worst, -axial.applyAsDouble(other));
@@ -114,8 +114,8 @@ final class RedundantForces {
     }
 
     /** The words that go beside each strength check of a redundant whose nominal force governs. */
-    String note(int id, IntToDoubleFunction axial) {
+    String note(double bracedCompression) {
         return String.format(Locale.ROOT, "nominal force of a redundant: %.1f %% of %.1f kN, the largest compression "
-                + "of the members it braces (%s)", 100 * fraction, bracedCompression(id, axial) / 1e3, clause);
+                + "of the members it braces (%s)", 100 * fraction, bracedCompression / 1e3, clause);
     }
 }

@@ -121,7 +121,8 @@ final class AnalyzeCommand implements Callable<Integer> {
     static AnalysisResult analyse(LoadedModel loaded, Integer modes, tetrapod.common.ProgressListener progress)
             throws Exception {
         AnalysisResult result = Analysis.run(loaded.tower(), loaded.loads(), loaded.spec().checks(),
-                modes == null ? NaturalModes.DEFAULT_COUNT : modes, loaded.serviceability(), progress);
+                modes == null ? NaturalModes.DEFAULT_COUNT : modes, loaded.serviceability(), loaded.factored(), progress,
+                Runtime.getRuntime().availableProcessors());
         if (modes != null && result.modes().size() < modes) {
             throw BadInputException.at("--modes", "asked for " + modes + " modes; the structure has only "
                     + result.modes().size() + " free translations that carry mass");

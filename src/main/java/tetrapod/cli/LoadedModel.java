@@ -14,6 +14,9 @@ import tetrapod.load.TowerLoads;
 import tetrapod.model.Material;
 import tetrapod.model.spec.TowerSpec;
 import tetrapod.model.spec.WindSpec;
+import tetrapod.solve.FactoredSystem;
+import tetrapod.solve.Solver;
+import tetrapod.solve.StructuralModel;
 import tetrapod.section.SectionCatalogue;
 import tetrapod.section.SteelGrades;
 
@@ -24,10 +27,12 @@ import tetrapod.section.SteelGrades;
  * @param spec           the model as read, with the wind's c_s·c_d or G filled in where it is computed
  * @param responseFactor the factor the wind uses, and the one computed from the tower when it was
  * @param serviceability the serviceability sweep (empty for an explicit frame)
+ * @param factored       the tower's stiffness assembled and factorised when the response factor's modes
+ *                       needed it (for analyze, which then reuses it); empty otherwise
  */
 record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Material material, Tower tower,
                    TowerLoads loads, ComputedStructuralFactor.Resolved responseFactor,
-                   Optional<ServiceabilityPlan> serviceability) {
+                   Optional<ServiceabilityPlan> serviceability, Optional<FactoredSystem> factored) {
 
     /** The model ready to analyse: a wind without a given c_s·c_d (EN) or G (ASCE 7) gets one computed from the tower. */
     static LoadedModel read(Path file) throws BadInputException, UnstableStructureException {
@@ -72,15 +77,19 @@ record LoadedModel(Path file, TowerSpec spec, SectionCatalogue sections, Materia
             WorkBudget.check(tower, loads);
             ComputedStructuralFactor.Resolved factor = new ComputedStructuralFactor.Resolved(spec, Optional.empty(),
                     unit == spec);
+            FactoredSystem factored = null;
             if (resolve && (unit != spec || alsoWhenGiven)) {
-                factor = ComputedStructuralFactor.resolve(spec, tower, loads, alsoWhenGiven);
+                // analyze factorises the stiffness anyway: once, here, when the modes need it
+                factored = alsoWhenGiven && tower.isGenerated() ? Solver.factor(StructuralModel.of(tower.frame())) : null;
+                factor = ComputedStructuralFactor.resolve(spec, tower, loads, alsoWhenGiven, factored);
                 if (factor.spec() != spec) {
                     spec = factor.spec();
                     loads = TowerLoads.build(tower, spec.loads());
                 }
             }
             Optional<ServiceabilityPlan> serviceability = ServiceabilityPlan.of(tower, loads, spec.serviceability());
-            return new LoadedModel(file, spec, sections, material, tower, loads, factor, serviceability);
+            return new LoadedModel(file, spec, sections, material, tower, loads, factor, serviceability,
+                    Optional.ofNullable(factored));
         } catch (BadInputException e) {
             // found after reading: the paths are known, the lines are looked up in the file
             throw ProblemLines.located(file, e);

@@ -99,8 +99,14 @@ public final class JsonOutput {
         if (v == null || v instanceof String || v instanceof Boolean) {
             return v;
         }
+        if (v instanceof Double d) {
+            if (!Double.isFinite(d)) {
+                throw new IllegalArgumentException(path + ": " + d + " cannot be written to JSON");
+            }
+            return d;               // the digits Double.toString writes parse back to this same double
+        }
         String text = scalar(v, path);
-        if (v instanceof Double || v instanceof Float || !text.matches("-?\\d+")) {
+        if (v instanceof Float || !text.matches("-?\\d+")) {
             return Double.parseDouble(text);
         }
         BigInteger whole = new BigInteger(text);

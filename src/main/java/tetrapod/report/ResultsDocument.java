@@ -56,7 +56,6 @@ import tetrapod.model.spec.TowerSpec;
 import tetrapod.model.spec.WindSpec;
 import tetrapod.solve.AutoRestraint;
 import tetrapod.solve.ContinuityNode;
-import tetrapod.solve.EndForces;
 import tetrapod.solve.MemberEndForces;
 import tetrapod.solve.NodeDisplacement;
 import tetrapod.solve.Solution;
@@ -119,7 +118,9 @@ public final class ResultsDocument {
         doc.put("model", model(result.model(), result.autoRestraints()));
         Set<Integer> axialOnly = new HashSet<>();
         result.model().frame().members().stream().filter(Member::axialOnly).forEach(mb -> axialOnly.add(mb.id()));
-        doc.put("cases", result.cases().stream().map(c -> solvedCase(c, axialOnly)).toList());
+        Set<String> withVectors = result.governingCaseIds();
+        doc.put("cases", result.cases().stream()
+                .map(c -> solvedCase(c, axialOnly, c.azimuthDeg() == null || withVectors.contains(c.id()))).toList());
         if (spec.loads().wind() instanceof WindSpec.En1991 en) {
             doc.put("structuralFactor", structuralFactor(en, given,
                     computed.filter(En1991StructuralFactor.class::isInstance).map(En1991StructuralFactor.class::cast)));
@@ -252,12 +253,17 @@ public final class ResultsDocument {
         m.put("effectiveMass", mass);
         m.put("residual", mode.residual());
         List<Map<String, Object>> shape = new ArrayList<>(frame.nodes().size());
+        double largest = 0;
+        for (double v : mode.shape()) {
+            largest = Math.max(largest, Math.abs(v));
+        }
+        RoundOff digits = RoundOff.forLargest(largest);
         for (int n = 0; n < frame.nodes().size(); n++) {
             Map<String, Object> node = new LinkedHashMap<>();
             node.put("node", frame.nodes().get(n).id());
             List<Double> u = new ArrayList<>(6);
             for (int k = 0; k < 6; k++) {
-                u.add(clean(mode.shape()[6 * n + k]));
+                u.add(digits.apply(mode.shape()[6 * n + k]));
             }
             node.put("u", u);
             shape.add(node);
@@ -552,21 +558,55 @@ public final class ResultsDocument {
         return m;
     }
 
-    /** @param axialOnly the ids of the members that carry axial force only: their N alone is written */
-    private static Map<String, Object> solvedCase(SolvedCase c, Set<Integer> axialOnly) {
+    /**
+     * A case solved in full. Its load vector, displacements and member end forces are written when
+     * {@code withVectors} (docs/methods.md, "The cases written in full"); its reactions, equilibrium
+     * residual and α_cr always.
+     *
+     * @param axialOnly the ids of the members that carry axial force only: their N alone is written
+     */
+    private static Map<String, Object> solvedCase(SolvedCase c, Set<Integer> axialOnly, boolean withVectors) {
         Solution s = c.solution();
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("id", c.id());
         m.put("combination", c.combination());
         m.put("azimuthDeg", c.azimuthDeg());
-        m.put("loads", nodeForces(summedByNode(s.loads().loads())));
-        m.put("displacements", s.displacements().stream().map(ResultsDocument::displacement).toList());
+        if (withVectors) {
+            m.put("loads", nodeForces(summedByNode(s.loads().loads())));
+            RoundOff displacementDigits = RoundOff.forLargest(largestDisplacement(s.displacements()));
+            m.put("displacements", s.displacements().stream().map(d -> displacement(d, displacementDigits)).toList());
+        }
         m.put("reactions", nodeForces(s.reactions()));
-        m.put("memberForces", s.memberForces().stream().map(f -> memberForces(f, axialOnly.contains(f.member()))).toList());
+        if (withVectors) {
+            RoundOff forceDigits = RoundOff.forLargest(largestEndForce(s.memberForces()));
+            m.put("memberForces", s.memberForces().stream()
+                    .map(f -> memberForces(f, axialOnly.contains(f.member()), forceDigits)).toList());
+        }
         m.put("equilibriumError", s.equilibriumError());
         m.put("alphaCr", Double.isFinite(c.alphaCr()) ? c.alphaCr() : null);
         m.put("windAmplification", c.windAmplification());
         return m;
+    }
+
+    private static double largestDisplacement(List<NodeDisplacement> displacements) {
+        double largest = 0;
+        for (NodeDisplacement d : displacements) {
+            for (int k = 0; k < 6; k++) {
+                largest = Math.max(largest, Math.abs(d.component(k)));
+            }
+        }
+        return largest;
+    }
+
+    private static double largestEndForce(List<MemberEndForces> forces) {
+        double largest = 0;
+        for (MemberEndForces f : forces) {
+            largest = Math.max(largest, Math.abs(f.axial()));
+            for (int k = 0; k < 6; k++) {
+                largest = Math.max(largest, Math.max(Math.abs(f.atI().component(k)), Math.abs(f.atJ().component(k))));
+            }
+        }
+        return largest;
     }
 
     /** The load vector with the entries of each node added up, in ascending node id. */
@@ -594,27 +634,23 @@ public final class ResultsDocument {
         return out;
     }
 
-    private static Map<String, Object> displacement(NodeDisplacement d) {
+    private static Map<String, Object> displacement(NodeDisplacement d, RoundOff digits) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("node", d.node());
-        m.put("u", six(d::component));
+        m.put("u", six(k -> digits.apply(d.component(k))));
         return m;
     }
 
     /** A member's end forces; of an axial-only member its N alone (its end forces are −N and N along its axis). */
-    private static Map<String, Object> memberForces(MemberEndForces f, boolean axialOnly) {
+    private static Map<String, Object> memberForces(MemberEndForces f, boolean axialOnly, RoundOff digits) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("member", f.member());
-        m.put("N", f.axial());
+        m.put("N", digits.apply(f.axial()));
         if (!axialOnly) {
-            m.put("endI", six(f.atI()));
-            m.put("endJ", six(f.atJ()));
+            m.put("endI", six(k -> digits.apply(f.atI().component(k))));
+            m.put("endJ", six(k -> digits.apply(f.atJ().component(k))));
         }
         return m;
-    }
-
-    private static List<Double> six(EndForces e) {
-        return six(e::component);
     }
 
     private static List<Double> six(java.util.function.IntToDoubleFunction component) {

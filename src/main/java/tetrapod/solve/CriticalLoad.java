@@ -54,18 +54,26 @@ public final class CriticalLoad {
      * @return α_cr > 0, or {@link Double#POSITIVE_INFINITY} when no compression can buckle the structure
      */
     public static double factor(FactoredSystem system, double[] axial) {
+        return factors(system, List.of(axial))[0];
+    }
+
+    /**
+     * α_cr of each set of member axial forces, in order: the Lanczos runs of all of them in step, their
+     * solves of one step done together with one pass over the Cholesky factor (the solve reads the
+     * whole factor, whatever the number of right-hand sides). Each value is the same to the last bit
+     * as {@link #factor} gives alone: each run does the same operations in the same order, and the
+     * block solve gives each right-hand side the bits of a solve of its own
+     * ({@link SparseKernels#choleskySolve(DMatrixSparseCSC, double[], int)}).
+     */
+    public static double[] factors(FactoredSystem system, List<double[]> axial) {
         StructuralModel model = system.model();
         int n = model.numbering().freeCount();
+        double[] out = new double[axial.size()];
         if (n == 0) {
-            return Double.POSITIVE_INFINITY;
+            Arrays.fill(out, Double.POSITIVE_INFINITY);
+            return out;
         }
-        DMatrixSparseCSC minusKg = minusGeometric(model, axial);
-        int steps = Math.min(MAX_STEPS, n);
-        List<double[]> v = new ArrayList<>();     // K-orthonormal Lanczos vectors
-        List<double[]> kv = new ArrayList<>();    // K v of each, carried along (no product with K)
-        double[] alpha = new double[steps];
-        double[] beta = new double[steps];
-        // start: v = K⁻¹ b for a seeded random b, so that K v = b is known
+        // start: v = K⁻¹ b for a seeded random b, so that K v = b is known (the same for every run)
         Random random = new Random(SEED);
         double[] b = new double[n];
         for (int e = 0; e < n; e++) {
@@ -73,18 +81,81 @@ public final class CriticalLoad {
         }
         double[] first = b.clone();
         system.solveFree(first);
-        double norm = Math.sqrt(SparseKernels.dot(first, b));
-        v.add(scaled(first, 1 / norm));
-        kv.add(scaled(b, 1 / norm));
-        double mu = 0;
-        double scale = 0;                                             // the largest |μ| met, for round-off
-        for (int j = 0; j < steps; j++) {
-            double[] g = new double[n];
-            SparseKernels.multiply(minusKg, v.get(j), g);           // −K_G v_j
+        List<Run> runs = new ArrayList<>(axial.size());
+        for (double[] forces : axial) {
+            runs.add(new Run(minusGeometric(model, forces), first, b, Math.min(MAX_STEPS, n)));
+        }
+        List<Run> active = new ArrayList<>(runs);
+        while (!active.isEmpty()) {
+            int q = active.size();
+            double[] block = new double[n * q];                       // row by row: block[e * q + r]
+            List<double[]> products = new ArrayList<>(q);
+            for (int r = 0; r < q; r++) {
+                double[] g = active.get(r).product();                 // −K_G v_j
+                products.add(g);
+                for (int e = 0; e < n; e++) {
+                    block[e * q + r] = g[e];
+                }
+            }
+            if (q == 1) {
+                system.solveFree(block);                              // the same bits, one right-hand side
+            } else {
+                system.solveFree(block, q);                           // w = K⁻¹ (−K_G) v_j, K w = g
+            }
+            List<Run> next = new ArrayList<>(q);
+            for (int r = 0; r < q; r++) {
+                double[] w = new double[n];
+                for (int e = 0; e < n; e++) {
+                    w[e] = block[e * q + r];
+                }
+                if (!active.get(r).advance(w, products.get(r))) {
+                    next.add(active.get(r));
+                }
+            }
+            active = next;
+        }
+        for (int k = 0; k < out.length; k++) {
+            out[k] = runs.get(k).alpha();
+        }
+        return out;
+    }
+
+    /** One Lanczos run: K-orthonormal vectors, the tridiagonal, and the largest Ritz value so far. */
+    private static final class Run {
+        private final DMatrixSparseCSC minusKg;
+        private final int steps;
+        private final List<double[]> v = new ArrayList<>();     // K-orthonormal Lanczos vectors
+        private final List<double[]> kv = new ArrayList<>();    // K v of each, carried along (no product with K)
+        private final double[] alpha;
+        private final double[] beta;
+        private int j;
+        private double mu;
+        private double scale;                                   // the largest |μ| met, for round-off
+
+        Run(DMatrixSparseCSC minusKg, double[] first, double[] b, int steps) {
+            this.minusKg = minusKg;
+            this.steps = steps;
+            this.alpha = new double[steps];
+            this.beta = new double[steps];
+            double norm = Math.sqrt(SparseKernels.dot(first, b));
+            v.add(scaled(first, 1 / norm));
+            kv.add(scaled(b, 1 / norm));
+        }
+
+        /** −K_G v_j, with α_j = v_j · (−K_G v_j). */
+        double[] product() {
+            double[] g = new double[v.get(j).length];
+            SparseKernels.multiply(minusKg, v.get(j), g);
             alpha[j] = SparseKernels.dot(v.get(j), g);
             scale = Math.max(scale, Math.abs(alpha[j]));
-            double[] w = g.clone();
-            system.solveFree(w);                                      // w = K⁻¹ (−K_G) v_j, K w = g
+            return g;
+        }
+
+        /**
+         * Takes w = K⁻¹ g of this step ({@code g} is then K w): reorthogonalises, tests convergence and
+         * makes the next vector; true when the run has ended.
+         */
+        boolean advance(double[] w, double[] g) {
             double[] kw = g;
             for (int pass = 0; pass < 2; pass++) {                    // full reorthogonalisation, twice
                 for (int i = 0; i <= j; i++) {
@@ -100,14 +171,19 @@ public final class CriticalLoad {
                 double[] ritz = largestRitz(alpha, beta, j + 1);
                 mu = ritz[0];
                 if (exhausted || Math.abs(beta[j] * ritz[1]) <= TOLERANCE * Math.abs(mu)) {
-                    break;
+                    return true;
                 }
             }
             v.add(scaled(w, 1 / beta[j]));
             kv.add(scaled(kw, 1 / beta[j]));
+            j++;
+            return false;
         }
-        // tension alone: no positive μ beyond the round-off of the largest tension ones
-        return mu > ROUND_OFF * scale ? 1 / mu : Double.POSITIVE_INFINITY;
+
+        /** α_cr = 1/μ; tension alone: no positive μ beyond the round-off of the largest tension ones. */
+        double alpha() {
+            return mu > ROUND_OFF * scale ? 1 / mu : Double.POSITIVE_INFINITY;
+        }
     }
 
     /**

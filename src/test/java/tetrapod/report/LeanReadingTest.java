@@ -35,15 +35,20 @@ class LeanReadingTest {
         JsonNode jackson = new ObjectMapper().readTree(file.toFile());
         List<?> cases = (List<?>) lean.get("cases");
         assertEquals(jackson.get("cases").size(), cases.size());
+        int withVectors = 0;
         for (int k = 0; k < cases.size(); k++) {
             Map<?, ?> c = (Map<?, ?>) cases.get(k);
+            JsonNode inFile = jackson.get("cases").get(k);
+            withVectors += inFile.has("loads") ? 1 : 0;
             for (String gone : List.of("loads", "displacements", "reactions", "memberForces")) {
                 assertFalse(c.containsKey(gone), "case " + k + " keeps " + gone);
-                assertTrue(jackson.get("cases").get(k).has(gone), "the file has " + gone);
+                // the vectors only for some cases (docs/methods.md, "The cases written in full"), the reactions for all
+                assertTrue(inFile.has(gone) || !gone.equals("reactions") && !inFile.has("loads"), "the file has " + gone);
             }
             assertEquals(jackson.get("cases").get(k).get("id").asText(), c.get("id"));
             assertEquals(jackson.get("cases").get(k).get("equilibriumError").asDouble(), (Double) c.get("equilibriumError"));
         }
+        assertTrue(withVectors > 0, "some case is written with its vectors");
         assertEquals(ResultsReader.forReport(whole), lean, "the same lean document from memory as from the file");
         assertTrue(Files.size(file) > 1_000_000, "a file worth streaming");
     }

@@ -57,6 +57,34 @@ class CriticalLoadTest {
     }
 
     /**
+     * Several sets of forces in one Lanczos pass ({@link CriticalLoad#factors}): each the Euler value
+     * of its own load (π² E I / (2L)², as above; tension never buckles), and each to the last bit the
+     * value found alone.
+     */
+    @Test
+    void severalCasesTogetherGiveEachItsOwnFactor() throws Exception {
+        Frame frame = column(24, Restraint.FIXED, null);
+        FactoredSystem system = Solver.factor(StructuralModel.of(frame));
+        int top = frame.nodes().size();
+        double p = 10e3;
+        List<double[]> axial = new ArrayList<>();
+        for (double load : new double[] {p, 2 * p, -p, 0.5 * p}) {
+            Solution s = system.solve(new LoadVector("P", List.of(NodeForce.force(top, 0, 0, -load))));
+            axial.add(CriticalLoad.axialForces(s));
+        }
+        double[] together = CriticalLoad.factors(system, axial);
+        double euler = Math.PI * Math.PI * E * I / (4 * L * L);
+        assertEquals(euler / p, together[0], 0.01 * euler / p);
+        assertEquals(euler / (2 * p), together[1], 0.01 * euler / (2 * p));
+        assertEquals(Double.POSITIVE_INFINITY, together[2], "tension");
+        assertEquals(euler / (0.5 * p), together[3], 0.01 * euler / (0.5 * p));
+        for (int k = 0; k < axial.size(); k++) {
+            assertEquals(Double.doubleToLongBits(CriticalLoad.factor(system, axial.get(k))),
+                    Double.doubleToLongBits(together[k]), "case " + k + ": the same bits as alone");
+        }
+    }
+
+    /**
      * The amplification 1/(1 − 1/α_cr) of EN 1993-1-1 5.2.2(5)B, with α_cr from this solver, against
      * the exact second-order tip sway of a cantilever under P and a tip force H: δ/δ₀ =
      * 3 (tan u − u)/u³, u = L √(P/EI) (S. P. Timoshenko and J. M. Gere, Theory of Elastic Stability,
