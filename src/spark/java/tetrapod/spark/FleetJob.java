@@ -34,9 +34,10 @@ import tetrapod.common.Problem;
  * the scenario patches and plans the work ({@link FleetPlan}: patched models written into the run's
  * folder, the same model twice analysed once); the executors get each model's bytes and analyse it
  * as analyze does ({@link TowerAnalysis}); the driver writes summary.csv, summary.html (the plain
- * batch's writers, the same rows in the same order) and summary.parquet (with Spark). The manifest,
- * its models and the output folder must be on a file system the driver reads; the executors need
- * none of them. No reports, no resume: Spark runs a failed task again, a failed job is run again whole.
+ * batch's writers, the same rows in the same order) and summary.parquet (with Spark). The manifest
+ * and its models must be on a file system the driver reads, the output folder on one that the driver
+ * and the executors share (an executor writes summary.parquet). No reports, no resume: Spark runs a
+ * failed task again, a failed job is run again whole.
  */
 @Command(name = "tetrapod.spark.FleetJob", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Analyse every tower of a manifest unpatched ('base'), under its manifest row's parameters and"

@@ -73,6 +73,7 @@ final class SummaryFrame {
      * Parquet file (as the plain batch writes it) and never half written.
      */
     static void write(SparkSession spark, List<SummaryRow> rows, Path file) throws IOException {
+        // the folder's path as a file: URI, the same on every machine that shares the file system
         Path staging = file.resolveSibling(file.getFileName() + ".spark");
         deleteTree(staging);
         spark.createDataFrame(rows.stream().map(SummaryFrame::row).toList(), SCHEMA)
@@ -83,7 +84,8 @@ final class SummaryFrame {
                     && p.getFileName().toString().endsWith(".parquet")).toList();
         }
         if (parts.size() != 1) {
-            throw new IOException("Spark wrote " + parts.size() + " Parquet files into " + staging + ", expected one");
+            throw new IOException("Spark wrote " + parts.size() + " Parquet files into " + staging + ", expected one"
+                    + " (is the output folder on a file system that the driver and the executors share?)");
         }
         Files.move(parts.get(0), file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
         deleteTree(staging);
