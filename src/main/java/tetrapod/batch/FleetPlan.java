@@ -26,7 +26,7 @@ import tetrapod.io.Sha256;
 public final class FleetPlan {
 
     /** One tower under one scenario, its patches in the order they apply. */
-    public record Item(Manifest.Tower tower, String scenario, List<Object> patches, Optional<String> unreadablePatch) { }
+    private record Item(Manifest.Tower tower, String scenario, List<Object> patches, Optional<String> unreadablePatch) { }
 
     /**
      * One analysis to run: the model file to analyse, where its report goes (relative to the run's
