@@ -7,7 +7,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import java.util.Optional;
 import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
 import org.openjdk.jmh.annotations.Benchmark;
@@ -100,7 +99,7 @@ public class BatchBenchmark {
     public int independent() {
         int done = 0;
         for (Path m : models) {
-            Outcome o = BatchCommand.analyse(m, m.toString(), Optional.empty(), "", null);
+            Outcome o = TowerAnalysis.outcome(m, m.toString());
             if (o.exitCode() != 0) {
                 throw new IllegalStateException(o.message());
             }

@@ -1,5 +1,6 @@
 package tetrapod.batch;
 
+import java.io.Serializable;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
@@ -20,7 +21,7 @@ import java.util.Map;
  */
 public record Figures(Double maxUtilisation, Integer member, String role, Double azimuthDeg, int requirementBreaches,
                       Double footingUtilisation, double legCompression, double legUplift, double steelMass,
-                      String serviceability) {
+                      String serviceability) implements Serializable {
 
     /** Whether something is overstressed or some requirement is not met. */
     public boolean fails() {

@@ -1,5 +1,6 @@
 package tetrapod.batch;
 
+import java.io.Serializable;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
@@ -7,9 +8,10 @@ import java.util.Map;
  * How the analysis of one tower × scenario ended: the exit code {@code analyze} would have given
  * (0 done, 2 bad input, 3 unstable, 4 internal error, 5 output failed, 7 out of memory), its
  * one-line message (empty when done), the figures (null unless done) and the report folder
- * relative to the run's folder (null when no report was written).
+ * relative to the run's folder (null when no report was written). Serializable, so that a Spark
+ * executor can send it back to the driver.
  */
-public record Outcome(int exitCode, String message, Figures figures, String report) {
+public record Outcome(int exitCode, String message, Figures figures, String report) implements Serializable {
 
     public static Outcome done(Figures figures, String report) {
         return new Outcome(0, "", figures, report);
@@ -17,6 +19,11 @@ public record Outcome(int exitCode, String message, Figures figures, String repo
 
     public static Outcome failed(int exitCode, String message) {
         return new Outcome(exitCode, message, null, null);
+    }
+
+    /** What a one-line message adds for the problems it does not show: " (and 2 more problems)". */
+    public static String moreProblems(int others) {
+        return others <= 0 ? "" : " (and " + others + " more problem" + (others == 1 ? "" : "s") + ")";
     }
 
     /** The row's status for people. */

@@ -1,14 +1,10 @@
 package tetrapod.cli;
 
 import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
-import java.util.Set;
 import java.util.TreeMap;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
@@ -16,21 +12,15 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
-import tetrapod.analysis.AnalysisResult;
+import tetrapod.batch.FleetPlan;
 import tetrapod.batch.FleetRun;
 import tetrapod.batch.Manifest;
-import tetrapod.batch.Outcome;
-import tetrapod.batch.ResultFigures;
 import tetrapod.batch.RunFolder;
 import tetrapod.batch.Scenario;
 import tetrapod.batch.SummaryPage;
 import tetrapod.batch.SummaryRow;
 import tetrapod.batch.SummaryTable;
 import tetrapod.common.BadInputException;
-import tetrapod.common.ProgressListener;
-import tetrapod.io.ModelPatches;
-import tetrapod.io.OutputFolder;
-import tetrapod.report.Results;
 import tetrapod.view.PictureRenderer;
 import tetrapod.view.RenderRequest;
 
@@ -80,14 +70,15 @@ final class BatchCommand implements Callable<Integer> {
             throw BadInputException.at("--threads", "must be at least 1, was " + pool);
         }
         Manifest towers = Manifest.read(manifest);
-        List<Scenario> patches = scenarios(scenarios);
+        List<Scenario> patches = Scenario.fromFiles(scenarios);
         String program = new Version().getVersion()[0];
         RunFolder folder = RunFolder.open(output, resume, manifest, program);
         List<SummaryRow> rows;
         try (PictureRenderer pictures = reports ? PictureRenderer.start(RenderRequest.ALL_ROUTES) : null;
              ProgressBars progress = ProgressBars.forCommand(quiet)) {
             rows = FleetRun.run(towers, patches, folder, pool, reports, program,
-                    (model, reportFolder, link) -> analyse(model, shown(model), reportFolder, link, pictures), progress);
+                    (model, reportFolder, link) -> TowerAnalysis.analyse(model, FleetPlan.shown(output, model),
+                            reportFolder, link, pictures), progress);
         }
         SummaryTable.write(output.resolve(SummaryTable.FILE), rows);
         SummaryPage.write(output.resolve(SummaryPage.FILE), rows, manifest.toString());
@@ -98,63 +89,5 @@ final class BatchCommand implements Callable<Integer> {
         out.println("summary written to " + output + ": " + SummaryTable.FILE + ", " + SummaryPage.FILE);
         out.println("Results must be checked by a qualified engineer against the codes that apply locally.");
         return ExitCode.DONE;
-    }
-
-    /** The scenario patches, named by their file names; a file that cannot be read makes bad-input rows. */
-    private static List<Scenario> scenarios(List<Path> files) throws BadInputException {
-        List<Scenario> out = new ArrayList<>();
-        Set<String> names = new HashSet<>(Set.of(Scenario.BASE, Manifest.PARAMETERS));
-        for (Path f : files) {
-            String file = f.getFileName() == null ? "" : f.getFileName().toString();
-            String name = (file.endsWith(".json") ? file.substring(0, file.length() - 5) : file)
-                    .replaceAll("[^A-Za-z0-9._-]", "_");
-            if (name.isEmpty() || name.chars().allMatch(c -> c == '.') || !names.add(name)) {
-                throw BadInputException.at("--scenario", "the scenario name '" + name + "' (from " + f + ") is used "
-                        + "twice or is reserved (base, parameters): rename the patch file");
-            }
-            try {
-                out.add(new Scenario(name, Optional.of(f), ModelPatches.readPatch(f), Optional.empty()));
-            } catch (BadInputException e) {
-                out.add(new Scenario(name, Optional.of(f), null, Optional.of(f + ": " + e.problems().get(0)
-                        + more(e.problems().size() - 1))));
-            }
-        }
-        return out;
-    }
-
-    /** One tower × scenario as analyze does it; every end becomes an outcome with analyze's exit code and line. */
-    static Outcome analyse(Path model, String shown, Optional<Path> reportFolder, String link,
-                                   PictureRenderer pictures) {
-        try {
-            LoadedModel loaded = LoadedModel.forAnalysis(model);
-            AnalysisResult result = AnalyzeCommand.analyse(loaded, null, ProgressListener.NONE);
-            Map<String, Object> document = AnalyzeCommand.document(model, loaded, result);
-            if (reportFolder.isPresent()) {
-                try (OutputFolder outputs = OutputFolder.open(reportFolder.get(), AnalyzeCommand.OUTPUTS)) {
-                    AnalyzeCommand.write(model, document, loaded, result, outputs.staging(), new StageTimes(), pictures);
-                    outputs.commit();
-                }
-            }
-            return Outcome.done(ResultFigures.of(new Results(AnalyzeCommand.plainDocument(document))),
-                    reportFolder.isPresent() ? link : null);
-        } catch (Throwable t) {
-            StringWriter text = new StringWriter();
-            int code = Failures.report(t, new PrintWriter(text), false);
-            List<String> lines = text.toString().lines().filter(l -> l.startsWith("error: ") || l.startsWith("internal"))
-                    .toList();
-            String first = lines.isEmpty() ? t.toString() : lines.get(0).replaceFirst("^error: ", "");
-            return Outcome.failed(code, shown + ": " + first + more(lines.size() - 1));
-        }
-    }
-
-    /** A model file as a row names it: a patched model relative to the run's folder (where summary.csv is). */
-    private String shown(Path model) {
-        Path root = output.toAbsolutePath().normalize();
-        Path file = model.toAbsolutePath().normalize();
-        return file.startsWith(root) ? root.relativize(file).toString() : model.toString();
-    }
-
-    private static String more(int others) {
-        return others <= 0 ? "" : " (and " + others + " more problem" + (others == 1 ? "" : "s") + ")";
     }
 }

@@ -1,0 +1,104 @@
+package tetrapod.spark;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.Comparator;
+import java.util.List;
+import java.util.stream.Stream;
+import org.apache.spark.sql.Row;
+import org.apache.spark.sql.RowFactory;
+import org.apache.spark.sql.SaveMode;
+import org.apache.spark.sql.SparkSession;
+import org.apache.spark.sql.types.DataType;
+import org.apache.spark.sql.types.DataTypes;
+import org.apache.spark.sql.types.StructField;
+import org.apache.spark.sql.types.StructType;
+import tetrapod.batch.Figures;
+import tetrapod.batch.Outcome;
+import tetrapod.batch.SummaryRow;
+
+/**
+ * summary.parquet written by Spark: one row per tower × scenario in manifest order, the columns of
+ * summary.csv at full precision (forces in kN), null where the analysis has no such figure. The
+ * schema is that of the plain batch's summary.parquet.
+ */
+final class SummaryFrame {
+
+    static final String FILE = "summary.parquet";
+
+    static final StructType SCHEMA = new StructType(new StructField[] {
+        field("model", DataTypes.StringType, false),
+        field("scenario", DataTypes.StringType, false),
+        field("status", DataTypes.StringType, false),
+        field("exit_code", DataTypes.IntegerType, false),
+        field("message", DataTypes.StringType, false),
+        field("max_utilisation", DataTypes.DoubleType, true),
+        field("member", DataTypes.IntegerType, true),
+        field("role", DataTypes.StringType, true),
+        field("governing_azimuth_deg", DataTypes.DoubleType, true),
+        field("requirement_breaches", DataTypes.IntegerType, true),
+        field("max_footing_utilisation", DataTypes.DoubleType, true),
+        field("leg_compression_kN", DataTypes.DoubleType, true),
+        field("leg_uplift_kN", DataTypes.DoubleType, true),
+        field("steel_mass_kg", DataTypes.DoubleType, true),
+        field("serviceability", DataTypes.StringType, true),
+        field("max_utilisation_change_from_base", DataTypes.DoubleType, true),
+        field("report", DataTypes.StringType, true),
+    });
+
+    private SummaryFrame() { }
+
+    private static StructField field(String name, DataType type, boolean nullable) {
+        return DataTypes.createStructField(name, type, nullable);
+    }
+
+    /** A summary row as a Spark row of {@link #SCHEMA}. */
+    static Row row(SummaryRow r) {
+        Outcome o = r.outcome();
+        Figures f = o.figures();
+        boolean has = f != null;
+        return RowFactory.create(r.model(), r.scenario(), o.status(), o.exitCode(), o.message(),
+                has ? f.maxUtilisation() : null, has ? f.member() : null, has ? f.role() : null,
+                has ? f.azimuthDeg() : null, has ? f.requirementBreaches() : null, has ? f.footingUtilisation() : null,
+                has ? f.legCompression() / 1000 : null, has ? f.legUplift() / 1000 : null, has ? f.steelMass() : null,
+                has ? f.serviceability() : null, r.changeFromBase(),
+                o.report() == null ? null : o.report() + "/report.html");
+    }
+
+    /**
+     * Writes {@code rows} to the Parquet file {@code file} with Spark: as one partition into a
+     * folder beside it, whose one data file is then moved into place, so that {@code file} is one
+     * Parquet file (as the plain batch writes it) and never half written.
+     */
+    static void write(SparkSession spark, List<SummaryRow> rows, Path file) throws IOException {
+        // the folder's path as a file: URI, the same on every machine that shares the file system
+        Path staging = file.resolveSibling(file.getFileName() + ".spark");
+        deleteTree(staging);
+        spark.createDataFrame(rows.stream().map(SummaryFrame::row).toList(), SCHEMA)
+                .coalesce(1).write().mode(SaveMode.ErrorIfExists).parquet(staging.toUri().toString());
+        List<Path> parts;
+        try (Stream<Path> files = Files.list(staging)) {
+            parts = files.filter(p -> p.getFileName().toString().startsWith("part-")
+                    && p.getFileName().toString().endsWith(".parquet")).toList();
+        }
+        if (parts.size() != 1) {
+            throw new IOException("Spark wrote " + parts.size() + " Parquet files into " + staging + ", expected one"
+                    + " (is the output folder on a file system that the driver and the executors share?)");
+        }
+        Files.move(parts.get(0), file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        deleteTree(staging);
+    }
+
+    private static void deleteTree(Path folder) throws IOException {
+        if (!Files.exists(folder)) {
+            return;
+        }
+        try (Stream<Path> all = Files.walk(folder)) {
+            for (Path p : all.sorted(Comparator.reverseOrder()).toList()) {
+                Files.delete(p);
+            }
+        }
+    }
+}
