@@ -8,7 +8,9 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.stream.Stream;
 import tetrapod.common.BadInputException;
+import tetrapod.common.OutputException;
 import tetrapod.io.AtomicFiles;
+import tetrapod.io.FolderLock;
 import tetrapod.io.JsonOutput;
 import tetrapod.io.PlainJson;
 
@@ -17,24 +19,44 @@ import tetrapod.io.PlainJson;
  * holds each finished piece of work, so that a resumed run skips it; {@code scenarios/<scenario>/}
  * the patched models; {@code reports/<tower>/<scenario>/} the reports when asked for; and the summary.
  * A folder that holds anything else, or another run's results without {@code --resume}, is refused.
+ * The run holds the folder's lock ({@link FolderLock}, {@code <folder>.lock} beside it) from open to
+ * close, so that a second run on the same folder is refused while the first works.
  */
-public final class RunFolder {
+public final class RunFolder implements AutoCloseable {
 
     static final String MARKER = "batch.json";
     static final String FORMAT = "tetrapod-batch/1";
 
     private final Path root;
+    private final FolderLock lock;
 
-    private RunFolder(Path root) {
+    private RunFolder(Path root, FolderLock lock) {
         this.root = root;
+        this.lock = lock;
     }
 
     /** Opens {@code folder} for a run; {@code resume} allows one that holds an earlier run's results. */
     public static RunFolder open(Path folder, boolean resume, Path manifest, String program)
-            throws BadInputException, IOException {
+            throws BadInputException, OutputException, IOException {
         if (Files.exists(folder) && !Files.isDirectory(folder)) {
             throw BadInputException.at("-o", folder + " is a file, not a folder: choose a folder with -o");
         }
+        Path absolute = folder.toAbsolutePath().normalize();
+        if (absolute.getParent() == null) {
+            throw BadInputException.at("-o", absolute + " is the root of the file system: choose a folder below it");
+        }
+        Files.createDirectories(absolute.getParent());
+        FolderLock lock = FolderLock.take(absolute);
+        try {
+            return open(folder, resume, manifest, program, lock);
+        } catch (BadInputException | IOException | RuntimeException e) {
+            lock.close();
+            throw e;
+        }
+    }
+
+    private static RunFolder open(Path folder, boolean resume, Path manifest, String program, FolderLock lock)
+            throws BadInputException, IOException {
         boolean empty = !Files.exists(folder);
         if (!empty) {
             try (Stream<Path> entries = Files.list(folder)) {
@@ -56,7 +78,13 @@ public final class RunFolder {
         m.put("manifest", manifest.toAbsolutePath().normalize().toString());
         JsonOutput.write(marker, m);
         Files.createDirectories(folder.resolve("work"));
-        return new RunFolder(folder);
+        return new RunFolder(folder, lock);
+    }
+
+    /** Releases the folder for the next run. */
+    @Override
+    public void close() throws IOException {
+        lock.close();
     }
 
     public Path root() {

@@ -14,10 +14,7 @@ public final class SummaryTable {
 
     public static final String FILE = "summary.csv";
 
-    static final List<String> HEADER = List.of("model", "scenario", "status", "exit_code", "message",
-            "max_utilisation", "member", "role", "governing_azimuth_deg", "requirement_breaches",
-            "max_footing_utilisation", "leg_compression_kN", "leg_uplift_kN", "steel_mass_kg", "serviceability",
-            "max_utilisation_change_from_base", "report");
+    static final List<String> HEADER = SummaryColumn.headers();
 
     private SummaryTable() { }
 

@@ -18,6 +18,7 @@ import tetrapod.batch.Manifest;
 import tetrapod.batch.RunFolder;
 import tetrapod.batch.Scenario;
 import tetrapod.batch.SummaryPage;
+import tetrapod.batch.SummaryParquet;
 import tetrapod.batch.SummaryRow;
 import tetrapod.batch.SummaryTable;
 import tetrapod.common.BadInputException;
@@ -28,8 +29,8 @@ import tetrapod.view.RenderRequest;
 @Command(name = "batch", mixinStandardHelpOptions = true,
         description = "Analyse every tower of a manifest (a folder of model files, or a CSV file with a 'model' column of "
                 + "paths relative to it and optional parameter columns) unpatched ('base') and under each scenario "
-                + "(a JSON Merge Patch file, RFC 7386), on every core; writes summary.csv and summary.html into DIR. A "
-                + "model that cannot be analysed is a row with its exit class and message; the run goes on.%n"
+                + "(a JSON Merge Patch file, RFC 7386), on every core; writes summary.csv, summary.parquet and "
+                + "summary.html into DIR. A model that cannot be analysed is a row with its exit class and message; the run goes on.%n"
                 + "Results must be checked by a qualified engineer against the codes that apply locally.")
 final class BatchCommand implements Callable<Integer> {
 
@@ -72,21 +73,25 @@ final class BatchCommand implements Callable<Integer> {
         Manifest towers = Manifest.read(manifest);
         List<Scenario> patches = Scenario.fromFiles(scenarios);
         String program = new Version().getVersion()[0];
-        RunFolder folder = RunFolder.open(output, resume, manifest, program);
         List<SummaryRow> rows;
-        try (PictureRenderer pictures = reports ? PictureRenderer.start(RenderRequest.ALL_ROUTES) : null;
-             ProgressBars progress = ProgressBars.forCommand(quiet)) {
-            rows = FleetRun.run(towers, patches, folder, pool, reports, program,
-                    (model, reportFolder, link) -> TowerAnalysis.analyse(model, FleetPlan.shown(output, model),
-                            reportFolder, link, pictures), progress);
+        try (RunFolder folder = RunFolder.open(output, resume, manifest, program)) {
+            try (PictureRenderer pictures = reports ? PictureRenderer.start(RenderRequest.ALL_ROUTES) : null;
+                 ProgressBars progress = ProgressBars.forCommand(quiet)) {
+                rows = FleetRun.run(towers, patches, folder, pool, reports, program,
+                        (model, reportFolder, link) -> TowerAnalysis.analyse(model, FleetPlan.shown(output, model),
+                                reportFolder, link, pictures),
+                        progress);
+            }
+            SummaryTable.write(output.resolve(SummaryTable.FILE), rows);
+            SummaryParquet.write(output.resolve(SummaryParquet.FILE), rows, program);
+            SummaryPage.write(output.resolve(SummaryPage.FILE), rows, manifest.toString());
         }
-        SummaryTable.write(output.resolve(SummaryTable.FILE), rows);
-        SummaryPage.write(output.resolve(SummaryPage.FILE), rows, manifest.toString());
         Map<String, Integer> statuses = new TreeMap<>();
         rows.forEach(r -> statuses.merge(r.outcome().status(), 1, Integer::sum));
         out.println(rows.size() + " towers × scenarios (" + towers.towers().size() + " towers): " + statuses.entrySet()
                 .stream().map(e -> e.getValue() + " " + e.getKey()).reduce((a, b) -> a + ", " + b).orElse(""));
-        out.println("summary written to " + output + ": " + SummaryTable.FILE + ", " + SummaryPage.FILE);
+        out.println("summary written to " + output + ": " + SummaryTable.FILE + ", " + SummaryParquet.FILE + ", "
+                + SummaryPage.FILE);
         out.println("Results must be checked by a qualified engineer against the codes that apply locally.");
         return ExitCode.DONE;
     }

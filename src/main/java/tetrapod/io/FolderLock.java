@@ -14,9 +14,10 @@ import tetrapod.common.OutputException;
 /**
  * The claim of one run on an output folder: a file {@code <folder>.lock} beside the folder (the
  * folder itself is replaced) holding the process id and start time of its owner. A lock whose
- * owner no longer runs is stale and taken over.
+ * owner no longer runs is stale and taken over. Used by analyze's output folder and by a batch
+ * run's folder, so that two runs never work on one folder at once.
  */
-final class FolderLock implements AutoCloseable {
+public final class FolderLock implements AutoCloseable {
 
     private final Path file;
 
@@ -29,7 +30,7 @@ final class FolderLock implements AutoCloseable {
     }
 
     /** Takes the lock of {@code folder}, or fails naming the running owner. */
-    static FolderLock take(Path folder) throws OutputException, IOException {
+    public static FolderLock take(Path folder) throws OutputException, IOException {
         Path file = fileOf(folder);
         String mine = Processes.currentPid() + " " + Processes.currentStart();
         for (int attempt = 0; attempt < 5; attempt++) {
@@ -40,7 +41,7 @@ final class FolderLock implements AutoCloseable {
             } catch (FileAlreadyExistsException e) {
                 Optional<Long> owner = runningOwner(file);
                 if (owner.isPresent()) {
-                    throw new OutputException(folder + " is in use by another analysis (process " + owner.get()
+                    throw new OutputException(folder + " is in use by another tetrapod run (process " + owner.get()
                             + ", lock " + file + "); wait for it to finish or choose another folder with -o");
                 }
                 takeOverStale(file);

@@ -27,6 +27,7 @@ import tetrapod.batch.SummaryTable;
 import tetrapod.cli.TowerAnalysis;
 import tetrapod.cli.Version;
 import tetrapod.common.BadInputException;
+import tetrapod.common.OutputException;
 import tetrapod.common.Problem;
 
 /**
@@ -84,6 +85,10 @@ public final class FleetJob implements Callable<Integer> {
                 }
                 return BAD_INPUT;
             }
+            if (e instanceof OutputException held) {
+                err.println("error: " + held.getMessage());
+                return OUTPUT_FAILED;
+            }
             if (e instanceof IOException io) {
                 err.println("error: I/O failure: " + io.getMessage());
                 return OUTPUT_FAILED;
@@ -94,7 +99,7 @@ public final class FleetJob implements Callable<Integer> {
     }
 
     @Override
-    public Integer call() throws BadInputException, IOException {
+    public Integer call() throws BadInputException, OutputException, IOException {
         List<SummaryRow> rows = run(SparkSession.builder().getOrCreate(), manifest, scenarios, output);
         out.println(rows.size() + " towers × scenarios written to " + output + ": " + SummaryTable.FILE + ", "
                 + SummaryFrame.FILE + ", " + SummaryPage.FILE);
@@ -104,39 +109,40 @@ public final class FleetJob implements Callable<Integer> {
 
     /** The fleet run of {@code manifest} under {@code scenarioFiles} on {@code spark}, its summary written into {@code output}. */
     public static List<SummaryRow> run(SparkSession spark, Path manifest, List<Path> scenarioFiles, Path output)
-            throws BadInputException, IOException {
+            throws BadInputException, OutputException, IOException {
         Manifest towers = Manifest.read(manifest);
         List<Scenario> scenarios = Scenario.fromFiles(scenarioFiles);
         String program = new Version().getVersion()[0];
-        RunFolder folder = RunFolder.open(output, false, manifest, program);
-        FleetPlan plan = FleetPlan.of(towers, scenarios, folder, program);
+        try (RunFolder folder = RunFolder.open(output, false, manifest, program)) {
+            FleetPlan plan = FleetPlan.of(towers, scenarios, folder, program);
 
-        Map<Work, Outcome> outcomes = new HashMap<>();
-        List<Work> shipped = new ArrayList<>();
-        List<ShippedModel> models = new ArrayList<>();
-        for (Work w : plan.works()) {
-            String shown = FleetPlan.shown(output, w.model());
-            if (w.hash() == null) {
-                // the model cannot be read (no such file, no JSON): its analysis fails at reading, here
-                outcomes.put(w, TowerAnalysis.outcome(w.model(), shown));
-            } else {
-                shipped.add(w);
-                models.add(new ShippedModel(w.model().getFileName().toString(), shown, Files.readAllBytes(w.model())));
+            Map<Work, Outcome> outcomes = new HashMap<>();
+            List<Work> shipped = new ArrayList<>();
+            List<ShippedModel> models = new ArrayList<>();
+            for (Work w : plan.works()) {
+                String shown = FleetPlan.shown(output, w.model());
+                if (w.hash() == null) {
+                    // the model cannot be read (no such file, no JSON): its analysis fails at reading, here
+                    outcomes.put(w, TowerAnalysis.outcome(w.model(), shown));
+                } else {
+                    shipped.add(w);
+                    models.add(new ShippedModel(w.model().getFileName().toString(), shown, Files.readAllBytes(w.model())));
+                }
             }
-        }
-        if (!models.isEmpty()) {
-            JavaSparkContext sc = JavaSparkContext.fromSparkContext(spark.sparkContext());
-            // a few tasks per core, so that a slow tower does not hold up a whole share of the work
-            int slices = Math.min(models.size(), Math.max(1, sc.defaultParallelism() * 4));
-            List<Outcome> analysed = sc.parallelize(models, slices).map(ShippedModel::analyse).collect();
-            for (int k = 0; k < shipped.size(); k++) {
-                outcomes.put(shipped.get(k), analysed.get(k));
+            if (!models.isEmpty()) {
+                JavaSparkContext sc = JavaSparkContext.fromSparkContext(spark.sparkContext());
+                // a few tasks per core, so that a slow tower does not hold up a whole share of the work
+                int slices = Math.min(models.size(), Math.max(1, sc.defaultParallelism() * 4));
+                List<Outcome> analysed = sc.parallelize(models, slices).map(ShippedModel::analyse).collect();
+                for (int k = 0; k < shipped.size(); k++) {
+                    outcomes.put(shipped.get(k), analysed.get(k));
+                }
             }
+            List<SummaryRow> rows = plan.rows(outcomes);
+            SummaryTable.write(output.resolve(SummaryTable.FILE), rows);
+            SummaryFrame.write(spark, rows, output.resolve(SummaryFrame.FILE));
+            SummaryPage.write(output.resolve(SummaryPage.FILE), rows, manifest.toString());
+            return rows;
         }
-        List<SummaryRow> rows = plan.rows(outcomes);
-        SummaryTable.write(output.resolve(SummaryTable.FILE), rows);
-        SummaryFrame.write(spark, rows, output.resolve(SummaryFrame.FILE));
-        SummaryPage.write(output.resolve(SummaryPage.FILE), rows, manifest.toString());
-        return rows;
     }
 }

@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 import java.util.stream.Stream;
@@ -15,9 +16,9 @@ import org.apache.spark.sql.types.DataType;
 import org.apache.spark.sql.types.DataTypes;
 import org.apache.spark.sql.types.StructField;
 import org.apache.spark.sql.types.StructType;
-import tetrapod.batch.Figures;
-import tetrapod.batch.Outcome;
+import tetrapod.batch.SummaryColumn;
 import tetrapod.batch.SummaryRow;
+import tetrapod.io.ParquetFile;
 
 /**
  * summary.parquet written by Spark: one row per tower × scenario in manifest order, the columns of
@@ -28,43 +29,24 @@ final class SummaryFrame {
 
     static final String FILE = "summary.parquet";
 
-    static final StructType SCHEMA = new StructType(new StructField[] {
-        field("model", DataTypes.StringType, false),
-        field("scenario", DataTypes.StringType, false),
-        field("status", DataTypes.StringType, false),
-        field("exit_code", DataTypes.IntegerType, false),
-        field("message", DataTypes.StringType, false),
-        field("max_utilisation", DataTypes.DoubleType, true),
-        field("member", DataTypes.IntegerType, true),
-        field("role", DataTypes.StringType, true),
-        field("governing_azimuth_deg", DataTypes.DoubleType, true),
-        field("requirement_breaches", DataTypes.IntegerType, true),
-        field("max_footing_utilisation", DataTypes.DoubleType, true),
-        field("leg_compression_kN", DataTypes.DoubleType, true),
-        field("leg_uplift_kN", DataTypes.DoubleType, true),
-        field("steel_mass_kg", DataTypes.DoubleType, true),
-        field("serviceability", DataTypes.StringType, true),
-        field("max_utilisation_change_from_base", DataTypes.DoubleType, true),
-        field("report", DataTypes.StringType, true),
-    });
+    /** The plain batch's schema ({@link SummaryColumn}) as Spark's. */
+    static final StructType SCHEMA = new StructType(Arrays.stream(SummaryColumn.values())
+            .map(c -> DataTypes.createStructField(c.header(), sparkType(c.type()), !c.required()))
+            .toArray(StructField[]::new));
 
     private SummaryFrame() { }
 
-    private static StructField field(String name, DataType type, boolean nullable) {
-        return DataTypes.createStructField(name, type, nullable);
+    private static DataType sparkType(ParquetFile.Type type) {
+        return switch (type) {
+            case STRING -> DataTypes.StringType;
+            case INT32 -> DataTypes.IntegerType;
+            case DOUBLE -> DataTypes.DoubleType;
+        };
     }
 
     /** A summary row as a Spark row of {@link #SCHEMA}. */
     static Row row(SummaryRow r) {
-        Outcome o = r.outcome();
-        Figures f = o.figures();
-        boolean has = f != null;
-        return RowFactory.create(r.model(), r.scenario(), o.status(), o.exitCode(), o.message(),
-                has ? f.maxUtilisation() : null, has ? f.member() : null, has ? f.role() : null,
-                has ? f.azimuthDeg() : null, has ? f.requirementBreaches() : null, has ? f.footingUtilisation() : null,
-                has ? f.legCompression() / 1000 : null, has ? f.legUplift() / 1000 : null, has ? f.steelMass() : null,
-                has ? f.serviceability() : null, r.changeFromBase(),
-                o.report() == null ? null : o.report() + "/report.html");
+        return RowFactory.create(Arrays.stream(SummaryColumn.values()).map(c -> c.valueOf(r)).toArray());
     }
 
     /**

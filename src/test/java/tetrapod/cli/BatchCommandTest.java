@@ -16,6 +16,8 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import tetrapod.batch.RunFolder;
+import tetrapod.io.ParquetRows;
 import tetrapod.io.PlainJson;
 
 class BatchCommandTest {
@@ -77,6 +79,51 @@ class BatchCommandTest {
         String html = Files.readString(out.resolve("summary.html"));
         assertTrue(html.contains("<svg") && html.contains("qualified engineer") && html.contains("Not analysed"));
         assertFalse(html.contains("NaN") || Files.readString(out.resolve("summary.csv")).contains("NaN"));
+        assertParquetHoldsTheCsvRows(out);
+    }
+
+    /**
+     * summary.parquet, read with Apache parquet-java, has the rows of summary.csv in the same order:
+     * equal text and integers, nulls where the CSV cell is empty, doubles that round to the CSV's digits.
+     */
+    private static void assertParquetHoldsTheCsvRows(Path out) throws IOException {
+        List<CSVRecord> csv = summary(out);
+        List<List<Object>> parquet = ParquetRows.read(out.resolve("summary.parquet"));
+        assertEquals(csv.size(), parquet.size());
+        for (int r = 0; r < csv.size(); r++) {
+            List<String> cells = csv.get(r).toList();
+            List<Object> values = parquet.get(r);
+            assertEquals(cells.size(), values.size());
+            for (int c = 0; c < cells.size(); c++) {
+                String cell = cells.get(c);
+                Object value = values.get(c);
+                String where = "row " + r + " column " + c + ": " + cell + " / " + value;
+                if (value instanceof Double d) {
+                    int decimals = cell.length() - cell.indexOf('.') - 1;
+                    assertEquals(Double.parseDouble(cell), d, 0.5 * Math.pow(10, -decimals) + 1e-12, where);
+                } else {
+                    assertEquals(cell, value == null ? "" : value.toString(), where);
+                }
+            }
+        }
+    }
+
+    /** Two runs on one folder: the second is refused with one line naming the owner, as analyze refuses it. */
+    @Test
+    void aSecondRunOnAFolderInUseIsRefused(@TempDir Path dir) throws Exception {
+        Path towers = fleet(dir);
+        Path out = dir.resolve("run");
+        try (RunFolder first = RunFolder.open(out, false, towers, "tetrapod test")) {
+            CliRun second = CliRun.of("batch", towers.toString(), "-o", out.toString(), "--resume");
+            assertEquals(ExitCode.OUTPUT_FAILED, second.exitCode(), second.err());
+            assertEquals(1, second.err().lines().count(), second.err());
+            assertTrue(second.err().contains("in use by another tetrapod run (process " + ProcessHandle.current().pid()),
+                    second.err());
+            assertFalse(Files.exists(out.resolve("summary.csv")));
+        }
+        CliRun after = CliRun.of("batch", towers.toString(), "-o", out.toString(), "--resume");
+        assertEquals(ExitCode.DONE, after.exitCode(), after.err());
+        assertTrue(after.out().contains("summary.parquet"), after.out());
     }
 
     /**

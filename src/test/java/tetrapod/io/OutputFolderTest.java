@@ -83,7 +83,7 @@ class OutputFolderTest {
         Path out = dir.resolve("tower");
         try (OutputFolder first = OutputFolder.open(out, OUTPUTS)) {
             OutputException e = assertThrows(OutputException.class, () -> OutputFolder.open(out, OUTPUTS));
-            assertTrue(e.getMessage().contains("in use by another analysis (process " + ProcessHandle.current().pid()),
+            assertTrue(e.getMessage().contains("in use by another tetrapod run (process " + ProcessHandle.current().pid()),
                     e.getMessage());
             assertThrows(OutputException.class, () -> OutputFiles.check(out.resolve("tower.png")),
                     "a single file is not written into a folder being replaced either");

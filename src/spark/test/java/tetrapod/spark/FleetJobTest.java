@@ -137,10 +137,12 @@ class FleetJobTest {
         // the plain batch in-process, for its rows at full precision
         Path inProcess = dir.resolve("in-process");
         String program = new Version().getVersion()[0];
-        List<SummaryRow> expected = FleetRun.run(Manifest.read(csv), Scenario.fromFiles(patches),
-                RunFolder.open(inProcess, false, csv, program), 2, false, program,
-                (model, report, link) -> TowerAnalysis.outcome(model, FleetPlan.shown(inProcess, model)),
-                ProgressListener.NONE);
+        List<SummaryRow> expected;
+        try (RunFolder folder = RunFolder.open(inProcess, false, csv, program)) {
+            expected = FleetRun.run(Manifest.read(csv), Scenario.fromFiles(patches), folder, 2, false, program,
+                    (model, report, link) -> TowerAnalysis.outcome(model, FleetPlan.shown(inProcess, model)),
+                    ProgressListener.NONE);
+        }
 
         Path sparkOut = dir.resolve("spark");
         List<SummaryRow> returned = FleetJob.run(spark, csv, patches, sparkOut);
@@ -159,6 +161,14 @@ class FleetJobTest {
         assertEquals(expected.size(), read.size());
         for (int k = 0; k < expected.size(); k++) {
             assertEquals(columns(expected.get(k)), cells(read.get(k)), "row " + k);
+        }
+        // the plain batch's own summary.parquet (our writer), read by Spark, holds the same rows
+        List<Row> plain = spark.read().parquet(plainOut.resolve("summary.parquet").toUri().toString()).collectAsList();
+        assertEquals(spark.read().parquet(parquet.toUri().toString()).schema(),
+                spark.read().parquet(plainOut.resolve("summary.parquet").toUri().toString()).schema());
+        assertEquals(read.size(), plain.size());
+        for (int k = 0; k < read.size(); k++) {
+            assertEquals(cells(read.get(k)), cells(plain.get(k)), "row " + k + " of the plain batch's summary.parquet");
         }
         // every kind of row is there: analysed, broken model, unreadable model, missing file, bad patch
         List<String> statuses = expected.stream().map(r -> r.model() + " " + r.scenario() + " " + r.outcome().status())
