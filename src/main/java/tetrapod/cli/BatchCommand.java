@@ -30,7 +30,8 @@ import tetrapod.view.RenderRequest;
         description = "Analyse every tower of a manifest (a folder of model files, or a CSV file with a 'model' column of "
                 + "paths relative to it and optional parameter columns) unpatched ('base') and under each scenario "
                 + "(a JSON Merge Patch file, RFC 7386), on every core; writes summary.csv, summary.parquet and "
-                + "summary.html into DIR. A model that cannot be analysed is a row with its exit class and message; the run goes on.%n"
+                + "summary.html into DIR. A model that cannot be analysed is a row with its exit class and message; "
+                + "the run goes on.%n"
                 + "Results must be checked by a qualified engineer against the codes that apply locally.")
 final class BatchCommand implements Callable<Integer> {
 
