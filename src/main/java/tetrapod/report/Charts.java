@@ -259,6 +259,7 @@ final class Charts {
         ChartStyle.apply(chart);
         XYPlot plot = chart.getXYPlot();
         XYLineAndShapeRenderer renderer = (XYLineAndShapeRenderer) plot.getRenderer();
+        renderer.setDrawSeriesLineAsPath(true); // one SVG path per series, not one line per pair of points
         for (int k = 0; k < plot.getDataset().getSeriesCount(); k++) {
             renderer.setSeriesPaint(k, ChartStyle.series(k));
             renderer.setSeriesStroke(k, ChartStyle.LINE);
