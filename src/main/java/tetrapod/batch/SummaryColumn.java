@@ -66,6 +66,11 @@ public enum SummaryColumn {
         return new ParquetFile.Column(header, type, required);
     }
 
+    /** The row's values in column order. */
+    public static List<Object> valuesOf(SummaryRow row) {
+        return Arrays.stream(values()).map(c -> c.valueOf(row)).toList();
+    }
+
     public static List<String> headers() {
         return Arrays.stream(values()).map(SummaryColumn::header).toList();
     }

@@ -16,9 +16,7 @@ public final class SummaryParquet {
 
     public static void write(Path file, List<SummaryRow> rows, String createdBy) throws IOException {
         List<ParquetFile.Column> columns = Arrays.stream(SummaryColumn.values()).map(SummaryColumn::parquet).toList();
-        List<List<Object>> values = rows.stream()
-                .map(r -> Arrays.stream(SummaryColumn.values()).map(c -> c.valueOf(r)).toList())
-                .toList();
+        List<List<Object>> values = rows.stream().map(SummaryColumn::valuesOf).toList();
         AtomicFiles.writeStream(file, out -> ParquetFile.write(out, columns, values, createdBy));
     }
 }

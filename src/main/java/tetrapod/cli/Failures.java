@@ -16,14 +16,14 @@ import tetrapod.common.UnstableStructureException;
 /**
  * The single exit path for everything a command can throw, errors of the JVM included: each maps
  * to one documented {@link ExitCode} and readable lines (one per problem); a stack trace only with
- * {@code --debug}.
+ * {@code --debug}. Public for the Spark job, which has its own entry point.
  */
-final class Failures {
+public final class Failures {
 
     private Failures() { }
 
     /** Prints what went wrong to {@code err} and returns the exit code. */
-    static int report(Throwable thrown, PrintWriter err, boolean debug) {
+    public static int report(Throwable thrown, PrintWriter err, boolean debug) {
         Throwable t = known(thrown);
         int code;
         if (t instanceof BadInputException bad) {

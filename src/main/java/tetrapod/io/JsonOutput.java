@@ -99,13 +99,10 @@ public final class JsonOutput {
         if (v == null || v instanceof String || v instanceof Boolean) {
             return v;
         }
-        if (v instanceof Double d) {
-            if (!Double.isFinite(d)) {
-                throw new IllegalArgumentException(path + ": " + d + " cannot be written to JSON");
-            }
+        if (v instanceof Double d && Double.isFinite(d)) {
             return d;               // the digits Double.toString writes parse back to this same double
         }
-        String text = scalar(v, path);
+        String text = scalar(v, path);                  // refuses a NaN or an infinity, naming where it is
         if (v instanceof Float || !text.matches("-?\\d+")) {
             return Double.parseDouble(text);
         }

@@ -22,13 +22,15 @@ import tetrapod.batch.Outcome;
 import tetrapod.batch.RunFolder;
 import tetrapod.batch.Scenario;
 import tetrapod.batch.SummaryPage;
+import tetrapod.batch.SummaryParquet;
 import tetrapod.batch.SummaryRow;
 import tetrapod.batch.SummaryTable;
+import tetrapod.cli.ExitCode;
+import tetrapod.cli.Failures;
 import tetrapod.cli.TowerAnalysis;
 import tetrapod.cli.Version;
 import tetrapod.common.BadInputException;
 import tetrapod.common.OutputException;
-import tetrapod.common.Problem;
 
 /**
  * {@code tetrapod batch} as an Apache Spark job, for spark-submit: the driver reads the manifest and
@@ -46,11 +48,6 @@ import tetrapod.common.Problem;
                 + " summary.html into DIR. A model that cannot be analysed is a row with its exit class and message.%n"
                 + "Results must be checked by a qualified engineer against the codes that apply locally.")
 public final class FleetJob implements Callable<Integer> {
-
-    /** Exit codes as analyze's: done, bad input, output failed. */
-    static final int DONE = 0;
-    static final int BAD_INPUT = 2;
-    static final int OUTPUT_FAILED = 5;
 
     @Parameters(index = "0", paramLabel = "MANIFEST", description = "A folder of model files (*.json) or a CSV manifest.")
     Path manifest;
@@ -78,23 +75,8 @@ public final class FleetJob implements Callable<Integer> {
         FleetJob job = new FleetJob();
         job.out = out;
         CommandLine cl = new CommandLine(job).setOut(out).setErr(err);
-        cl.setExecutionExceptionHandler((e, line, parsed) -> {
-            if (e instanceof BadInputException bad) {
-                for (Problem p : bad.problems()) {
-                    err.println("error: " + p);
-                }
-                return BAD_INPUT;
-            }
-            if (e instanceof OutputException held) {
-                err.println("error: " + held.getMessage());
-                return OUTPUT_FAILED;
-            }
-            if (e instanceof IOException io) {
-                err.println("error: I/O failure: " + io.getMessage());
-                return OUTPUT_FAILED;
-            }
-            throw e;
-        });
+        // every failure as the tetrapod commands report it: one line per problem, analyze's exit codes
+        cl.setExecutionExceptionHandler((e, line, parsed) -> Failures.report(e, err, false));
         return cl.execute(args);
     }
 
@@ -102,9 +84,9 @@ public final class FleetJob implements Callable<Integer> {
     public Integer call() throws BadInputException, OutputException, IOException {
         List<SummaryRow> rows = run(SparkSession.builder().getOrCreate(), manifest, scenarios, output);
         out.println(rows.size() + " towers × scenarios written to " + output + ": " + SummaryTable.FILE + ", "
-                + SummaryFrame.FILE + ", " + SummaryPage.FILE);
+                + SummaryParquet.FILE + ", " + SummaryPage.FILE);
         out.println("Results must be checked by a qualified engineer against the codes that apply locally.");
-        return DONE;
+        return ExitCode.DONE;
     }
 
     /** The fleet run of {@code manifest} under {@code scenarioFiles} on {@code spark}, its summary written into {@code output}. */
@@ -140,7 +122,7 @@ public final class FleetJob implements Callable<Integer> {
             }
             List<SummaryRow> rows = plan.rows(outcomes);
             SummaryTable.write(output.resolve(SummaryTable.FILE), rows);
-            SummaryFrame.write(spark, rows, output.resolve(SummaryFrame.FILE));
+            SummaryFrame.write(spark, rows, output.resolve(SummaryParquet.FILE));
             SummaryPage.write(output.resolve(SummaryPage.FILE), rows, manifest.toString());
             return rows;
         }

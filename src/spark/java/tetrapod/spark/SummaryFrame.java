@@ -27,8 +27,6 @@ import tetrapod.io.ParquetFile;
  */
 final class SummaryFrame {
 
-    static final String FILE = "summary.parquet";
-
     /** The plain batch's schema ({@link SummaryColumn}) as Spark's. */
     static final StructType SCHEMA = new StructType(Arrays.stream(SummaryColumn.values())
             .map(c -> DataTypes.createStructField(c.header(), sparkType(c.type()), !c.required()))
@@ -46,7 +44,7 @@ final class SummaryFrame {
 
     /** A summary row as a Spark row of {@link #SCHEMA}. */
     static Row row(SummaryRow r) {
-        return RowFactory.create(Arrays.stream(SummaryColumn.values()).map(c -> c.valueOf(r)).toArray());
+        return RowFactory.create(SummaryColumn.valuesOf(r).toArray());
     }
 
     /**
