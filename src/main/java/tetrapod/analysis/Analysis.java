@@ -233,32 +233,31 @@ public final class Analysis {
                                            ProgressListener progress) throws UnstableStructureException {
         int count = keys.size();
         InFull[] work = new InFull[count];
-        try (Workers workers = new Workers(threads)) {
-            workers.run(count, k -> work[k] = InFull.solve(system, loads, keys.get(k), sway, firstOrderAlpha));
-            progress.progress(solving, 0, count);
-            List<Integer> open = new ArrayList<>();
-            for (int k = 0; k < count; k++) {
-                if (work[k].axial != null) {
-                    open.add(k);
+        Workers workers = new Workers(threads);
+        workers.run(count, k -> work[k] = InFull.solve(system, loads, keys.get(k), sway, firstOrderAlpha));
+        progress.progress(solving, 0, count);
+        List<Integer> open = new ArrayList<>();
+        for (int k = 0; k < count; k++) {
+            if (work[k].axial != null) {
+                open.add(k);
+            }
+        }
+        int groups = Math.max(Math.min(threads, open.size()), (open.size() + ALPHA_BLOCK - 1) / ALPHA_BLOCK);
+        int size = groups == 0 ? 0 : (open.size() + groups - 1) / groups;
+        for (int round = 0; round < groups; round += threads) {
+            int first = round;
+            int inRound = Math.min(threads, groups - round);
+            workers.run(inRound, t -> {
+                List<Integer> mine = open.subList(Math.min(open.size(), (first + t) * size),
+                        Math.min(open.size(), (first + t + 1) * size));
+                List<double[]> axial = new ArrayList<>(mine.size());
+                mine.forEach(k -> axial.add(work[k].axial));
+                double[] alpha = CriticalLoad.factors(system, axial);
+                for (int i = 0; i < mine.size(); i++) {
+                    work[mine.get(i)].alphaCr = alpha[i];
                 }
-            }
-            int groups = Math.max(Math.min(threads, open.size()), (open.size() + ALPHA_BLOCK - 1) / ALPHA_BLOCK);
-            int size = groups == 0 ? 0 : (open.size() + groups - 1) / groups;
-            for (int round = 0; round < groups; round += threads) {
-                int first = round;
-                int inRound = Math.min(threads, groups - round);
-                workers.run(inRound, t -> {
-                    List<Integer> mine = open.subList(Math.min(open.size(), (first + t) * size),
-                            Math.min(open.size(), (first + t + 1) * size));
-                    List<double[]> axial = new ArrayList<>(mine.size());
-                    mine.forEach(k -> axial.add(work[k].axial));
-                    double[] alpha = CriticalLoad.factors(system, axial);
-                    for (int i = 0; i < mine.size(); i++) {
-                        work[mine.get(i)].alphaCr = alpha[i];
-                    }
-                });
-                progress.progress(solving, Math.min(open.size(), (round + inRound) * size), open.size());
-            }
+            });
+            progress.progress(solving, Math.min(open.size(), (round + inRound) * size), open.size());
         }
         List<SolvedCase> out = new ArrayList<>(count);
         for (InFull w : work) {

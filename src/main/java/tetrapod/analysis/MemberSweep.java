@@ -102,21 +102,17 @@ final class MemberSweep {
 
     /** Member checks of every case added: each member's envelope, in frame order. */
     Result finish() {
-        try {
-            if (keys.size() > processed) {
-                block();
-            }
-            MemberEnvelope[] envelopes = new MemberEnvelope[n];
-            workers.run(chunks(), t -> {
-                for (int m = t * chunk; m < Math.min(n, (t + 1) * chunk); m++) {
-                    envelopes[m] = envelope(m);
-                }
-            });
-            return new Result(List.of(envelopes), Arrays.copyOf(worstUtilisation, keys.size()),
-                    Arrays.copyOf(worstMember, keys.size()), evaluated, skipped);
-        } finally {
-            workers.close();
+        if (keys.size() > processed) {
+            block();
         }
+        MemberEnvelope[] envelopes = new MemberEnvelope[n];
+        workers.run(chunks(), t -> {
+            for (int m = t * chunk; m < Math.min(n, (t + 1) * chunk); m++) {
+                envelopes[m] = envelope(m);
+            }
+        });
+        return new Result(List.of(envelopes), Arrays.copyOf(worstUtilisation, keys.size()),
+                Arrays.copyOf(worstMember, keys.size()), evaluated, skipped);
     }
 
     /**

@@ -1,23 +1,23 @@
 package tetrapod.analysis;
 
-import java.util.ArrayList;
-import java.util.List;
-import java.util.concurrent.Callable;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ForkJoinPool;
-import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.atomic.AtomicReferenceArray;
 import java.util.function.IntConsumer;
 
 /**
  * Runs numbered tasks on a fixed number of threads and waits for all of them: inline on the
- * caller's thread with one thread, else on a pool of its own, made on first use and shut down by
- * {@link #close}. A task that fails makes {@link #run} throw its error unchanged (the first in
- * task order).
+ * caller's thread with one thread, else on the caller's thread and threads started for the run,
+ * each taking the next task in order. A task that fails makes {@link #run} throw its error
+ * unchanged (the first in task order); after a failure no thread takes a new task.
+ * <p>
+ * The run waits for its threads to end, not for a pool's futures: a worker hit by an
+ * OutOfMemoryError, whose report may itself need memory, still ends, where a fork-join pool's
+ * task could stay unfinished and the caller wait for ever (seen with a 24 MB heap).
  */
-final class Workers implements AutoCloseable {
+final class Workers {
 
     private final int threads;
-    private ForkJoinPool pool;
 
     /** @param threads at least 1 */
     Workers(int threads) {
@@ -39,41 +39,70 @@ final class Workers implements AutoCloseable {
             }
             return;
         }
-        if (pool == null) {
-            pool = new ForkJoinPool(threads);
-        }
-        List<Callable<Void>> calls = new ArrayList<>(tasks);
-        for (int t = 0; t < tasks; t++) {
-            int number = t;
-            calls.add(() -> {
-                task.accept(number);
-                return null;
-            });
-        }
-        for (Future<Void> f : pool.invokeAll(calls)) {
-            try {
-                f.get();
-            } catch (ExecutionException e) {
-                Throwable cause = e.getCause();
-                if (cause instanceof RuntimeException r) {
-                    throw r;
+        AtomicInteger next = new AtomicInteger();
+        AtomicInteger finished = new AtomicInteger();
+        AtomicBoolean failed = new AtomicBoolean();
+        AtomicReferenceArray<Throwable> failures = new AtomicReferenceArray<>(tasks);
+        Runnable work = () -> {
+            int t;
+            while (!failed.get() && (t = next.getAndIncrement()) < tasks) {
+                try {
+                    task.accept(t);
+                    finished.incrementAndGet();
+                } catch (Throwable e) { // recorded without allocating, rethrown by the caller below
+                    failures.set(t, e);
+                    failed.set(true);
                 }
-                if (cause instanceof Error err) {
-                    throw err;
-                }
-                throw new IllegalStateException(cause);
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IllegalStateException("interrupted while waiting for the member checks", e);
             }
+        };
+        Thread[] helpers = new Thread[Math.min(threads, tasks) - 1];
+        int started = 0;
+        try {
+            for (; started < helpers.length; started++) {
+                helpers[started] = new Thread(work, "tetrapod-worker-" + (started + 1));
+                helpers[started].setDaemon(true);
+                helpers[started].start();
+            }
+        } catch (OutOfMemoryError noMoreThreads) {
+            // the threads already started and this one take every task
+        }
+        try {
+            work.run();
+        } finally {
+            joinAll(helpers, started);
+        }
+        for (int t = 0; t < tasks; t++) {
+            Throwable e = failures.get(t);
+            if (e instanceof RuntimeException r) {
+                throw r;
+            }
+            if (e instanceof Error err) {
+                throw err;
+            }
+            if (e != null) {
+                throw new IllegalStateException(e);
+            }
+        }
+        if (finished.get() != tasks) {
+            throw new IllegalStateException("a worker thread ended with " + (tasks - finished.get())
+                    + " of " + tasks + " tasks unfinished");
         }
     }
 
-    @Override
-    public void close() {
-        if (pool != null) {
-            pool.shutdown();
-            pool = null;
+    private static void joinAll(Thread[] helpers, int started) {
+        boolean interrupted = false;
+        for (int i = 0; i < started; i++) {
+            while (true) {
+                try {
+                    helpers[i].join();
+                    break;
+                } catch (InterruptedException e) {
+                    interrupted = true;   // the tasks write into the caller's arrays: wait for them regardless
+                }
+            }
+        }
+        if (interrupted) {
+            Thread.currentThread().interrupt();
         }
     }
 }

@@ -8,6 +8,8 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.FutureTask;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -138,22 +140,52 @@ final class AnalyzeCommand implements Callable<Integer> {
                 DefaultedKeys.of(model, SpecWriter.toMap(loaded.spec())), source, loaded.responseFactor());
     }
 
-    /** Writes every output of {@code document} into {@code folder}; returns the line saying what drew tower.png. */
+    /**
+     * Writes every output of {@code document} into {@code folder}; returns the line saying what drew
+     * tower.png. The picture is drawn on a thread of its own while results.json and the CSVs are
+     * written (issue 15: the two take about the same time and share nothing but the finished results).
+     */
     static String write(Path model, Map<String, Object> document, LoadedModel loaded, AnalysisResult result,
                         Path folder, StageTimes watch, PictureRenderer pictures) throws Exception {
-        Path resultsFile = folder.resolve("results.json");
-        JsonOutput.write(resultsFile, document);
-        // everything else is built from what the file holds, as 'tetrapod report' builds it from the file
-        Results results = new Results(plainDocument(ResultsReader.forReport(document)));
-        CsvTables.writeAll(results, folder);
-        watch.end("results.json, CSV");
-        ViewData view = ResultViews.of(result, loaded.spec().checks()).withAncillaries(ResultViews.ancillaries(loaded.spec()));
         Path picture = folder.resolve("tower.png");
-        String route = RenderCommand.write(pictures, view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
-        watch.end("picture");
+        FutureTask<String> drawing = new FutureTask<>(() -> {
+            ViewData view = ResultViews.of(result, loaded.spec().checks())
+                    .withAncillaries(ResultViews.ancillaries(loaded.spec()));
+            return RenderCommand.write(pictures, view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
+        });
+        Thread drawer = new Thread(drawing, "tetrapod-picture");
+        drawer.setDaemon(true);
+        drawer.start();
+        Results results;
+        try {
+            JsonOutput.write(folder.resolve("results.json"), document);
+            // everything else is built from what the file holds, as 'tetrapod report' builds it from the file
+            results = new Results(plainDocument(ResultsReader.forReport(document)));
+            CsvTables.writeAll(results, folder);
+            watch.end("results.json, CSV");
+        } finally {
+            drawer.join();   // nothing may still write into the folder once this returns or throws
+        }
+        String route = outcome(drawing);
+        watch.end("picture (the rest)");
         ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(Files.readAllBytes(picture)),
                 SizingHistoryFile.matching(folder, results));
         watch.end("report");
         return route;
+    }
+
+    /** What a finished task returned, or what it threw, as it threw it. */
+    private static <T> T outcome(FutureTask<T> task) throws Exception {
+        try {
+            return task.get();
+        } catch (ExecutionException e) {
+            if (e.getCause() instanceof Exception cause) {
+                throw cause;
+            }
+            if (e.getCause() instanceof Error error) {
+                throw error;
+            }
+            throw e;
+        }
     }
 }

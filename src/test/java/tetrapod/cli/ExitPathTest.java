@@ -103,7 +103,11 @@ class ExitPathTest {
         Process p = new ProcessBuilder(java, "-Xmx24m", "-XX:-UsePerfData", "-cp", System.getProperty("java.class.path"),
                 "tetrapod.cli.Main", "analyze", "models/hilltop-relay-k.json", "-o",
                 Files.createTempDirectory("oom").resolve("out").toString(), "--quiet").start();
-        assertTrue(p.waitFor(120, TimeUnit.SECONDS), "finished");
+        boolean finished = p.waitFor(120, TimeUnit.SECONDS);
+        if (!finished) {
+            p.destroyForcibly();   // a JVM out of memory may not even run its SIGTERM handler
+        }
+        assertTrue(finished, "finished");
         String err = new String(p.getErrorStream().readAllBytes(), StandardCharsets.UTF_8);
         assertEquals(ExitCode.OUT_OF_MEMORY, p.exitValue(), err);
         assertTrue(err.contains("-Xmx"), err);
