@@ -8,7 +8,6 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashSet;
 import java.util.List;
-import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
@@ -134,7 +133,7 @@ public class FleetBenchmark {
                     int done = 0;
                     for (int k = first; k < distinct.size(); k += threads) {
                         Path m = distinct.get(k);
-                        Outcome o = BatchCommand.analyse(m, m.toString(), Optional.empty(), "", null);
+                        Outcome o = TowerAnalysis.outcome(m, m.toString());
                         if (o.exitCode() != 0 && o.exitCode() != 2) { // 2: the ice patch is bad input for the ASCE tower
                             throw new IllegalStateException(o.message());
                         }
