@@ -56,13 +56,12 @@ public record En1993AnchorRods(int count, double diameter, BoltGrade grade, doub
         double fv = shear / count;
         double ftRd = tensionResistance();
         double fvRd = shearResistance();
-        String rods = String.format(Locale.ROOT, "%d × M%.0f %s, A_s = %.0f mm²", count, diameter * 1e3, grade.jsonName(),
-                MetricThreads.stressArea(diameter) * 1e6);
         return List.of(
-                new CheckResult(CheckMode.ANCHOR_TENSION, CheckResult.ratio(ft, ftRd), "EN 1993-1-8 Table 3.4 (F_t,Rd)",
-                        rods + String.format(Locale.ROOT, ", F_t,Rd = %.1f kN per rod", ftRd / 1e3)),
-                new CheckResult(CheckMode.ANCHOR_SHEAR, CheckResult.ratio(fv, fvRd), "EN 1993-1-8 6.2.2 (7) (F_2,vb,Rd)",
-                        String.format(Locale.ROOT, "α_bc = %.3f, F_v,Rd = %.1f kN per rod", alphaBc(), fvRd / 1e3)),
+                CheckResult.noted(CheckMode.ANCHOR_TENSION, CheckResult.ratio(ft, ftRd), "EN 1993-1-8 Table 3.4 (F_t,Rd)",
+                        () -> String.format(Locale.ROOT, "%d × M%.0f %s, A_s = %.0f mm², F_t,Rd = %.1f kN per rod", count,
+                                diameter * 1e3, grade.jsonName(), MetricThreads.stressArea(diameter) * 1e6, ftRd / 1e3)),
+                CheckResult.noted(CheckMode.ANCHOR_SHEAR, CheckResult.ratio(fv, fvRd), "EN 1993-1-8 6.2.2 (7) (F_2,vb,Rd)",
+                        () -> String.format(Locale.ROOT, "α_bc = %.3f, F_v,Rd = %.1f kN per rod", alphaBc(), fvRd / 1e3)),
                 new CheckResult(CheckMode.ANCHOR_COMBINED, CheckResult.ratio(fv, fvRd) + CheckResult.ratio(ft, 1.4 * ftRd),
                         "EN 1993-1-8 Table 3.4 (shear with tension)", ""));
     }

@@ -91,10 +91,10 @@ public final class FoundationCheck {
     private CheckResult uplift(LegBaseForces forces) {
         double weights = block.concreteWeight() + block.frustumWeight();
         boolean fs = spec.uplift() instanceof FoundationSpec.FactorOfSafety;
-        return new CheckResult(CheckMode.UPLIFT, CheckResult.ratio(forces.uplift() * upliftFactor(), weights),
+        return CheckResult.noted(CheckMode.UPLIFT, CheckResult.ratio(forces.uplift() * upliftFactor(), weights),
                 fs ? "uplift × FS ≤ weight of block and soil frustum (common practice)"
                    : "EN 1997-1 2.4.7.4 (2.8) UPL, γ_G,stb on block and soil frustum",
-                String.format(Locale.ROOT, "block %.2f m³ (%.1f kN), frustum %.2f m³ (%.1f kN), factor %.3f",
+                () -> String.format(Locale.ROOT, "block %.2f m³ (%.1f kN), frustum %.2f m³ (%.1f kN), factor %.3f",
                         block.concreteVolume(), block.concreteWeight() / 1e3, block.frustumVolume(),
                         block.frustumWeight() / 1e3, upliftFactor()));
     }
@@ -102,9 +102,9 @@ public final class FoundationCheck {
     private CheckResult bearing(LegBaseForces forces) {
         double onBase = forces.compression() + block.concreteWeight() + block.soilOnBlockWeight();
         double pressure = onBase / block.baseArea();
-        return new CheckResult(CheckMode.BEARING_PRESSURE, pressure / (spec.allowableBearing() * Units.KPA),
+        return CheckResult.noted(CheckMode.BEARING_PRESSURE, pressure / (spec.allowableBearing() * Units.KPA),
                 "allowable bearing pressure (common practice)",
-                String.format(Locale.ROOT, "q = %.1f kPa, allowable %.1f kPa", pressure / 1e3, spec.allowableBearing()));
+                () -> String.format(Locale.ROOT, "q = %.1f kPa, allowable %.1f kPa", pressure / 1e3, spec.allowableBearing()));
     }
 
     private CheckResult sliding(LegBaseForces forces) {
@@ -116,8 +116,8 @@ public final class FoundationCheck {
         double friction = spec.friction() * normal;
         double demand = forces.horizontal() * spec.slidingFactorOfSafety();
         double sliding = demand <= 0 ? 0 : friction > 0 ? demand / friction : CheckResult.NO_RESISTANCE;
-        return new CheckResult(CheckMode.SLIDING, sliding, "H × FS ≤ μ N (common practice)",
-                String.format(Locale.ROOT, "H = %.1f kN, μ N = %.1f kN%s", forces.horizontal() / 1e3, friction / 1e3,
+        return CheckResult.noted(CheckMode.SLIDING, sliding, "H × FS ≤ μ N (common practice)",
+                () -> String.format(Locale.ROOT, "H = %.1f kN, μ N = %.1f kN%s", forces.horizontal() / 1e3, friction / 1e3,
                         friction > 0 ? "" : " (the block lifts off its base)"));
     }
 }

@@ -8,8 +8,6 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.FutureTask;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -143,49 +141,31 @@ final class AnalyzeCommand implements Callable<Integer> {
     /**
      * Writes every output of {@code document} into {@code folder}; returns the line saying what drew
      * tower.png. The picture is drawn on a thread of its own while results.json and the CSVs are
-     * written (issue 15: the two take about the same time and share nothing but the finished results).
+     * written (issue 15: the two take about the same time and share nothing but the finished results;
+     * results.json on a third thread beside the report measured slower on two cores).
      */
     static String write(Path model, Map<String, Object> document, LoadedModel loaded, AnalysisResult result,
                         Path folder, StageTimes watch, PictureRenderer pictures) throws Exception {
         Path picture = folder.resolve("tower.png");
-        FutureTask<String> drawing = new FutureTask<>(() -> {
+        SideTask<String> drawing = SideTask.start("tetrapod-picture", () -> {
             ViewData view = ResultViews.of(result, loaded.spec().checks())
                     .withAncillaries(ResultViews.ancillaries(loaded.spec()));
             return RenderCommand.write(pictures, view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
         });
-        Thread drawer = new Thread(drawing, "tetrapod-picture");
-        drawer.setDaemon(true);
-        drawer.start();
-        Results results;
         try {
             JsonOutput.write(folder.resolve("results.json"), document);
             // everything else is built from what the file holds, as 'tetrapod report' builds it from the file
-            results = new Results(plainDocument(ResultsReader.forReport(document)));
+            Results results = new Results(plainDocument(ResultsReader.forReport(document)));
             CsvTables.writeAll(results, folder);
             watch.end("results.json, CSV");
+            String route = drawing.result();
+            watch.end("picture (the rest)");
+            ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(Files.readAllBytes(picture)),
+                    SizingHistoryFile.matching(folder, results));
+            watch.end("report");
+            return route;
         } finally {
-            drawer.join();   // nothing may still write into the folder once this returns or throws
-        }
-        String route = outcome(drawing);
-        watch.end("picture (the rest)");
-        ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(Files.readAllBytes(picture)),
-                SizingHistoryFile.matching(folder, results));
-        watch.end("report");
-        return route;
-    }
-
-    /** What a finished task returned, or what it threw, as it threw it. */
-    private static <T> T outcome(FutureTask<T> task) throws Exception {
-        try {
-            return task.get();
-        } catch (ExecutionException e) {
-            if (e.getCause() instanceof Exception cause) {
-                throw cause;
-            }
-            if (e.getCause() instanceof Error error) {
-                throw error;
-            }
-            throw e;
+            drawing.await();   // nothing may still write into the folder once this returns or throws
         }
     }
 }

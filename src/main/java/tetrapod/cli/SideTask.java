@@ -1,0 +1,50 @@
+package tetrapod.cli;
+
+import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.FutureTask;
+
+/**
+ * Work started on a thread of its own beside the caller's, waited for by joining that thread (which
+ * ends whatever the work throws, an OutOfMemoryError included), its result or failure then taken
+ * as if the caller had done the work itself.
+ */
+final class SideTask<T> {
+
+    private final FutureTask<T> task;
+    private final Thread thread;
+
+    private SideTask(String name, Callable<T> work) {
+        this.task = new FutureTask<>(work);
+        this.thread = new Thread(task, name);
+        thread.setDaemon(true);
+    }
+
+    /** Starts {@code work} now on a daemon thread named {@code name}. */
+    static <T> SideTask<T> start(String name, Callable<T> work) {
+        SideTask<T> side = new SideTask<>(name, work);
+        side.thread.start();
+        return side;
+    }
+
+    /** Waits for the work to end, without taking its outcome (for the way out of a failure elsewhere). */
+    void await() throws InterruptedException {
+        thread.join();
+    }
+
+    /** Waits for the work and returns what it returned, or throws what it threw, unwrapped. */
+    T result() throws Exception {
+        await();
+        try {
+            return task.get();
+        } catch (ExecutionException e) {
+            if (e.getCause() instanceof Exception cause) {
+                throw cause;
+            }
+            if (e.getCause() instanceof Error error) {
+                throw error;
+            }
+            throw e;
+        }
+    }
+}
