@@ -69,8 +69,9 @@ public final class RunFolder implements AutoCloseable {
                     + " folder with -o");
         }
         if (!empty && !resume) {
-            throw BadInputException.at("-o", folder + " holds the results of an earlier batch run: give --resume to"
-                    + " finish it, or choose a new folder with -o");
+            // the Spark job opens folders too and has no --resume: the advice names the command that has it
+            throw BadInputException.at("-o", folder + " holds the results of an earlier batch run: choose a new"
+                    + " folder with -o, or finish that run with 'tetrapod batch ... --resume'");
         }
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("format", FORMAT);

@@ -362,6 +362,12 @@ public final class JsonOutput {
     }
 
     private static String quote(String s) {
-        return "\"" + new String(JsonStringEncoder.getInstance().quoteAsString(s)) + "\"";
+        for (int k = 0; k < s.length(); k++) {
+            char c = s.charAt(k);
+            if (c < 0x20 || c == '"' || c == '\\') {   // what JSON must escape (RFC 8259 section 7): Jackson does it
+                return "\"" + new String(JsonStringEncoder.getInstance().quoteAsString(s)) + "\"";
+            }
+        }
+        return "\"" + s + "\"";
     }
 }

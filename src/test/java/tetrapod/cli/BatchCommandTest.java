@@ -180,7 +180,8 @@ class BatchCommandTest {
 
         CliRun refused = CliRun.of("batch", towers.toString(), "-o", out.toString(), "--scenario", wind);
         assertEquals(ExitCode.BAD_INPUT, refused.exitCode());
-        assertTrue(refused.err().contains("holds the results of an earlier batch run: give --resume"), refused.err());
+        assertTrue(refused.err().contains("holds the results of an earlier batch run: choose a new folder with -o, or finish that run"
+                + " with 'tetrapod batch ... --resume'"), refused.err());
         assertEquals(1, refused.err().lines().count(), refused.err());
 
         Path other = dir.resolve("other");

@@ -99,6 +99,23 @@ class JsonOutputTest {
         assertEquals("[\"a\\\"b\\\\c\\nd\\u0001\", \"kN·m\"]\n", JsonOutput.toJson(List.of("a\"b\\c\nd\u0001", "kN·m")));
     }
 
+    /** Keys and text quoted as Jackson's own writer quotes them (the reference), for any character. */
+    @Test
+    void keysAndTextAreQuotedAsJacksonQuotesThem() throws Exception {
+        com.fasterxml.jackson.databind.ObjectMapper jackson = new com.fasterxml.jackson.databind.ObjectMapper();
+        java.util.Random random = new java.util.Random(15);
+        for (int k = 0; k < 2000; k++) {
+            StringBuilder text = new StringBuilder();
+            for (int c = random.nextInt(12); c > 0; c--) {
+                text.append((char) (random.nextBoolean() ? random.nextInt(0x80) : random.nextInt(0x3000)));
+            }
+            String s = text.toString();
+            String quoted = jackson.writeValueAsString(s);
+            assertEquals("[" + quoted + "]\n", JsonOutput.toJson(List.of(s)), s);
+            assertEquals("{\n  " + quoted + ": 1\n}\n", JsonOutput.toJson(Map.of(s, 1)), s);
+        }
+    }
+
     @Test
     void nanAndInfinityAreRefusedNeverWritten() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
