@@ -27,9 +27,24 @@ final class SideTask<T> {
         return side;
     }
 
-    /** Waits for the work to end, without taking its outcome (for the way out of a failure elsewhere). */
-    void await() throws InterruptedException {
-        thread.join();
+    /**
+     * Waits for the work to end, without taking its outcome (for the way out of a failure elsewhere),
+     * and without giving up when interrupted: the work may be writing files the caller is about to
+     * move or delete. The interrupt is kept for the caller.
+     */
+    void await() {
+        boolean interrupted = false;
+        while (true) {
+            try {
+                thread.join();
+                break;
+            } catch (InterruptedException e) {
+                interrupted = true;
+            }
+        }
+        if (interrupted) {
+            Thread.currentThread().interrupt();
+        }
     }
 
     /** Waits for the work and returns what it returned, or throws what it threw, unwrapped. */
