@@ -93,11 +93,16 @@ class LauncherIT {
     }
 
     @Test
-    void aNewerJarIsRecordedAgainAndAnUnusableArchiveOnlySlowsTheStart() throws Exception {
+    void aNewerJarOrAnotherJavaRecordsAgainAndAnUnusableArchiveOnlySlowsTheStart() throws Exception {
         assertEquals(0, run(null, "--version").exitCode());
         Files.setLastModifiedTime(archive, FileTime.fromMillis(System.currentTimeMillis() - 60_000));
         Run rebuilt = run(null, "--version");
         assertTrue(rebuilt.err().contains("recording the classes of a run"), rebuilt.err());
+
+        Files.writeString(root.resolve("target/tetrapod.jsa.java"), "/opt/another/java 1\n");
+        Run otherJava = run(null, "--version");
+        assertTrue(otherJava.err().contains("recording the classes of a run"), "another Java: " + otherJava.err());
+        assertEquals("", run(null, "--version").err(), "the same Java again: kept");
 
         archive.toFile().setWritable(true);
         Files.write(archive, "not an archive".getBytes(StandardCharsets.UTF_8));   // newer than the jar: kept
