@@ -92,7 +92,8 @@ final class AnalyzeCommand implements Callable<Integer> {
             try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
                 result = analyse(loaded, modes, StageTimes.both(progress, watch));
             }
-            route = write(model, document(model, loaded, result), loaded, result, outputs.staging(), watch, pictures);
+            route = write(model, () -> document(model, loaded, result), loaded, result, outputs.staging(), watch,
+                    pictures);
             outputs.commit();
         }
 
@@ -139,13 +140,15 @@ final class AnalyzeCommand implements Callable<Integer> {
     }
 
     /**
-     * Writes every output of {@code document} into {@code folder}; returns the line saying what drew
-     * tower.png. The picture is drawn on a thread of its own while results.json and the CSVs are
-     * written (issue 15: the two take about the same time and share nothing but the finished results;
-     * results.json on a third thread beside the report measured slower on two cores).
+     * Writes every output of the results document into {@code folder}; returns the line saying what
+     * drew tower.png. The picture is drawn on a thread of its own while the document is made and
+     * results.json and the CSVs are written (issue 15: they take about the same time and share
+     * nothing but the finished results; results.json on a third thread beside the report measured
+     * slower on two cores).
      */
-    static String write(Path model, Map<String, Object> document, LoadedModel loaded, AnalysisResult result,
-                        Path folder, StageTimes watch, PictureRenderer pictures) throws Exception {
+    static String write(Path model, Callable<Map<String, Object>> documentOf, LoadedModel loaded,
+                        AnalysisResult result, Path folder, StageTimes watch, PictureRenderer pictures)
+            throws Exception {
         Path picture = folder.resolve("tower.png");
         SideTask<String> drawing = SideTask.start("tetrapod-picture", () -> {
             ViewData view = ResultViews.of(result, loaded.spec().checks())
@@ -153,6 +156,7 @@ final class AnalyzeCommand implements Callable<Integer> {
             return RenderCommand.write(pictures, view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
         });
         try {
+            Map<String, Object> document = documentOf.call();
             JsonOutput.write(folder.resolve("results.json"), document);
             // everything else is built from what the file holds, as 'tetrapod report' builds it from the file
             Results results = new Results(plainDocument(ResultsReader.forReport(document)));

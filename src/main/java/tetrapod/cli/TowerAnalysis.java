@@ -39,7 +39,8 @@ public final class TowerAnalysis {
             Map<String, Object> document = AnalyzeCommand.document(model, loaded, result);
             if (reportFolder.isPresent()) {
                 try (OutputFolder outputs = OutputFolder.open(reportFolder.get(), AnalyzeCommand.OUTPUTS)) {
-                    AnalyzeCommand.write(model, document, loaded, result, outputs.staging(), new StageTimes(), pictures);
+                    AnalyzeCommand.write(model, () -> document, loaded, result, outputs.staging(), new StageTimes(),
+                            pictures);
                     outputs.commit();
                 }
             }
