@@ -5,10 +5,8 @@ import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
-import java.util.stream.Stream;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -74,11 +72,7 @@ public class BatchBenchmark {
 
     @TearDown(Level.Trial)
     public void tearDown() throws IOException {
-        try (Stream<Path> all = Files.walk(dir)) {
-            for (Path p : all.sorted(Comparator.reverseOrder()).toList()) {
-                Files.delete(p);
-            }
-        }
+        ScratchFolders.delete(dir);
     }
 
     /** The batch over every tower into a new folder. */

@@ -3,12 +3,10 @@ package tetrapod.cli;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.TimeUnit;
-import java.util.stream.Stream;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -79,11 +77,7 @@ public class OutputBenchmark {
     @TearDown(Level.Trial)
     public void tearDown() throws IOException {
         openGl.close();
-        try (Stream<Path> files = Files.walk(dir)) {
-            for (Path p : files.sorted(Comparator.reverseOrder()).toList()) {
-                Files.delete(p);
-            }
-        }
+        ScratchFolders.delete(dir);
     }
 
     private RenderRequest request() {
