@@ -9,18 +9,12 @@ import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import tetrapod.common.OutputException;
+import tetrapod.testing.EndedProcess;
 
 /** One run at a time on a batch folder: its lock is held from open to close. */
 class RunFolderTest {
 
     private static final String PROGRAM = "tetrapod test";
-
-    /** The id of a process that has ended. */
-    private static long deadPid() throws Exception {
-        Process p = new ProcessBuilder("true").start();
-        p.waitFor();
-        return p.pid();
-    }
 
     @Test
     void aSecondRunIsRefusedWhileTheFirstHoldsTheFolderAndMayGoOnAfter(@TempDir Path dir) throws Exception {
@@ -43,7 +37,7 @@ class RunFolderTest {
     void aStaleLockOfAnEndedRunIsTakenOver(@TempDir Path dir) throws Exception {
         Path out = dir.resolve("run");
         Path manifest = Files.createDirectories(dir.resolve("towers"));
-        Files.writeString(dir.resolve("run.lock"), deadPid() + " 0");
+        Files.writeString(dir.resolve("run.lock"), EndedProcess.pid() + " 0");
         try (RunFolder taken = RunFolder.open(out, false, manifest, PROGRAM)) {
             assertTrue(Files.readString(dir.resolve("run.lock")).startsWith(ProcessHandle.current().pid() + " "));
         }

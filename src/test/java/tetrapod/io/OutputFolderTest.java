@@ -14,6 +14,7 @@ import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import tetrapod.common.OutputException;
+import tetrapod.testing.EndedProcess;
 
 /** One run's outputs as a unit: checked before, staged beside, swapped in whole, never mixed. */
 class OutputFolderTest {
@@ -25,13 +26,6 @@ class OutputFolderTest {
         try (Stream<Path> s = Files.list(dir)) {
             return s.map(p -> p.getFileName().toString()).sorted().toList();
         }
-    }
-
-    /** The id of a process that has ended. */
-    private static long deadPid() throws Exception {
-        Process p = new ProcessBuilder("true").start();
-        p.waitFor();
-        return p.pid();
     }
 
     @Test
@@ -88,7 +82,7 @@ class OutputFolderTest {
             assertThrows(OutputException.class, () -> OutputFiles.check(out.resolve("tower.png")),
                     "a single file is not written into a folder being replaced either");
         }
-        Files.writeString(dir.resolve("tower.lock"), deadPid() + " 0");
+        Files.writeString(dir.resolve("tower.lock"), EndedProcess.pid() + " 0");
         try (OutputFolder again = OutputFolder.open(out, OUTPUTS)) {
             again.commit();
         }
@@ -97,7 +91,7 @@ class OutputFolderTest {
 
     @Test
     void leftoversOfDeadRunsAreRemovedAndThoseOfLiveRunsKept(@TempDir Path dir) throws Exception {
-        long dead = deadPid();
+        long dead = EndedProcess.pid();
         long live = ProcessHandle.current().pid();
         Path out = Files.createDirectory(dir.resolve("tower"));
         Files.writeString(out.resolve("results.json"), "old");
@@ -118,7 +112,7 @@ class OutputFolderTest {
 
     @Test
     void aSetStrandedBetweenTheTwoRenamesIsPutBack(@TempDir Path dir) throws Exception {
-        Path old = Files.createDirectory(dir.resolve("tower.old-" + deadPid() + "-" + NONCE));
+        Path old = Files.createDirectory(dir.resolve("tower.old-" + EndedProcess.pid() + "-" + NONCE));
         Files.writeString(old.resolve("results.json"), "previous");
         Path out = dir.resolve("tower");
         try (OutputFolder set = OutputFolder.open(out, OUTPUTS)) {
