@@ -4,6 +4,7 @@ import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReferenceArray;
 import java.util.function.IntConsumer;
+import tetrapod.common.Threads;
 
 /**
  * Runs numbered tasks on a fixed number of threads and waits for all of them: inline on the
@@ -69,7 +70,9 @@ final class Workers {
         try {
             work.run();
         } finally {
-            joinAll(helpers, started);
+            for (int i = 0; i < started; i++) {
+                Threads.joinUninterruptibly(helpers[i]);   // the tasks write into the caller's arrays
+            }
         }
         for (int t = 0; t < tasks; t++) {
             Throwable e = failures.get(t);
@@ -86,23 +89,6 @@ final class Workers {
         if (finished.get() != tasks) {
             throw new IllegalStateException("a worker thread ended with " + (tasks - finished.get())
                     + " of " + tasks + " tasks unfinished");
-        }
-    }
-
-    private static void joinAll(Thread[] helpers, int started) {
-        boolean interrupted = false;
-        for (int i = 0; i < started; i++) {
-            while (true) {
-                try {
-                    helpers[i].join();
-                    break;
-                } catch (InterruptedException e) {
-                    interrupted = true;   // the tasks write into the caller's arrays: wait for them regardless
-                }
-            }
-        }
-        if (interrupted) {
-            Thread.currentThread().interrupt();
         }
     }
 }

@@ -3,6 +3,7 @@ package tetrapod.cli;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.FutureTask;
+import tetrapod.common.Threads;
 
 /**
  * Work started on a thread of its own beside the caller's, waited for by joining that thread (which
@@ -33,18 +34,7 @@ final class SideTask<T> {
      * move or delete. The interrupt is kept for the caller.
      */
     void await() {
-        boolean interrupted = false;
-        while (true) {
-            try {
-                thread.join();
-                break;
-            } catch (InterruptedException e) {
-                interrupted = true;
-            }
-        }
-        if (interrupted) {
-            Thread.currentThread().interrupt();
-        }
+        Threads.joinUninterruptibly(thread);
     }
 
     /** Waits for the work and returns what it returned, or throws what it threw, unwrapped. */

@@ -1,2 +1,2 @@
-/** Units, typed errors and the progress listener: what every other package may use. */
+/** Units, typed errors, the progress listener and waiting for threads: what every other package may use. */
 package tetrapod.common;
