@@ -14,6 +14,7 @@ import tetrapod.check.MemberEnvelope;
 import tetrapod.check.ReactionLevel;
 import tetrapod.common.BadInputException;
 import tetrapod.common.ProgressListener;
+import tetrapod.common.SideTask;
 import tetrapod.common.UnstableStructureException;
 import tetrapod.generate.Tower;
 import tetrapod.load.AzimuthWind;
@@ -113,18 +114,26 @@ public final class Analysis {
         for (LoadComponent c : basis.components()) {
             vectors.add(new LoadVector(c.name(), c.loads()));
         }
-        BasisResponses responses = BasisResponses.of(system, vectors, progress);
-
-        Pass first = pass(tower, loads, checks, model, system, basis, responses, progress, threads, 1.0, Map.of());
-        SecondOrder second = SecondOrder.of(first.cases());
-        Map<String, Double> firstOrderAlpha = new HashMap<>();
-        first.cases().forEach(c -> firstOrderAlpha.put(c.id(), c.alphaCr()));
-        Pass used = second.applied()
-                ? pass(tower, loads, checks, model, system, basis, responses, progress, threads, second.amplification(),
-                        firstOrderAlpha)
-                : first;
+        // the natural modes need only the factor and the masses: found beside the sweep and the cases in full
+        SideTask<List<NaturalMode>> modal = SideTask.start("tetrapod-modes", () -> NaturalModes.of(system, basis, modes));
+        BasisResponses responses;
+        SecondOrder second;
+        Pass used;
+        try {
+            responses = BasisResponses.of(system, vectors, progress);
+            Pass first = pass(tower, loads, checks, model, system, basis, responses, progress, threads, 1.0, Map.of());
+            second = SecondOrder.of(first.cases());
+            Map<String, Double> firstOrderAlpha = new HashMap<>();
+            first.cases().forEach(c -> firstOrderAlpha.put(c.id(), c.alphaCr()));
+            used = second.applied()
+                    ? pass(tower, loads, checks, model, system, basis, responses, progress, threads,
+                            second.amplification(), firstOrderAlpha)
+                    : first;
+        } finally {
+            modal.await();
+        }
         Sweep sweep = used.sweep();
-        List<NaturalMode> natural = NaturalModes.of(system, basis, modes);
+        List<NaturalMode> natural = modal.resultUnchecked();
         progress.progress("natural modes", 1, 1);
         ServiceabilityResult movement = null;
         if (serviceability.isPresent()) {

@@ -3,6 +3,7 @@ package tetrapod.cli;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
@@ -17,6 +18,7 @@ import tetrapod.analysis.Analysis;
 import tetrapod.analysis.AnalysisResult;
 import tetrapod.analysis.NaturalModes;
 import tetrapod.common.BadInputException;
+import tetrapod.common.SideTask;
 import tetrapod.io.DefaultedKeys;
 import tetrapod.io.JsonOutput;
 import tetrapod.io.OutputFolder;
@@ -27,8 +29,9 @@ import tetrapod.report.ReportHtml;
 import tetrapod.report.SizingHistoryFile;
 import tetrapod.report.Results;
 import tetrapod.report.ResultsDocument;
-import tetrapod.view.PictureRenderer;
 import tetrapod.view.RenderRequest;
+import tetrapod.view.RenderRoute;
+import tetrapod.view.SoftwareRenderer;
 import tetrapod.view.ViewData;
 
 /** The main job: analyse a tower under its loads and write the results. */
@@ -80,20 +83,21 @@ final class AnalyzeCommand implements Callable<Integer> {
         if (modes != null && modes < 1) {
             throw BadInputException.at("--modes", "must be at least 1, was " + modes);
         }
+        SideTask<Void> warming = SideTask.start("tetrapod-warm-2d", () -> {
+            SoftwareRenderer.warmUp();
+            return null;
+        });
         LoadedModel loaded = LoadedModel.forAnalysis(model);
         Path folder = output != null ? output : OutputFolders.forModel(model);
         AnalysisResult result;
         String route;
-        // the OpenGL context comes up on its own thread while the analysis runs (issue 15: 2 s of llvmpipe start-up)
-        try (PictureRenderer pictures = PictureRenderer.start(RenderRequest.ALL_ROUTES);
-             OutputFolder outputs = OutputFolder.open(folder, OUTPUTS)) {
-            pictures.prepare(PICTURE_WIDTH, PICTURE_HEIGHT);
+        try (OutputFolder outputs = OutputFolder.open(folder, OUTPUTS)) {
             watch.end("read, generate, loads");
             try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
                 result = analyse(loaded, modes, StageTimes.both(progress, watch));
             }
-            route = write(model, () -> document(model, loaded, result), loaded, result, outputs.staging(), watch,
-                    pictures);
+            warming.await();   // its failure, if any, is met again and reported by the picture itself
+            route = write(model, () -> document(model, loaded, result), loaded, result, outputs.staging(), watch);
             outputs.commit();
         }
 
@@ -140,36 +144,50 @@ final class AnalyzeCommand implements Callable<Integer> {
     }
 
     /**
+     * The routes tower.png is drawn by: Java2D, chosen by measurement (issue 15 item 3,
+     * docs/performance.md "The picture of analyze"): the same picture as llvmpipe's OpenGL, in a third of
+     * the time and without a context to start; {@code render} and {@code view} use OpenGL.
+     */
+    static final List<RenderRoute> PICTURE_ROUTES = List.of(RenderRoute.JAVA2D);
+
+    /**
      * Writes every output of the results document into {@code folder}; returns the line saying what
-     * drew tower.png. The picture is drawn on a thread of its own while the document is made and
-     * results.json and the CSVs are written (issue 15: they take about the same time and share
-     * nothing but the finished results; results.json on a third thread beside the report measured
-     * slower on two cores).
+     * drew tower.png. The picture and then the report are made on threads of their own while
+     * results.json and the CSVs are written (issue 15: each pair takes about the same time and they
+     * share nothing but the finished results).
      */
     static String write(Path model, Callable<Map<String, Object>> documentOf, LoadedModel loaded,
-                        AnalysisResult result, Path folder, StageTimes watch, PictureRenderer pictures)
-            throws Exception {
+                        AnalysisResult result, Path folder, StageTimes watch) throws Exception {
         Path picture = folder.resolve("tower.png");
         SideTask<String> drawing = SideTask.start("tetrapod-picture", () -> {
             ViewData view = ResultViews.of(result, loaded.spec().checks())
                     .withAncillaries(ResultViews.ancillaries(loaded.spec()));
-            return RenderCommand.write(pictures, view, RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT), picture);
+            return RenderCommand.write(view,
+                    RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT).withRoutes(PICTURE_ROUTES), picture);
         });
+        SideTask<String> reporting = null;
         try {
             Map<String, Object> document = documentOf.call();
-            JsonOutput.write(folder.resolve("results.json"), document);
             // everything else is built from what the file holds, as 'tetrapod report' builds it from the file
             Results results = new Results(plainDocument(ResultsReader.forReport(document)));
+            reporting = SideTask.start("tetrapod-report", () -> {
+                String route = drawing.result();
+                ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(Files.readAllBytes(picture)),
+                        SizingHistoryFile.matching(folder, results));
+                return route;
+            });
+            JsonOutput.write(folder.resolve("results.json"), document);
             CsvTables.writeAll(results, folder);
             watch.end("results.json, CSV");
-            String route = drawing.result();
-            watch.end("picture (the rest)");
-            ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(Files.readAllBytes(picture)),
-                    SizingHistoryFile.matching(folder, results));
-            watch.end("report");
+            String route = reporting.result();
+            watch.end("picture, report (the rest)");
             return route;
         } finally {
-            drawing.await();   // nothing may still write into the folder once this returns or throws
+            // nothing may still write into the folder once this returns or throws
+            drawing.await();
+            if (reporting != null) {
+                reporting.await();
+            }
         }
     }
 }

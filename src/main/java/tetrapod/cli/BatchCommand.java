@@ -22,8 +22,6 @@ import tetrapod.batch.SummaryParquet;
 import tetrapod.batch.SummaryRow;
 import tetrapod.batch.SummaryTable;
 import tetrapod.common.BadInputException;
-import tetrapod.view.PictureRenderer;
-import tetrapod.view.RenderRequest;
 
 /** Fleet re-checks: many towers under many scenarios, each analysed exactly as analyze does it. */
 @Command(name = "batch", mixinStandardHelpOptions = true,
@@ -76,11 +74,10 @@ final class BatchCommand implements Callable<Integer> {
         String program = new Version().getVersion()[0];
         List<SummaryRow> rows;
         try (RunFolder folder = RunFolder.open(output, resume, manifest, program)) {
-            try (PictureRenderer pictures = reports ? PictureRenderer.start(RenderRequest.ALL_ROUTES) : null;
-                 ProgressBars progress = ProgressBars.forCommand(quiet)) {
+            try (ProgressBars progress = ProgressBars.forCommand(quiet)) {
                 rows = FleetRun.run(towers, patches, folder, pool, reports, program,
                         (model, reportFolder, link) -> TowerAnalysis.analyse(model, FleetPlan.shown(output, model),
-                                reportFolder, link, pictures),
+                                reportFolder, link),
                         progress);
             }
             SummaryTable.write(output.resolve(SummaryTable.FILE), rows);

@@ -12,7 +12,6 @@ import tetrapod.batch.ResultFigures;
 import tetrapod.common.ProgressListener;
 import tetrapod.io.OutputFolder;
 import tetrapod.report.Results;
-import tetrapod.view.PictureRenderer;
 
 /**
  * One tower × scenario of a fleet run analysed exactly as {@code analyze} does it, for the plain
@@ -28,19 +27,18 @@ public final class TowerAnalysis {
      * {@code shown} (the file the row stands for, wherever its bytes were analysed).
      */
     public static Outcome outcome(Path model, String shown) {
-        return analyse(model, shown, Optional.empty(), null, null);
+        return analyse(model, shown, Optional.empty(), null);
     }
 
     /** As {@link #outcome}, also writing analyze's outputs into {@code reportFolder} when given ({@code link} names it). */
-    static Outcome analyse(Path model, String shown, Optional<Path> reportFolder, String link, PictureRenderer pictures) {
+    static Outcome analyse(Path model, String shown, Optional<Path> reportFolder, String link) {
         try {
             LoadedModel loaded = LoadedModel.forAnalysis(model);
             AnalysisResult result = AnalyzeCommand.analyse(loaded, null, ProgressListener.NONE);
             Map<String, Object> document = AnalyzeCommand.document(model, loaded, result);
             if (reportFolder.isPresent()) {
                 try (OutputFolder outputs = OutputFolder.open(reportFolder.get(), AnalyzeCommand.OUTPUTS)) {
-                    AnalyzeCommand.write(model, () -> document, loaded, result, outputs.staging(), new StageTimes(),
-                            pictures);
+                    AnalyzeCommand.write(model, () -> document, loaded, result, outputs.staging(), new StageTimes());
                     outputs.commit();
                 }
             }

@@ -157,13 +157,7 @@ public final class CriticalLoad {
          */
         boolean advance(double[] w, double[] g) {
             double[] kw = g;
-            for (int pass = 0; pass < 2; pass++) {                    // full reorthogonalisation, twice
-                for (int i = 0; i <= j; i++) {
-                    double c = SparseKernels.dot(kv.get(i), w);
-                    axpy(-c, v.get(i), w);
-                    axpy(-c, kv.get(i), kw);
-                }
-            }
+            reorthogonalise(w, kw);
             beta[j] = Math.sqrt(Math.max(SparseKernels.dot(w, kw), 0));
             scale = Math.max(scale, beta[j]);
             boolean exhausted = beta[j] <= 1e-14 * Math.max(Math.abs(alpha[j]), Double.MIN_NORMAL) || j + 1 == steps;
@@ -178,6 +172,38 @@ public final class CriticalLoad {
             kv.add(scaled(kw, 1 / beta[j]));
             j++;
             return false;
+        }
+
+        /**
+         * Full reorthogonalisation, twice: for every i ≤ j, c = kv_i · w, then w −= c v_i and
+         * kw −= c kv_i. One pass over the vectors per i: the next product is summed in the same loop
+         * as the subtractions, element by element in the order a dot product of its own takes, from
+         * the w they leave, so every bit is as in three separate loops.
+         */
+        private void reorthogonalise(double[] w, double[] kw) {
+            int n = w.length;
+            double c = SparseKernels.dot(kv.get(0), w);
+            for (int pass = 0; pass < 2; pass++) {
+                for (int i = 0; i <= j; i++) {
+                    double[] vi = v.get(i);
+                    double[] kvi = kv.get(i);
+                    if (pass == 1 && i == j) {
+                        for (int e = 0; e < n; e++) {
+                            w[e] -= c * vi[e];
+                            kw[e] -= c * kvi[e];
+                        }
+                        return;
+                    }
+                    double[] next = kv.get(i < j ? i + 1 : 0);
+                    double sum = 0;
+                    for (int e = 0; e < n; e++) {
+                        w[e] -= c * vi[e];
+                        kw[e] -= c * kvi[e];
+                        sum += next[e] * w[e];
+                    }
+                    c = sum;
+                }
+            }
         }
 
         /** α_cr = 1/μ; tension alone: no positive μ beyond the round-off of the largest tension ones. */
@@ -224,12 +250,6 @@ public final class CriticalLoad {
             out[e] = factor * x[e];
         }
         return out;
-    }
-
-    private static void axpy(double a, double[] x, double[] y) {
-        for (int e = 0; e < x.length; e++) {
-            y[e] += a * x[e];
-        }
     }
 
     /** −K_G on the free DOFs, both triangles, line by line ({@link GeometricLines}). */

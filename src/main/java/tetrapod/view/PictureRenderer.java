@@ -30,8 +30,6 @@ public final class PictureRenderer implements AutoCloseable {
     private final ExecutorService glThread;
     private final Future<Opened> opening;
     private final List<String> drawFailures = new ArrayList<>();
-    /** A framebuffer made ahead of the first draw by {@link #prepare}; touched on the OpenGL thread only. */
-    private OffscreenTarget prepared;
 
     private PictureRenderer(List<RenderRoute> routes) {
         this.routes = List.copyOf(routes);
@@ -50,23 +48,6 @@ public final class PictureRenderer implements AutoCloseable {
         }
         LwjglMessages.silence();
         return new PictureRenderer(routes);
-    }
-
-    /**
-     * Makes the framebuffer of a {@code width} × {@code height} image on the OpenGL thread, after
-     * the context, and clears it once: llvmpipe allocates and first touches its multisampled
-     * storage then (about 0.25 s at 1600 × 1200), so that the first draw need not.
-     */
-    public void prepare(int width, int height) {
-        glThread.submit(() -> {
-            if (opened().context() != null && prepared == null) {
-                prepared = new OffscreenTarget(width, height, SAMPLES);
-                org.lwjgl.opengl.GL33C.glClear(org.lwjgl.opengl.GL33C.GL_COLOR_BUFFER_BIT
-                        | org.lwjgl.opengl.GL33C.GL_DEPTH_BUFFER_BIT);
-                org.lwjgl.opengl.GL33C.glFinish();
-            }
-            return null;
-        });
     }
 
     /** Draws one image of {@code data} as {@code request} says, and frees everything. */
@@ -95,11 +76,6 @@ public final class PictureRenderer implements AutoCloseable {
                     new LabelPainter(height));
             try {
                 BufferedImage image = glThread.submit(() -> {
-                    if (prepared != null && prepared.width == width && prepared.height == height) {
-                        prepared.bind();
-                        opened.renderer().draw(scene, camera, width, height, overlay);
-                        return prepared.read();
-                    }
                     try (OffscreenTarget target = new OffscreenTarget(width, height, SAMPLES)) {
                         opened.renderer().draw(scene, camera, width, height, overlay);
                         return target.read();
@@ -168,10 +144,6 @@ public final class PictureRenderer implements AutoCloseable {
         try {
             glThread.submit(() -> {
                 Opened o = opened();
-                if (prepared != null) {
-                    prepared.close();
-                    prepared = null;
-                }
                 if (o.context() != null) {
                     o.renderer().close();
                     o.context().close();

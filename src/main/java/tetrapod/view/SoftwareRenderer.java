@@ -43,6 +43,30 @@ public final class SoftwareRenderer {
         return image;
     }
 
+    /**
+     * Draws a small throw-away image the way {@link #render} draws (an antialiased fill, a label in
+     * the platform's font) and finds the PNG writer: Java loads and sets up all three on first use,
+     * about 0.2 s on a 2-core machine, which a spare core can do while the caller reads and analyses
+     * the model (issue 15).
+     */
+    public static void warmUp() {
+        BufferedImage image = new BufferedImage(64, 48, BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = LabelPainter.graphics(image);
+        try {
+            Path2D.Double path = new Path2D.Double();
+            path.moveTo(1.5, 1.5);
+            path.lineTo(40.2, 3.7);
+            path.lineTo(38.1, 30.4);
+            path.closePath();
+            g.setColor(Scene.BACKGROUND.awt());
+            g.fill(path);
+            g.drawImage(new LabelPainter(image.getHeight()).text("0.5", LabelStyle.INFO), 0, 0, null);
+        } finally {
+            g.dispose();
+        }
+        javax.imageio.ImageIO.getImageWritersByFormatName("png").hasNext();
+    }
+
     /** Paints every instance of {@code batches}, farthest first. */
     private static void paintSorted(Graphics2D g, Projector projector, List<SegmentInstances> batches) {
         int total = 0;

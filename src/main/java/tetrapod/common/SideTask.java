@@ -1,16 +1,15 @@
-package tetrapod.cli;
+package tetrapod.common;
 
 import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.FutureTask;
-import tetrapod.common.Threads;
 
 /**
  * Work started on a thread of its own beside the caller's, waited for by joining that thread (which
  * ends whatever the work throws, an OutOfMemoryError included), its result or failure then taken
  * as if the caller had done the work itself.
  */
-final class SideTask<T> {
+public final class SideTask<T> {
 
     private final FutureTask<T> task;
     private final Thread thread;
@@ -22,7 +21,7 @@ final class SideTask<T> {
     }
 
     /** Starts {@code work} now on a daemon thread named {@code name}. */
-    static <T> SideTask<T> start(String name, Callable<T> work) {
+    public static <T> SideTask<T> start(String name, Callable<T> work) {
         SideTask<T> side = new SideTask<>(name, work);
         side.thread.start();
         return side;
@@ -33,12 +32,12 @@ final class SideTask<T> {
      * and without giving up when interrupted: the work may be writing files the caller is about to
      * move or delete. The interrupt is kept for the caller.
      */
-    void await() {
+    public void await() {
         Threads.joinUninterruptibly(thread);
     }
 
     /** Waits for the work and returns what it returned, or throws what it threw, unwrapped. */
-    T result() throws Exception {
+    public T result() throws Exception {
         await();
         try {
             return task.get();
@@ -50,6 +49,17 @@ final class SideTask<T> {
                 throw error;
             }
             throw e;
+        }
+    }
+
+    /** As {@link #result}, for work that throws no checked exception. */
+    public T resultUnchecked() {
+        try {
+            return result();
+        } catch (RuntimeException e) {
+            throw e;
+        } catch (Exception e) {
+            throw new IllegalStateException(thread.getName() + ": " + e.getMessage(), e);
         }
     }
 }

@@ -1,4 +1,4 @@
-package tetrapod.cli;
+package tetrapod.common;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertSame;
