@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.atomic.AtomicInteger;
 import tetrapod.check.Extreme;
 import tetrapod.check.FoundationCheck;
 import tetrapod.check.FoundationEnvelope;
@@ -253,21 +254,23 @@ public final class Analysis {
         }
         int groups = Math.max(Math.min(threads, open.size()), (open.size() + ALPHA_BLOCK - 1) / ALPHA_BLOCK);
         int size = groups == 0 ? 0 : (open.size() + groups - 1) / groups;
-        for (int round = 0; round < groups; round += threads) {
-            int first = round;
-            int inRound = Math.min(threads, groups - round);
-            workers.run(inRound, t -> {
-                List<Integer> mine = open.subList(Math.min(open.size(), (first + t) * size),
-                        Math.min(open.size(), (first + t + 1) * size));
-                List<double[]> axial = new ArrayList<>(mine.size());
-                mine.forEach(k -> axial.add(work[k].axial));
-                double[] alpha = CriticalLoad.factors(system, axial);
-                for (int i = 0; i < mine.size(); i++) {
-                    work[mine.get(i)].alphaCr = alpha[i];
-                }
-            });
-            progress.progress(solving, Math.min(open.size(), (round + inRound) * size), open.size());
-        }
+        // every group taken by the next free thread (the first groups run cold, and slower); progress
+        // told from this thread only, as listeners are not thread-safe
+        Thread caller = Thread.currentThread();
+        AtomicInteger found = new AtomicInteger();
+        workers.run(groups, g -> {
+            List<Integer> mine = open.subList(Math.min(open.size(), g * size), Math.min(open.size(), (g + 1) * size));
+            List<double[]> axial = new ArrayList<>(mine.size());
+            mine.forEach(k -> axial.add(work[k].axial));
+            double[] alpha = CriticalLoad.factors(system, axial);
+            for (int i = 0; i < mine.size(); i++) {
+                work[mine.get(i)].alphaCr = alpha[i];
+            }
+            int done = found.addAndGet(mine.size());
+            if (Thread.currentThread() == caller) {
+                progress.progress(solving, done, open.size());
+            }
+        });
         List<SolvedCase> out = new ArrayList<>(count);
         for (InFull w : work) {
             out.add(w.result());

@@ -160,8 +160,7 @@ final class AnalyzeCommand implements Callable<Integer> {
                         AnalysisResult result, Path folder, StageTimes watch) throws Exception {
         Path picture = folder.resolve("tower.png");
         SideTask<String> drawing = SideTask.start("tetrapod-picture", () -> {
-            ViewData view = ResultViews.of(result, loaded.spec().checks())
-                    .withAncillaries(ResultViews.ancillaries(loaded.spec()));
+            ViewData view = ResultViews.envelopeOf(result).withAncillaries(ResultViews.ancillaries(loaded.spec()));
             return RenderCommand.write(view,
                     RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT).withRoutes(PICTURE_ROUTES), picture);
         });

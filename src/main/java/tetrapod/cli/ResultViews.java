@@ -69,6 +69,16 @@ final class ResultViews {
         return new ViewData(frame, cases, Colouring.UTILISATION);
     }
 
+    /**
+     * The envelope of {@code result} alone, coloured by utilisation: what tower.png shows, without
+     * the cases solved in full that only the viewer steps through (their checks took a third of the
+     * picture's time).
+     */
+    static ViewData envelopeOf(AnalysisResult result) {
+        Frame frame = result.tower().frame();
+        return new ViewData(frame, List.of(envelope(frame, result)), Colouring.UTILISATION);
+    }
+
     private static ViewCase envelope(Frame frame, AnalysisResult result) {
         Map<Integer, MemberEnvelope> byId = new HashMap<>();
         result.members().forEach(e -> byId.put(e.member(), e));

@@ -120,6 +120,9 @@ class LauncherIT {
         assertTrue(chosen.out().contains("-XX:TieredStopAtLevel=1"), chosen.out());
         assertTrue(chosen.out().contains("-XX:+UseSerialGC"), chosen.out());
         assertTrue(chosen.out().contains("-XX:SharedArchiveFile="), chosen.out());
+        Path hugePages = Path.of("/sys/kernel/mm/transparent_hugepage/enabled");
+        boolean offered = Files.isReadable(hugePages) && Files.readString(hugePages).matches("(?s).*\\[(madvise|always)].*");
+        assertEquals(offered, chosen.out().contains("-XX:+UseTransparentHugePages"), chosen.out());
 
         Run own = run("-XX:+UseParallelGC -XX:TieredStopAtLevel=4 -XX:+PrintCommandLineFlags", "--version");
         assertEquals(0, own.exitCode(), own.err());
