@@ -26,12 +26,14 @@ final class StageTimes implements ProgressListener {
     }
 
     void print(PrintWriter out) {
+        int width = lastReport.keySet().stream().mapToInt(String::length).reduce(22, Math::max);
+        String line = "  %-" + width + "s %8.3f s%n";
         long previous = start;
         for (Map.Entry<String, Long> e : lastReport.entrySet()) {
-            out.printf(Locale.ROOT, "  %-22s %8.3f s%n", e.getKey(), (e.getValue() - previous) / 1e9);
+            out.printf(Locale.ROOT, line, e.getKey(), (e.getValue() - previous) / 1e9);
             previous = e.getValue();
         }
-        out.printf(Locale.ROOT, "  %-22s %8.3f s%n", "total", (previous - start) / 1e9);
+        out.printf(Locale.ROOT, line, "total", (previous - start) / 1e9);
     }
 
     /** A listener that tells both {@code a} and {@code b}. */

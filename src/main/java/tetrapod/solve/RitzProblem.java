@@ -19,8 +19,9 @@ record RitzProblem(double[] values, double[][] vectors) {
             if (!(d > 0)) {
                 throw new IllegalStateException("subspace iteration: the vectors lost independence");
             }
+            double[] vk = mass.vector(k);
             for (int r = 0; r < q; r++) {
-                t[k][r] = mass.vector(k)[r] / Math.sqrt(d);
+                t[k][r] = vk[r] / Math.sqrt(d);
             }
         }
         double[] a = new double[q * q];
@@ -41,10 +42,11 @@ record RitzProblem(double[] values, double[][] vectors) {
         double[][] vectors = new double[q][q];
         for (int k = 0; k < q; k++) {
             values[k] = eig.value(k);
+            double[] zk = eig.vector(k);
             for (int r = 0; r < q; r++) {
                 double s = 0;
                 for (int i = 0; i < q; i++) {
-                    s += t[i][r] * eig.vector(k)[i];
+                    s += t[i][r] * zk[i];
                 }
                 vectors[k][r] = s;
             }
