@@ -65,7 +65,7 @@ final class OverlayLayout {
                 if (label.anchor() instanceof LabelAnchor.AtPoint at && (label.style() == LabelStyle.REACTION) == reactions) {
                     PlacedImage p = atPoint(painter.text(label.text(), label.style()), at, projector, s);
                     if (p != null) {
-                        placed.add(free(p, placed, gap));
+                        placed.add(free(p, placed, gap, projector.height()));
                     }
                 }
             }
@@ -93,13 +93,17 @@ final class OverlayLayout {
         return new PlacedImage(image, (int) Math.round(x), (int) Math.round(y));
     }
 
-    /** {@code p}, or {@code p} moved up or down to the nearest place where it covers none of {@code placed}. */
-    private static PlacedImage free(PlacedImage p, List<PlacedImage> placed, int gap) {
+    /**
+     * {@code p}, or {@code p} moved up or down to the nearest place on an image {@code height} px
+     * high where it is whole and covers none of {@code placed}; where there is none, {@code p}.
+     */
+    private static PlacedImage free(PlacedImage p, List<PlacedImage> placed, int gap, int height) {
         int step = p.image().getHeight() / 2 + gap;
         for (int k = 0; k <= 2 * MAX_SHIFTS; k++) {
             int dy = (k % 2 == 0 ? 1 : -1) * ((k + 1) / 2) * step;
             PlacedImage moved = new PlacedImage(p.image(), p.x(), p.y() + dy);
-            if (placed.stream().noneMatch(q -> overlap(moved, q, gap))) {
+            boolean whole = moved.y() >= 0 && moved.y() + moved.image().getHeight() <= height;
+            if (whole && placed.stream().noneMatch(q -> overlap(moved, q, gap))) {
                 return moved;
             }
         }

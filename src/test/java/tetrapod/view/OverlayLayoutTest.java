@@ -55,6 +55,30 @@ class OverlayLayoutTest {
     }
 
     /**
+     * A label moved off a taken place stays on the image: five labels at the tower's top, which the
+     * framing puts near the image's upper edge, are all drawn whole (one was pushed above the edge).
+     */
+    @Test
+    void labelsMovedToAFreePlaceStayOnTheImage() {
+        ViewData data = ViewData.geometryOnly(frame, OptionalDouble.empty());
+        Vec3 top = frame.nodes().get(frame.nodes().size() - 1).position();
+        List<SceneLabel> same = new ArrayList<>();
+        for (int k = 0; k < 5; k++) {
+            same.add(new SceneLabel("ladder " + k, LabelStyle.REACTION,
+                    new LabelAnchor.AtPoint(top, 0, -40, LabelAnchor.Align.LEFT)));
+        }
+        Scene scene = SceneBuilder.build(data, SceneOptions.defaults(data)).withLabels(same);
+        for (int[] size : new int[][] {{1600, 1200}, {640, 480}}) {
+            List<PlacedImage> placed = layout(scene, size[0], size[1]);
+            assertEquals(List.of(), overlaps(placed), size[0] + "x" + size[1]);
+            for (PlacedImage p : placed) {
+                assertTrue(p.y() >= 0 && p.y() + p.image().getHeight() <= size[1],
+                        size[0] + "x" + size[1] + ": a label at y " + p.y() + ", " + p.image().getHeight() + " px high");
+            }
+        }
+    }
+
+    /**
      * The window's overlays (caption, legend, help with the status line stacked above it, the axis
      * triad's letters, the picked member's box, the wind label) never cover one another, in the
      * first view and after orbiting, zooming and panning (issue 16 item 8).
