@@ -6,7 +6,6 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
@@ -152,9 +151,9 @@ final class AnalyzeCommand implements Callable<Integer> {
 
     /**
      * Writes every output of the results document into {@code folder}; returns the line saying what
-     * drew tower.png. The picture and then the report are made on threads of their own while
-     * results.json and the CSVs are written (issue 15: each pair takes about the same time and they
-     * share nothing but the finished results).
+     * drew tower.png. The picture and the report are made on threads of their own while
+     * results.json and the CSVs are written, the report taking the picture only when the rest of it
+     * is written (issue 15: they share nothing but the finished results).
      */
     static String write(Path model, Callable<Map<String, Object>> documentOf, LoadedModel loaded,
                         AnalysisResult result, Path folder, StageTimes watch) throws Exception {
@@ -170,10 +169,11 @@ final class AnalyzeCommand implements Callable<Integer> {
             // everything else is built from what the file holds, as 'tetrapod report' builds it from the file
             Results results = new Results(plainDocument(ResultsReader.forReport(document)));
             reporting = SideTask.start("tetrapod-report", () -> {
-                String route = drawing.result();
-                ReportHtml.write(folder.resolve(ReportHtml.FILE), results, Optional.of(Files.readAllBytes(picture)),
-                        SizingHistoryFile.matching(folder, results));
-                return route;
+                ReportHtml.write(folder.resolve(ReportHtml.FILE), results, () -> {
+                    drawing.result();
+                    return Files.readAllBytes(picture);
+                }, SizingHistoryFile.matching(folder, results));
+                return drawing.result();
             });
             JsonOutput.write(folder.resolve("results.json"), document);
             CsvTables.writeAll(results, folder);

@@ -1,13 +1,18 @@
 package tetrapod.report;
 
+import java.io.BufferedOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
+import java.io.Writer;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Base64;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.Callable;
 import tetrapod.io.AtomicFiles;
 
 /**
@@ -47,7 +52,13 @@ public final class ReportHtml {
 
     private static void build(Html out, Results results, Optional<byte[]> towerPng,
                               Optional<Map<String, Object>> sizingHistory) {
-        ReportInput input = new ReportInput(results, towerPng, sizingHistory);
+        build(out, new ReportInput(results, towerPng.map(png -> Base64.getEncoder().encodeToString(png)),
+                sizingHistory));
+    }
+
+    private static void build(Html out, ReportInput input) {
+        Results results = input.results();
+        Optional<Map<String, Object>> sizingHistory = input.sizingHistory();
         List<Section> sections = sections(sizingHistory.isPresent());
         String title = "Tower calculation: " + results.name();
         TitleBlock titleBlock = new TitleBlock(results);
@@ -99,6 +110,35 @@ public final class ReportHtml {
             });
         } catch (UncheckedIOException e) {
             throw e.getCause();
+        }
+    }
+
+    /**
+     * As {@link #write(Path, Results, Optional, Optional)} with a picture still being drawn: the page
+     * is written to a scratch file beside {@code file} with the picture's place marked, and only then
+     * is {@code towerPng} asked for the picture and the page copied into {@code file} with the picture
+     * in its place (the same bytes as with the picture given at once; issue 15: the report is made
+     * while the picture is drawn).
+     */
+    public static void write(Path file, Results results, Callable<byte[]> towerPng,
+                             Optional<Map<String, Object>> sizingHistory) throws Exception {
+        Path page = Files.createTempFile(file.toAbsolutePath().getParent(), ".report-", ".part");
+        try {
+            try (Writer writer = Files.newBufferedWriter(page, StandardCharsets.UTF_8)) {
+                Html out = new Html(writer);
+                build(out, new ReportInput(results, Optional.of(PictureFill.PLACE), sizingHistory));
+                out.flush();
+            }
+            String picture = Base64.getEncoder().encodeToString(towerPng.call());
+            AtomicFiles.writeStream(file, stream -> {
+                try (InputStream in = Files.newInputStream(page)) {
+                    BufferedOutputStream buffered = new BufferedOutputStream(stream, 1 << 16);
+                    PictureFill.copy(in, buffered, picture);
+                    buffered.flush();
+                }
+            });
+        } finally {
+            Files.deleteIfExists(page);
         }
     }
 

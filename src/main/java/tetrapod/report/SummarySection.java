@@ -1,7 +1,6 @@
 package tetrapod.report;
 
 import java.util.ArrayList;
-import java.util.Base64;
 import java.util.List;
 import java.util.Map;
 import tetrapod.report.Rows.CheckRow;
@@ -55,9 +54,9 @@ final class SummarySection implements Section {
                 swept ? r.sweepStepDeg().map(s -> "; every combination with wind swept round the tower in steps of "
                         + Format.degrees(s) + "°").orElse("") : "; no wind"));
 
-        input.towerPng().ifPresent(png -> out.open("figure", "class=\"picture\" id=\"fig-tower\"")
+        input.towerPngBase64().ifPresent(png -> out.open("figure", "class=\"picture\" id=\"fig-tower\"")
                 .raw("<img alt=\"3D view of the tower, members coloured by governing utilisation\" src=\"data:image/png;base64,")
-                .raw(Base64.getEncoder().encodeToString(png)).raw("\">")
+                .raw(png).raw("\">")
                 .element("figcaption", "The tower in 3D, each member coloured by its governing utilisation over every "
                         + "case. The arrows at the leg bases are the forces the supports exert on each leg (vertical and "
                         + "horizontal) in the case of that leg's largest compression, as in the table of leg base reactions.")
