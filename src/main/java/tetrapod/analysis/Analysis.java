@@ -115,8 +115,10 @@ public final class Analysis {
         for (LoadComponent c : basis.components()) {
             vectors.add(new LoadVector(c.name(), c.loads()));
         }
-        // the natural modes need only the factor and the masses: found beside the sweep and the cases in full
-        SideTask<List<NaturalMode>> modal = SideTask.start("tetrapod-modes", () -> NaturalModes.of(system, basis, modes));
+        // the natural modes need only the factor and the masses: found beside the sweep and the cases in
+        // full when there is more than one thread
+        SideTask<List<NaturalMode>> modal = threads > 1
+                ? SideTask.start("tetrapod-modes", () -> NaturalModes.of(system, basis, modes)) : null;
         BasisResponses responses;
         SecondOrder second;
         Pass used;
@@ -131,10 +133,12 @@ public final class Analysis {
                             second.amplification(), firstOrderAlpha)
                     : first;
         } finally {
-            modal.await();
+            if (modal != null) {
+                modal.await();
+            }
         }
         Sweep sweep = used.sweep();
-        List<NaturalMode> natural = modal.resultUnchecked();
+        List<NaturalMode> natural = modal != null ? modal.resultUnchecked() : NaturalModes.of(system, basis, modes);
         progress.progress("natural modes", 1, 1);
         ServiceabilityResult movement = null;
         if (serviceability.isPresent()) {
