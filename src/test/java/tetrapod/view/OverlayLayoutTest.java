@@ -41,14 +41,7 @@ class OverlayLayoutTest {
     /** The test can fail: labels anchored at one point are spread apart, not drawn on top of each other. */
     @Test
     void labelsAtOnePointAreSpreadApart() {
-        ViewData data = ViewData.geometryOnly(frame, OptionalDouble.empty());
-        Vec3 top = frame.nodes().get(frame.nodes().size() - 1).position();
-        List<SceneLabel> same = new ArrayList<>();
-        for (int k = 0; k < 5; k++) {
-            same.add(new SceneLabel("Fz = 100.0 kN", LabelStyle.REACTION,
-                    new LabelAnchor.AtPoint(top, 0, 0, LabelAnchor.Align.CENTRE)));
-        }
-        Scene scene = SceneBuilder.build(data, SceneOptions.defaults(data)).withLabels(same);
+        Scene scene = fiveLabelsAtTheTop(k -> "Fz = 100.0 kN", 0, LabelAnchor.Align.CENTRE);
         List<PlacedImage> placed = layout(scene, 1600, 1200);
         assertTrue(placed.size() >= 5);
         assertEquals(List.of(), overlaps(placed));
@@ -60,14 +53,7 @@ class OverlayLayoutTest {
      */
     @Test
     void labelsMovedToAFreePlaceStayOnTheImage() {
-        ViewData data = ViewData.geometryOnly(frame, OptionalDouble.empty());
-        Vec3 top = frame.nodes().get(frame.nodes().size() - 1).position();
-        List<SceneLabel> same = new ArrayList<>();
-        for (int k = 0; k < 5; k++) {
-            same.add(new SceneLabel("ladder " + k, LabelStyle.REACTION,
-                    new LabelAnchor.AtPoint(top, 0, -40, LabelAnchor.Align.LEFT)));
-        }
-        Scene scene = SceneBuilder.build(data, SceneOptions.defaults(data)).withLabels(same);
+        Scene scene = fiveLabelsAtTheTop(k -> "ladder " + k, -40, LabelAnchor.Align.LEFT);
         for (int[] size : new int[][] {{1600, 1200}, {640, 480}}) {
             List<PlacedImage> placed = layout(scene, size[0], size[1]);
             assertEquals(List.of(), overlaps(placed), size[0] + "x" + size[1]);
@@ -111,6 +97,17 @@ class OverlayLayoutTest {
                 assertEquals(List.of(), overlaps(placed), move + ", turned " + yaw);
             }
         }
+    }
+
+    /** The frame by role with five reaction-style labels at its top node, {@code dy} reference px off it. */
+    private Scene fiveLabelsAtTheTop(java.util.function.IntFunction<String> text, double dy, LabelAnchor.Align align) {
+        ViewData data = ViewData.geometryOnly(frame, OptionalDouble.empty());
+        Vec3 top = frame.nodes().get(frame.nodes().size() - 1).position();
+        List<SceneLabel> labels = new ArrayList<>();
+        for (int k = 0; k < 5; k++) {
+            labels.add(new SceneLabel(text.apply(k), LabelStyle.REACTION, new LabelAnchor.AtPoint(top, 0, dy, align)));
+        }
+        return SceneBuilder.build(data, SceneOptions.defaults(data)).withLabels(labels);
     }
 
     private static List<PlacedImage> layout(Scene scene, int width, int height) {
