@@ -14,9 +14,9 @@ import java.nio.IntBuffer;
  */
 final class OffscreenTarget implements AutoCloseable {
 
-    final int width;
-    final int height;
-    final int samples;
+    private final int width;
+    private final int height;
+    private final int samples;
     private final int msFbo;
     private final int msColour;
     private final int msDepth;
