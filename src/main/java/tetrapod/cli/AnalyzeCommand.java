@@ -163,7 +163,7 @@ final class AnalyzeCommand implements Callable<Integer> {
             return RenderCommand.write(view,
                     RenderRequest.of(view, PICTURE_WIDTH, PICTURE_HEIGHT).withRoutes(PICTURE_ROUTES), picture);
         });
-        SideTask<String> reporting = null;
+        SideTask<Void> reporting = null;
         try {
             Map<String, Object> document = documentOf.call();
             // everything else is built from what the file holds, as 'tetrapod report' builds it from the file
@@ -173,14 +173,14 @@ final class AnalyzeCommand implements Callable<Integer> {
                     drawing.result();
                     return Files.readAllBytes(picture);
                 }, SizingHistoryFile.matching(folder, results));
-                return drawing.result();
+                return null;
             });
             JsonOutput.write(folder.resolve("results.json"), document);
             CsvTables.writeAll(results, folder);
             watch.end("results.json, CSV");
-            String route = reporting.result();
+            reporting.result();   // a picture that failed fails the report too, with the same error
             watch.end("picture, report (the rest)");
-            return route;
+            return drawing.result();
         } finally {
             // nothing may still write into the folder once this returns or throws
             drawing.await();
